@@ -1,0 +1,45 @@
+//! Speed of the planning core: one real-gas content evaluation, one inverse solve,
+//! and whole team plans (the app recomputes on every key press).
+
+use criterion::{Criterion, criterion_group, criterion_main};
+use std::hint::black_box;
+use turnsheet::formats::team_file::TeamFile;
+use turnsheet::plan::{ContentModel, Mix, Pressure, RealGasModel, Temperature, Volume, plan_team};
+
+fn benches(c: &mut Criterion) {
+    let model = RealGasModel::new(Mix::trimix(0.21, 0.35), Temperature::from_celsius(12.0));
+    c.bench_function("real_gas_content", |b| {
+        b.iter(|| {
+            model.content(
+                black_box(Volume::from_litres(24.0)),
+                black_box(Pressure::from_bar(232.0)),
+            )
+        })
+    });
+    c.bench_function("real_gas_inverse", |b| {
+        b.iter(|| {
+            model.pressure_for(
+                black_box(Volume::from_litres(24.0)),
+                black_box(Volume::from_litres(3000.0)),
+            )
+        })
+    });
+    let text = include_str!("../examples/hollowmere-team.json");
+    let team = TeamFile::parse(text).unwrap().to_input().unwrap();
+    c.bench_function("plan_team_3_divers", |b| {
+        b.iter(|| plan_team(black_box(&team)).unwrap())
+    });
+    let mut six = team.clone();
+    let extra = six.divers.clone();
+    for (i, mut d) in extra.into_iter().enumerate() {
+        d.name = format!("{} 2", d.name);
+        d.start = Pressure::from_bar(d.start.bar() - 10.0 * i as f64);
+        six.divers.push(d);
+    }
+    c.bench_function("plan_team_6_divers", |b| {
+        b.iter(|| plan_team(black_box(&six)).unwrap())
+    });
+}
+
+criterion_group!(planning, benches);
+criterion_main!(planning);

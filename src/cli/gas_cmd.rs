@@ -1,0 +1,105 @@
+//! `turnsheet gas`: content of a cylinder under both models, and temperature change.
+
+use serde::Serialize;
+
+use crate::plan::error::{InputError, check_range};
+use crate::plan::temperature::pressure_after_temperature_change;
+use crate::plan::{ContentModel, HandModel, Mix, Pressure, RealGasModel, Temperature, Volume};
+
+use super::PressureUnit;
+
+pub struct GasArgs {
+    pub litres: f64,
+    pub pressure: f64,
+    pub unit: PressureUnit,
+    pub o2: f64,
+    pub he: f64,
+    pub temp: f64,
+    pub to_temp: Option<f64>,
+    pub json: bool,
+}
+
+#[derive(Serialize, Debug)]
+pub struct GasJson {
+    pub mix: String,
+    pub content_l: f64,
+    pub content_hand_l: f64,
+    pub pressure_after: Option<f64>,
+    pub pressure_after_ideal: Option<f64>,
+    pub unit: String,
+}
+
+pub fn run(a: &GasArgs) -> Result<String, InputError> {
+    check_range("--litres", a.litres, 0.5, 120.0, "L")?;
+    let (p, unit) = match a.unit {
+        PressureUnit::Bar => (Pressure::from_bar(a.pressure), "bar"),
+        PressureUnit::Psi => (Pressure::from_psi(a.pressure), "psi"),
+    };
+    if !(p.bar() > 0.0 && p.bar() <= 400.0) {
+        return Err(InputError::new(
+            "--pressure",
+            format!(
+                "must be above 0 and at most 400 bar (5801 psi); got {} {unit}",
+                a.pressure
+            ),
+        ));
+    }
+    check_range("--o2", a.o2, 5.0, 100.0, "%")?;
+    check_range("--he", a.he, 0.0, 95.0, "%")?;
+    if a.o2 + a.he > 100.0 {
+        return Err(InputError::new("--he", "O2 + He is above 100 %"));
+    }
+    check_range("--temp", a.temp, -20.0, 60.0, "°C")?;
+    if let Some(t) = a.to_temp {
+        check_range("--to-temp", t, -20.0, 60.0, "°C")?;
+    }
+    let mix = Mix {
+        o2: a.o2 / 100.0,
+        he: a.he / 100.0,
+    };
+    let w = Volume::from_litres(a.litres);
+    let real = RealGasModel::new(mix, Temperature::from_celsius(a.temp)).content(w, p);
+    let hand = HandModel.content(w, p);
+    let after = a.to_temp.map(|t2| {
+        pressure_after_temperature_change(
+            mix,
+            p,
+            Temperature::from_celsius(a.temp),
+            Temperature::from_celsius(t2),
+        )
+    });
+    let in_unit = |p: Pressure| match a.unit {
+        PressureUnit::Bar => p.bar(),
+        PressureUnit::Psi => p.psi(),
+    };
+    let out = GasJson {
+        mix: mix.label(),
+        content_l: (real.litres() * 1000.0).round() / 1000.0,
+        content_hand_l: (hand.litres() * 1000.0).round() / 1000.0,
+        pressure_after: after.map(|c| (in_unit(c.real) * 1000.0).round() / 1000.0),
+        pressure_after_ideal: after.map(|c| (in_unit(c.ideal) * 1000.0).round() / 1000.0),
+        unit: unit.to_string(),
+    };
+    if a.json {
+        return Ok(serde_json::to_string_pretty(&out).unwrap_or_default() + "\n");
+    }
+    let mut s = format!(
+        "{} L of {} at {} {unit}, {} °C:\n  real gas (GERG-2008): {:.0} L free gas ({:.1} cu ft)\n  tank factor:          {:.0} L free gas ({:.1} cu ft)\n",
+        a.litres,
+        out.mix,
+        a.pressure,
+        a.temp,
+        real.litres().floor(),
+        real.cuft(),
+        hand.litres().floor(),
+        hand.cuft()
+    );
+    if let (Some(c), Some(t2)) = (after, a.to_temp) {
+        s.push_str(&format!(
+            "  at {t2} °C: {:.0} {unit} (real gas); {:.0} {unit} (ideal gas)\n",
+            in_unit(c.real).floor(),
+            in_unit(c.ideal).floor()
+        ));
+    }
+    Ok(s)
+}

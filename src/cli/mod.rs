@@ -1,0 +1,116 @@
+//! The command line: `plan` prints a team's turn pressures, `gas` a cylinder's contents.
+//! Exit codes: 0 ok, 2 bad input (the message names the field).
+
+pub mod gas_cmd;
+pub mod plan_cmd;
+pub mod plan_report;
+
+use clap::{Parser, Subcommand};
+
+/// Exit code for bad input.
+pub const EXIT_BAD_INPUT: i32 = 2;
+
+#[derive(Parser, Debug)]
+#[command(
+    name = "turnsheet",
+    version,
+    about = "Team turn pressures for overhead dives with dissimilar cylinders, matched on gas volume.",
+    long_about = "Team turn pressures for overhead dives with dissimilar cylinders, matched on gas volume.\n\n\
+Without a command, opens the app. Every turn pressure shown is the higher (more conservative) of a \
+real-gas (GERG-2008) and a tank-factor calculation, rounded up to the team's gauge step.\n\n\
+A planning aid for trained divers: team protocol, training standards and local rules come first. \
+Check the numbers by hand. No warranty."
+)]
+pub struct Cli {
+    #[command(subcommand)]
+    pub command: Option<Command>,
+}
+
+#[derive(Subcommand, Debug)]
+pub enum Command {
+    /// Plan a team from a team file and print each diver's turn pressure.
+    ///
+    /// Team file (JSON; pressures, gauge step, depth and SAC in the team's units):
+    /// {"units": "metric"|"imperial", "rule": "thirds", "gauge_step": 10, "water_temp": 20,
+    ///  "depth": 30, "water": "fresh"|"salt",
+    ///  "divers": [{"name": "…", "cylinders": {"count": 2, "water_l": 12, "working_bar": 232},
+    ///              "mix": {"o2": 0.32, "he": 0.0}, "start": 220, "sac": 18}]}
+    /// Cylinders may instead be {"count": 2, "rated_cuft": 80, "rated_psi": 3000}.
+    /// water_temp is °C (metric) or °F (imperial); mix defaults to air; unknown keys are errors.
+    Plan {
+        /// The team file (JSON).
+        team: std::path::PathBuf,
+        /// Print machine-readable JSON instead of a table.
+        #[arg(long)]
+        json: bool,
+    },
+    /// Gas content of a cylinder (both models), and its pressure after a temperature change.
+    Gas {
+        /// Water capacity in litres (all cylinders of the set together).
+        #[arg(long)]
+        litres: f64,
+        /// Gauge pressure, in --unit.
+        #[arg(long)]
+        pressure: f64,
+        /// Pressure unit.
+        #[arg(long, value_enum, default_value_t = PressureUnit::Bar)]
+        unit: PressureUnit,
+        /// Oxygen, percent.
+        #[arg(long, default_value_t = 21.0)]
+        o2: f64,
+        /// Helium, percent.
+        #[arg(long, default_value_t = 0.0)]
+        he: f64,
+        /// Gas temperature now, °C.
+        #[arg(long, default_value_t = 20.0)]
+        temp: f64,
+        /// Predict the pressure once the gas reaches this temperature, °C.
+        #[arg(long)]
+        to_temp: Option<f64>,
+        /// Print machine-readable JSON.
+        #[arg(long)]
+        json: bool,
+    },
+}
+
+#[derive(clap::ValueEnum, Clone, Copy, Debug, PartialEq, Eq)]
+pub enum PressureUnit {
+    Bar,
+    Psi,
+}
+
+/// Run a parsed command; returns the process exit code.
+pub fn run(command: Command) -> i32 {
+    let result = match command {
+        Command::Plan { team, json } => plan_cmd::run(&team, json),
+        Command::Gas {
+            litres,
+            pressure,
+            unit,
+            o2,
+            he,
+            temp,
+            to_temp,
+            json,
+        } => gas_cmd::run(&gas_cmd::GasArgs {
+            litres,
+            pressure,
+            unit,
+            o2,
+            he,
+            temp,
+            to_temp,
+            json,
+        }),
+    };
+    match result {
+        Ok(text) => {
+            print!("{text}");
+            0
+        }
+        Err(e) => {
+            eprintln!("turnsheet: {e}");
+            EXIT_BAD_INPUT
+        }
+    }
+}

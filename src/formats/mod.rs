@@ -1,0 +1,4 @@
+//! File formats (serde types and their conversion to the planning core).
+//! No I/O here: callers read and write the text.
+
+pub mod team_file;

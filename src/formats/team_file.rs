@@ -1,0 +1,236 @@
+//! The team file: a team's inputs in the team's own units, as JSON.
+//! Unknown keys are errors, so a typo never silently drops a value.
+
+use serde::{Deserialize, Serialize};
+
+use crate::plan::error::InputError;
+use crate::plan::{CylinderSet, CylinderSpec, DiverInput, Mix, Rule, TeamInput, UnitSystem, Water};
+
+#[derive(Clone, Debug, PartialEq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct TeamFile {
+    pub units: UnitSystem,
+    #[serde(default = "default_rule")]
+    pub rule: String,
+    /// In the team's pressure unit; defaults to 10 bar / 100 psi.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub gauge_step: Option<f64>,
+    /// °C for metric, °F for imperial; defaults to 20 °C / 68 °F.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub water_temp: Option<f64>,
+    /// m for metric, ft for imperial.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub depth: Option<f64>,
+    #[serde(default)]
+    pub water: Water,
+    pub divers: Vec<DiverFile>,
+}
+
+fn default_rule() -> String {
+    "thirds".to_string()
+}
+
+#[derive(Clone, Debug, PartialEq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct DiverFile {
+    pub name: String,
+    pub cylinders: CylindersFile,
+    #[serde(default)]
+    pub mix: Mix,
+    /// Start pressure read in the water, in the team's pressure unit.
+    pub start: f64,
+    /// Surface breathing rate in L/min (metric) or cu ft/min (imperial).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub sac: Option<f64>,
+}
+
+#[derive(Clone, Debug, PartialEq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct CylindersFile {
+    #[serde(default = "one")]
+    pub count: u8,
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub water_l: Option<f64>,
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub working_bar: Option<f64>,
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub rated_cuft: Option<f64>,
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub rated_psi: Option<f64>,
+}
+
+fn one() -> u8 {
+    1
+}
+
+impl CylindersFile {
+    pub fn from_set(set: &CylinderSet) -> Self {
+        let mut f = CylindersFile {
+            count: set.count,
+            water_l: None,
+            working_bar: None,
+            rated_cuft: None,
+            rated_psi: None,
+        };
+        match set.spec {
+            CylinderSpec::Stamped {
+                water_l,
+                working_bar,
+            } => {
+                f.water_l = Some(water_l);
+                f.working_bar = Some(working_bar);
+            }
+            CylinderSpec::Rated {
+                rated_cuft,
+                rated_psi,
+            } => {
+                f.rated_cuft = Some(rated_cuft);
+                f.rated_psi = Some(rated_psi);
+            }
+        }
+        f
+    }
+
+    pub fn to_set(&self, field: &str) -> Result<CylinderSet, InputError> {
+        let spec = match (
+            self.water_l,
+            self.working_bar,
+            self.rated_cuft,
+            self.rated_psi,
+        ) {
+            (Some(water_l), Some(working_bar), None, None) => CylinderSpec::Stamped {
+                water_l,
+                working_bar,
+            },
+            (None, None, Some(rated_cuft), Some(rated_psi)) => CylinderSpec::Rated {
+                rated_cuft,
+                rated_psi,
+            },
+            _ => {
+                return Err(InputError::new(
+                    field,
+                    "give either water_l and working_bar, or rated_cuft and rated_psi",
+                ));
+            }
+        };
+        Ok(CylinderSet {
+            count: self.count,
+            spec,
+        })
+    }
+}
+
+impl TeamFile {
+    /// Parse JSON text; syntax errors and unknown keys name the place.
+    pub fn parse(text: &str) -> Result<TeamFile, InputError> {
+        serde_json::from_str(text).map_err(|e| InputError::new("team file", e.to_string()))
+    }
+
+    /// Convert to planning inputs (ranges are checked by `TeamInput::validate`).
+    pub fn to_input(&self) -> Result<TeamInput, InputError> {
+        let u = self.units;
+        let rule = Rule::parse(&self.rule).ok_or_else(|| {
+            InputError::new(
+                "rule",
+                format!(
+                    "unknown rule '{}'; allowed: halves, thirds, quarters, fifths, sixths",
+                    self.rule
+                ),
+            )
+        })?;
+        let divers = self
+            .divers
+            .iter()
+            .enumerate()
+            .map(|(i, d)| {
+                Ok(DiverInput {
+                    name: d.name.clone(),
+                    cylinders: d.cylinders.to_set(&format!("divers[{i}].cylinders"))?,
+                    mix: d.mix,
+                    start: u.pressure(d.start),
+                    sac_l_per_min: d.sac.map(|s| u.volume(s).litres()),
+                })
+            })
+            .collect::<Result<Vec<_>, InputError>>()?;
+        Ok(TeamInput {
+            units: u,
+            rule,
+            gauge_step: self.gauge_step.unwrap_or(u.default_gauge_step()),
+            water_temp: u.temperature(self.water_temp.unwrap_or(match u {
+                UnitSystem::Metric => 20.0,
+                UnitSystem::Imperial => 68.0,
+            })),
+            depth: self.depth.map(|d| u.depth(d)),
+            water: self.water,
+            divers,
+        })
+    }
+
+    /// The file form of planning inputs.
+    pub fn from_input(t: &TeamInput) -> TeamFile {
+        let u = t.units;
+        TeamFile {
+            units: u,
+            rule: t.rule.name().to_string(),
+            gauge_step: Some(t.gauge_step),
+            water_temp: Some(round6(u.temperature_value(t.water_temp))),
+            depth: t.depth.map(|d| {
+                round6(match u {
+                    UnitSystem::Metric => d.metres(),
+                    UnitSystem::Imperial => d.feet(),
+                })
+            }),
+            water: t.water,
+            divers: t
+                .divers
+                .iter()
+                .map(|d| DiverFile {
+                    name: d.name.clone(),
+                    cylinders: CylindersFile::from_set(&d.cylinders),
+                    mix: d.mix,
+                    start: round6(u.pressure_value(d.start)),
+                    sac: d
+                        .sac_l_per_min
+                        .map(|s| round6(u.volume_value(crate::plan::Volume::from_litres(s)))),
+                })
+                .collect(),
+        }
+    }
+}
+
+fn round6(x: f64) -> f64 {
+    (x * 1e6).round() / 1e6
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    const TEXT: &str = r#"{"units":"imperial","rule":"quarters","gauge_step":100,"water_temp":68,"depth":90,"water":"salt",
+      "divers":[{"name":"A","cylinders":{"count":2,"rated_cuft":80,"rated_psi":3000},"start":3000,"sac":0.6},
+                {"name":"B","cylinders":{"count":1,"water_l":12,"working_bar":232},"mix":{"o2":0.32,"he":0},"start":3300}]}"#;
+
+    #[test]
+    fn round_trips_through_input() {
+        let f = TeamFile::parse(TEXT).unwrap();
+        let input = f.to_input().unwrap();
+        assert_eq!(input.rule, Rule::Quarters);
+        let back = TeamFile::from_input(&input);
+        assert_eq!(back.to_input().unwrap(), input);
+        assert_eq!(back.divers[0].sac, Some(0.6));
+    }
+
+    #[test]
+    fn unknown_key_is_an_error() {
+        let e =
+            TeamFile::parse(&TEXT.replace("\"water\":\"salt\"", "\"watr\":\"salt\"")).unwrap_err();
+        assert!(e.message.contains("watr"), "{e}");
+    }
+
+    #[test]
+    fn half_a_cylinder_spec_is_an_error() {
+        let t = TEXT.replace("\"rated_psi\":3000", "\"working_bar\":200");
+        let e = TeamFile::parse(&t).unwrap().to_input().unwrap_err();
+        assert_eq!(e.field, "divers[0].cylinders");
+    }
+}

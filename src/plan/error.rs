@@ -1,0 +1,62 @@
+//! Input errors that name the field and the allowed range.
+
+/// A rejected input: which field, and why (with the allowed range).
+#[derive(Clone, Debug, PartialEq)]
+pub struct InputError {
+    /// Where the value sits, e.g. `divers[1].start` or `gauge_step`.
+    pub field: String,
+    /// What is wrong and what is allowed.
+    pub message: String,
+}
+
+impl InputError {
+    pub fn new(field: impl Into<String>, message: impl Into<String>) -> Self {
+        InputError {
+            field: field.into(),
+            message: message.into(),
+        }
+    }
+}
+
+impl std::fmt::Display for InputError {
+    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+        write!(f, "{}: {}", self.field, self.message)
+    }
+}
+
+impl std::error::Error for InputError {}
+
+/// Check that `value` is a finite number within `lo..=hi`.
+pub fn check_range(
+    field: &str,
+    value: f64,
+    lo: f64,
+    hi: f64,
+    unit: &str,
+) -> Result<(), InputError> {
+    if !value.is_finite() {
+        return Err(InputError::new(field, "must be a number"));
+    }
+    if value < lo || value > hi {
+        return Err(InputError::new(
+            field,
+            format!(
+                "{} {unit} is out of range; allowed {} to {} {unit}",
+                fmt_num(value),
+                fmt_num(lo),
+                fmt_num(hi)
+            ),
+        ));
+    }
+    Ok(())
+}
+
+/// A number without needless decimals.
+pub fn fmt_num(x: f64) -> String {
+    if (x - x.round()).abs() < 1e-9 {
+        format!("{}", x.round() as i64)
+    } else {
+        let s = format!("{x:.2}");
+        s.trim_end_matches('0').trim_end_matches('.').to_string()
+    }
+}

@@ -1,0 +1,25 @@
+//! The planning core: units, gas models, cylinders and the team plan.
+//! Pure Rust: no user interface, no file or network I/O.
+
+pub mod catalogue;
+pub mod cylinders;
+pub mod error;
+pub mod gas_model;
+pub mod matching;
+pub mod mix;
+pub mod out_of_gas;
+pub mod real_gas;
+pub mod rule;
+pub mod team;
+pub mod temperature;
+pub mod units;
+
+pub use cylinders::{CylinderSet, CylinderSpec};
+pub use error::InputError;
+pub use gas_model::{ContentModel, HandModel, ModelKind};
+pub use matching::{DiverPlan, TeamPlan, plan_team};
+pub use mix::Mix;
+pub use real_gas::RealGasModel;
+pub use rule::Rule;
+pub use team::{DiverInput, TeamInput};
+pub use units::{Depth, Pressure, Temperature, UnitSystem, Volume, Water};

@@ -1,0 +1,86 @@
+//! The out-of-gas check: for every pair of divers, can the donor's remaining gas
+//! bring both out if the other loses everything at the turn?
+
+use super::units::Volume;
+
+/// Result of the pairwise check.
+#[derive(Clone, Debug, PartialEq)]
+pub struct StressCheck {
+    /// Smallest margin over all ordered pairs; infinite when nobody spends gas.
+    /// A margin of N means the donor's gas covers both exits at up to N× normal breathing.
+    pub margin: f64,
+    /// (failing diver, donor) of the worst pair.
+    pub worst_pair: Option<(usize, usize)>,
+}
+
+/// margin(i fails, j donates) = (content_j − used_j) / (used_i + used_j), minimised over i ≠ j.
+pub fn stress_check(contents: &[Volume], used: &[Volume]) -> StressCheck {
+    let mut margin = f64::INFINITY;
+    let mut worst_pair = None;
+    for i in 0..contents.len() {
+        for j in 0..contents.len() {
+            if i == j {
+                continue;
+            }
+            let need = used[i].litres() + used[j].litres();
+            if need <= 0.0 {
+                continue;
+            }
+            let m = (contents[j].litres() - used[j].litres()) / need;
+            if m < margin {
+                margin = m;
+                worst_pair = Some((i, j));
+            }
+        }
+    }
+    StressCheck { margin, worst_pair }
+}
+
+/// The margin rounded DOWN to hundredths, for display.
+pub fn margin_for_display(margin: f64) -> f64 {
+    (margin * 100.0 + 1e-7).floor() / 100.0
+}
+
+/// One sentence saying what the margin means for this team.
+pub fn describe_margin(check: &StressCheck, names: &[String]) -> String {
+    match check.worst_pair {
+        None => "No gas is spent before the turn, so there is nothing to share.".to_string(),
+        Some((fail, donor)) => {
+            let m = margin_for_display(check.margin);
+            let tail = if m < 1.0 {
+                " That is less than a normal-breathing exit: do not dive this plan."
+            } else if m < 1.5 {
+                " Stressed breathing of 1.5–2× normal is common; consider a stricter rule."
+            } else {
+                ""
+            };
+            format!(
+                "Worst case: {} out of gas at the turn, sharing with {}. The reserve covers both exits at up to {:.2}× normal breathing.{}",
+                names[fail], names[donor], m, tail
+            )
+        }
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn identical_divers_on_thirds_have_margin_one() {
+        // Domain notes: used = content/3 for both gives (C − C/3)/(2C/3) = 1.
+        let c = vec![Volume::from_litres(3000.0); 2];
+        let u = vec![Volume::from_litres(1000.0); 2];
+        let s = stress_check(&c, &u);
+        assert!((s.margin - 1.0).abs() < 1e-12);
+        assert_eq!(margin_for_display(0.99999999999), 1.0);
+        assert_eq!(margin_for_display(1.239), 1.23);
+    }
+
+    #[test]
+    fn nothing_used_is_infinite() {
+        let c = vec![Volume::from_litres(3000.0); 3];
+        let u = vec![Volume::ZERO; 3];
+        assert!(stress_check(&c, &u).margin.is_infinite());
+    }
+}

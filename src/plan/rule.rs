@@ -1,0 +1,88 @@
+//! Gas rules: the fraction of each diver's gas the team may spend before turning.
+
+use serde::{Deserialize, Serialize};
+
+#[derive(Clone, Copy, Debug, PartialEq, Eq, Serialize, Deserialize, Default)]
+#[serde(rename_all = "lowercase")]
+pub enum Rule {
+    /// One half: an open-water rule, not for overhead environments.
+    Halves,
+    /// One third: the usual minimum in overhead environments.
+    #[default]
+    Thirds,
+    Quarters,
+    Fifths,
+    Sixths,
+}
+
+impl Rule {
+    pub const ALL: [Rule; 5] = [
+        Rule::Halves,
+        Rule::Thirds,
+        Rule::Quarters,
+        Rule::Fifths,
+        Rule::Sixths,
+    ];
+
+    /// The fraction of gas the team may spend going in.
+    pub fn fraction(self) -> f64 {
+        1.0 / f64::from(self.denominator())
+    }
+
+    pub fn denominator(self) -> u8 {
+        match self {
+            Rule::Halves => 2,
+            Rule::Thirds => 3,
+            Rule::Quarters => 4,
+            Rule::Fifths => 5,
+            Rule::Sixths => 6,
+        }
+    }
+
+    pub fn name(self) -> &'static str {
+        match self {
+            Rule::Halves => "halves",
+            Rule::Thirds => "thirds",
+            Rule::Quarters => "quarters",
+            Rule::Fifths => "fifths",
+            Rule::Sixths => "sixths",
+        }
+    }
+
+    pub fn parse(s: &str) -> Option<Rule> {
+        Rule::ALL
+            .into_iter()
+            .find(|r| r.name().eq_ignore_ascii_case(s.trim()))
+    }
+
+    /// Whether the rule is meant for overhead environments at all.
+    pub fn fit_for_overhead(self) -> bool {
+        self != Rule::Halves
+    }
+
+    /// The guaranteed out-of-gas stress margin of the rule: (1 − f) / (2f).
+    pub fn guaranteed_margin(self) -> f64 {
+        let f = self.fraction();
+        (1.0 - f) / (2.0 * f)
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn margins_follow_the_fraction() {
+        // Domain notes: thirds 1.0, quarters 1.5, sixths 2.5.
+        assert!((Rule::Thirds.guaranteed_margin() - 1.0).abs() < 1e-12);
+        assert!((Rule::Quarters.guaranteed_margin() - 1.5).abs() < 1e-12);
+        assert!((Rule::Sixths.guaranteed_margin() - 2.5).abs() < 1e-12);
+    }
+
+    #[test]
+    fn parse_names() {
+        assert_eq!(Rule::parse("Thirds"), Some(Rule::Thirds));
+        assert_eq!(Rule::parse("sevenths"), None);
+        assert!(!Rule::Halves.fit_for_overhead());
+    }
+}

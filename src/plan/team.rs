@@ -1,0 +1,296 @@
+//! A team's planning inputs, in the team's own units, and their validation.
+
+use super::cylinders::{CylinderSet, CylinderSpec};
+use super::error::{InputError, check_range, fmt_num};
+use super::gas_model::ModelKind;
+use super::mix::Mix;
+use super::rule::Rule;
+use super::units::{Depth, Pressure, Temperature, UnitSystem, Water};
+
+pub const MIN_DIVERS: usize = 2;
+pub const MAX_DIVERS: usize = 6;
+pub const MAX_CYLINDERS: u8 = 4;
+pub const MAX_START_BAR: f64 = 400.0;
+/// Highest start pressure as a multiple of working pressure. Cave fills of
+/// low-pressure steel run about 1.36× (common practice).
+pub const MAX_FILL_RATIO: f64 = 1.5;
+pub const MIN_WATER_L: f64 = 0.5;
+pub const MAX_WATER_L: f64 = 30.0;
+/// Below this share of working pressure a start pressure draws a low-fill warning.
+pub const LOW_FILL_RATIO: f64 = 0.5;
+
+/// One diver's inputs.
+#[derive(Clone, Debug, PartialEq)]
+pub struct DiverInput {
+    pub name: String,
+    pub cylinders: CylinderSet,
+    pub mix: Mix,
+    /// Start pressure read in the water (gauge).
+    pub start: Pressure,
+    /// Surface breathing rate, free litres per minute.
+    pub sac_l_per_min: Option<f64>,
+}
+
+/// A team's inputs.
+#[derive(Clone, Debug, PartialEq)]
+pub struct TeamInput {
+    pub units: UnitSystem,
+    pub rule: Rule,
+    /// Gauge step the team reads, in the team's pressure unit.
+    pub gauge_step: f64,
+    pub water_temp: Temperature,
+    pub depth: Option<Depth>,
+    pub water: Water,
+    pub divers: Vec<DiverInput>,
+}
+
+impl TeamInput {
+    /// Reject every out-of-range value with an error naming the field.
+    pub fn validate(&self) -> Result<(), InputError> {
+        let u = self.units;
+        let punit = u.pressure_label();
+        if self.divers.len() < MIN_DIVERS || self.divers.len() > MAX_DIVERS {
+            return Err(InputError::new(
+                "divers",
+                format!(
+                    "a team has {MIN_DIVERS} to {MAX_DIVERS} divers; this one has {}",
+                    self.divers.len()
+                ),
+            ));
+        }
+        let max_step = match u {
+            UnitSystem::Metric => 50.0,
+            UnitSystem::Imperial => 500.0,
+        };
+        if !(self.gauge_step.is_finite() && self.gauge_step > 0.0) {
+            return Err(InputError::new(
+                "gauge_step",
+                format!("must be above 0 {punit}; allowed up to {max_step} {punit}"),
+            ));
+        }
+        check_range("gauge_step", self.gauge_step, 0.0, max_step, punit)?;
+        let (tlo, thi) = (
+            u.temperature_value(Temperature::from_celsius(-2.0)),
+            u.temperature_value(Temperature::from_celsius(40.0)),
+        );
+        check_range(
+            "water_temp",
+            u.temperature_value(self.water_temp),
+            tlo.floor(),
+            thi.ceil(),
+            u.temperature_label(),
+        )?;
+        if let Some(d) = self.depth {
+            let hi = match u {
+                UnitSystem::Metric => 300.0,
+                UnitSystem::Imperial => 1000.0,
+            };
+            let v = match u {
+                UnitSystem::Metric => d.metres(),
+                UnitSystem::Imperial => d.feet(),
+            };
+            check_range("depth", v, 0.0, hi, u.depth_label())?;
+        }
+        for (i, d) in self.divers.iter().enumerate() {
+            validate_diver(u, i, d)?;
+        }
+        Ok(())
+    }
+
+    /// Non-fatal observations about the inputs.
+    pub fn warnings(&self) -> Vec<String> {
+        let mut w = Vec::new();
+        if !self.rule.fit_for_overhead() {
+            w.push(
+                "Halves is an open-water rule; it leaves no reserve for a teammate in an overhead environment."
+                    .to_string(),
+            );
+        }
+        for d in &self.divers {
+            let wp = d.cylinders.working_pressure();
+            let u = self.units;
+            if d.start.bar() > wp.bar() * 1.000_001 {
+                w.push(format!(
+                    "{}: start {} {} is above the working pressure {} {}; check the fill and the cylinder's rating.",
+                    d.name,
+                    fmt_num(u.pressure_value(d.start).round()),
+                    u.pressure_label(),
+                    fmt_num(u.pressure_value(wp).round()),
+                    u.pressure_label()
+                ));
+            } else if d.start.bar() < wp.bar() * LOW_FILL_RATIO {
+                w.push(format!(
+                    "{}: start {} {} is under half the working pressure; a low fill leaves little to share.",
+                    d.name,
+                    fmt_num(u.pressure_value(d.start).round()),
+                    u.pressure_label()
+                ));
+            }
+        }
+        w
+    }
+}
+
+pub(crate) fn validate_cylinders(
+    units: UnitSystem,
+    field: &str,
+    set: &CylinderSet,
+) -> Result<(), InputError> {
+    if set.count < 1 || set.count > MAX_CYLINDERS {
+        return Err(InputError::new(
+            format!("{field}.count"),
+            format!(
+                "{} cylinders is out of range; allowed 1 to {MAX_CYLINDERS}",
+                set.count
+            ),
+        ));
+    }
+    match set.spec {
+        CylinderSpec::Stamped {
+            water_l,
+            working_bar,
+        } => {
+            check_range(
+                &format!("{field}.water_l"),
+                water_l,
+                MIN_WATER_L,
+                MAX_WATER_L,
+                "L",
+            )?;
+            check_range(
+                &format!("{field}.working_bar"),
+                working_bar,
+                50.0,
+                MAX_START_BAR,
+                "bar",
+            )?;
+        }
+        CylinderSpec::Rated {
+            rated_cuft,
+            rated_psi,
+        } => {
+            check_range(
+                &format!("{field}.rated_cuft"),
+                rated_cuft,
+                5.0,
+                400.0,
+                "cu ft",
+            )?;
+            check_range(
+                &format!("{field}.rated_psi"),
+                rated_psi,
+                700.0,
+                5800.0,
+                "psi",
+            )?;
+            let w = set.spec.water_per_cylinder(ModelKind::Real).litres();
+            if !(MIN_WATER_L..=MAX_WATER_L).contains(&w) {
+                return Err(InputError::new(
+                    format!("{field}.rated_cuft"),
+                    format!(
+                        "{} cu ft at {} psi means {:.1} L of water per cylinder; allowed {MIN_WATER_L} to {MAX_WATER_L} L",
+                        fmt_num(rated_cuft),
+                        fmt_num(rated_psi),
+                        w
+                    ),
+                ));
+            }
+        }
+    }
+    let _ = units;
+    Ok(())
+}
+
+pub(crate) fn validate_mix(field: &str, mix: &Mix) -> Result<(), InputError> {
+    check_range(&format!("{field}.o2"), mix.o2, 0.05, 1.0, "(fraction)")?;
+    check_range(&format!("{field}.he"), mix.he, 0.0, 0.95, "(fraction)")?;
+    if mix.o2 + mix.he > 1.0 + 1e-9 {
+        return Err(InputError::new(
+            format!("{field}.he"),
+            format!(
+                "O2 {:.0} % + He {:.0} % is above 100 %",
+                mix.o2 * 100.0,
+                mix.he * 100.0
+            ),
+        ));
+    }
+    Ok(())
+}
+
+fn validate_diver(u: UnitSystem, i: usize, d: &DiverInput) -> Result<(), InputError> {
+    let f = format!("divers[{i}]");
+    let name = d.name.trim();
+    if name.is_empty() || name.chars().count() > 24 {
+        return Err(InputError::new(
+            format!("{f}.name"),
+            "a name of 1 to 24 characters is needed",
+        ));
+    }
+    validate_cylinders(u, &format!("{f}.cylinders"), &d.cylinders)?;
+    validate_mix(&format!("{f}.mix"), &d.mix)?;
+    validate_start(
+        u,
+        &format!("{f}.start"),
+        d.start,
+        d.cylinders.working_pressure(),
+    )?;
+    if let Some(sac) = d.sac_l_per_min {
+        let (v, lo, hi) = match u {
+            UnitSystem::Metric => (sac, 3.0, 100.0),
+            UnitSystem::Imperial => (sac / super::units::LITRES_PER_CUFT, 0.1, 3.5),
+        };
+        check_range(
+            &format!("{f}.sac"),
+            v,
+            lo,
+            hi,
+            &format!("{}/min", u.volume_label()),
+        )?;
+    }
+    Ok(())
+}
+
+/// Check a start pressure against zero, 400 bar and 1.5× the working pressure.
+pub fn validate_start(
+    u: UnitSystem,
+    field: &str,
+    start: Pressure,
+    working: Pressure,
+) -> Result<(), InputError> {
+    let unit = u.pressure_label();
+    let v = u.pressure_value(start);
+    if !v.is_finite() {
+        return Err(InputError::new(field, "must be a number"));
+    }
+    if start.bar() <= 0.0 {
+        return Err(InputError::new(
+            field,
+            format!(
+                "{} {unit} is not a fill; the start pressure must be above 0",
+                fmt_num(v)
+            ),
+        ));
+    }
+    let cap = working.bar() * MAX_FILL_RATIO;
+    if start.bar() > cap + 1e-9 {
+        return Err(InputError::new(
+            field,
+            format!(
+                "{} {unit} is above 1.5 × the working pressure ({} {unit})",
+                fmt_num(v.round()),
+                fmt_num(u.pressure_value(Pressure::from_bar(cap)).floor())
+            ),
+        ));
+    }
+    if start.bar() > MAX_START_BAR + 1e-9 {
+        return Err(InputError::new(
+            field,
+            format!(
+                "{} {unit} is above the highest pressure planned for ({} {unit})",
+                fmt_num(v.round()),
+                fmt_num(u.pressure_value(Pressure::from_bar(MAX_START_BAR)).floor())
+            ),
+        ));
+    }
+    Ok(())
+}

@@ -1,0 +1,146 @@
+//! The app's three files in one directory.
+
+use std::collections::HashSet;
+use std::path::{Path, PathBuf};
+
+use super::atomic::{ReadOutcome, read_json, write_json};
+use super::locker::{LOCKER_SCHEMA, LockerFile};
+use super::settings::{SETTINGS_SCHEMA, Settings};
+use super::team_state::{TEAM_SCHEMA, TeamState};
+
+pub const LOCKER_FILE: &str = "locker.json";
+pub const SETTINGS_FILE: &str = "settings.json";
+pub const TEAM_FILE: &str = "last-team.json";
+
+/// What loading found, for the app to show.
+#[derive(Debug, Default, Clone, PartialEq)]
+pub struct LoadReport {
+    /// One line per file that was set aside, naming where it was kept.
+    pub messages: Vec<String>,
+    /// No settings file was found: this is a first launch.
+    pub first_launch: bool,
+}
+
+/// Reads and writes the app's files. A file that could not be moved aside is never written.
+#[derive(Debug)]
+pub struct Store {
+    dir: PathBuf,
+    blocked: HashSet<&'static str>,
+}
+
+pub struct Loaded {
+    pub locker: LockerFile,
+    pub settings: Settings,
+    pub team: Option<TeamState>,
+    pub report: LoadReport,
+}
+
+impl Store {
+    pub fn new(dir: impl Into<PathBuf>) -> Self {
+        Store {
+            dir: dir.into(),
+            blocked: HashSet::new(),
+        }
+    }
+
+    pub fn dir(&self) -> &Path {
+        &self.dir
+    }
+
+    pub fn load(&mut self) -> Loaded {
+        let mut report = LoadReport::default();
+        let locker = self
+            .take(LOCKER_FILE, LOCKER_SCHEMA, "cylinder locker", &mut report)
+            .unwrap_or_default();
+        let settings_path = self.dir.join(SETTINGS_FILE);
+        report.first_launch = !settings_path.exists();
+        let settings = self
+            .take(SETTINGS_FILE, SETTINGS_SCHEMA, "settings", &mut report)
+            .unwrap_or_default();
+        let team = self.take(TEAM_FILE, TEAM_SCHEMA, "last team", &mut report);
+        Loaded {
+            locker,
+            settings,
+            team,
+            report,
+        }
+    }
+
+    fn take<T: serde::de::DeserializeOwned>(
+        &mut self,
+        name: &'static str,
+        schema: u32,
+        what: &str,
+        report: &mut LoadReport,
+    ) -> Option<T> {
+        let path = self.dir.join(name);
+        match read_json::<T>(&path, schema) {
+            ReadOutcome::Missing => None,
+            ReadOutcome::Loaded(v) => Some(v),
+            ReadOutcome::SetAside { kept_as, reason } => {
+                if kept_as == path {
+                    self.blocked.insert(name);
+                    report.messages.push(format!(
+                        "The {what} file could not be read ({reason}). It was left untouched and will not be overwritten."
+                    ));
+                } else {
+                    report.messages.push(format!(
+                        "The {what} file could not be read ({reason}). It was kept as {} and the app started without it.",
+                        kept_as.display()
+                    ));
+                }
+                None
+            }
+        }
+    }
+
+    fn save<T: serde::Serialize>(&self, name: &'static str, value: &T) -> Result<(), String> {
+        if self.blocked.contains(name) {
+            return Err(format!(
+                "{name} is not saved: the unreadable file is kept in its place"
+            ));
+        }
+        write_json(&self.dir.join(name), value).map_err(|e| format!("could not save {name}: {e}"))
+    }
+
+    pub fn save_locker(&self, locker: &LockerFile) -> Result<(), String> {
+        self.save(LOCKER_FILE, locker)
+    }
+    pub fn save_settings(&self, settings: &Settings) -> Result<(), String> {
+        self.save(SETTINGS_FILE, settings)
+    }
+    pub fn save_team(&self, team: &TeamState) -> Result<(), String> {
+        self.save(TEAM_FILE, team)
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn corrupt_locker_is_kept_and_defaults_load() {
+        let dir = tempfile::tempdir().unwrap();
+        std::fs::write(dir.path().join(LOCKER_FILE), "[[[").unwrap();
+        let mut store = Store::new(dir.path());
+        let loaded = store.load();
+        assert!(loaded.locker.entries.is_empty());
+        assert!(loaded.report.first_launch);
+        assert_eq!(loaded.report.messages.len(), 1);
+        assert!(loaded.report.messages[0].contains("cylinder locker"));
+        let kept: Vec<_> = std::fs::read_dir(dir.path())
+            .unwrap()
+            .filter_map(|e| e.ok())
+            .filter(|e| {
+                e.file_name()
+                    .to_string_lossy()
+                    .starts_with("locker.json.unreadable")
+            })
+            .collect();
+        assert_eq!(kept.len(), 1);
+        assert_eq!(std::fs::read_to_string(kept[0].path()).unwrap(), "[[[");
+        // Saving afterwards writes a fresh file and leaves the kept copy alone.
+        store.save_locker(&LockerFile::default()).unwrap();
+        assert_eq!(std::fs::read_to_string(kept[0].path()).unwrap(), "[[[");
+    }
+}

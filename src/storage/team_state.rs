@@ -1,0 +1,17 @@
+//! The last team on the Team page, kept between launches.
+
+use serde::{Deserialize, Serialize};
+
+use crate::formats::team_file::TeamFile;
+
+pub const TEAM_SCHEMA: u32 = 1;
+
+#[derive(Clone, Debug, PartialEq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct TeamState {
+    pub schema: u32,
+    pub team: TeamFile,
+    /// The name of each diver's cylinder set, as picked (locker or preset).
+    #[serde(default)]
+    pub cylinder_labels: Vec<String>,
+}

@@ -1,0 +1,248 @@
+//! The command line: the demo team, every validation error path, JSON keys.
+
+use std::path::PathBuf;
+use std::process::Command;
+
+fn bin() -> Command {
+    Command::new(env!("CARGO_BIN_EXE_turnsheet"))
+}
+
+fn demo_path() -> PathBuf {
+    PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("examples/hollowmere-team.json")
+}
+
+fn demo() -> serde_json::Value {
+    serde_json::from_str(&std::fs::read_to_string(demo_path()).unwrap()).unwrap()
+}
+
+fn plan_json(team: &serde_json::Value) -> (i32, String, String) {
+    let dir = tempfile::tempdir().unwrap();
+    let path = dir.path().join("team.json");
+    std::fs::write(&path, serde_json::to_string(team).unwrap()).unwrap();
+    let out = bin().args(["plan", "--json"]).arg(&path).output().unwrap();
+    (
+        out.status.code().unwrap_or(-1),
+        String::from_utf8_lossy(&out.stdout).into_owned(),
+        String::from_utf8_lossy(&out.stderr).into_owned(),
+    )
+}
+
+#[test]
+fn demo_team_prints_a_table() {
+    let out = bin().arg("plan").arg(demo_path()).output().unwrap();
+    assert_eq!(out.status.code(), Some(0));
+    let text = String::from_utf8(out.stdout).unwrap();
+    for name in ["Ines", "Bram", "Sol"] {
+        assert!(text.contains(name), "{text}");
+    }
+    assert!(text.contains("controlling diver"), "{text}");
+    assert!(text.contains("Check by hand"), "{text}");
+}
+
+#[test]
+fn json_output_has_the_documented_keys() {
+    let (code, out, err) = plan_json(&demo());
+    assert_eq!(code, 0, "{err}");
+    let v: serde_json::Value = serde_json::from_str(&out).unwrap();
+    for key in [
+        "controlling",
+        "team_allowance_l",
+        "stress_margin",
+        "warnings",
+    ] {
+        assert!(v.get(key).is_some(), "missing {key}");
+    }
+    let divers = v["divers"].as_array().unwrap();
+    assert_eq!(divers.len(), 3);
+    let mut controlling = 0;
+    for d in divers {
+        for key in [
+            "name",
+            "turn",
+            "turn_real",
+            "turn_hand",
+            "turn_set_by",
+            "content_l",
+            "controlling",
+            "minutes_to_turn",
+        ] {
+            assert!(d.get(key).is_some(), "missing divers[].{key}");
+        }
+        let turn = d["turn"].as_f64().unwrap();
+        assert!(turn >= d["turn_real"].as_f64().unwrap() - 1e-9);
+        assert!(turn >= d["turn_hand"].as_f64().unwrap() - 1e-9);
+        assert_eq!(turn % 10.0, 0.0);
+        assert!(["real", "hand"].contains(&d["turn_set_by"].as_str().unwrap()));
+        assert!(d["minutes_to_turn"].as_f64().unwrap() > 0.0);
+        if d["controlling"].as_bool().unwrap() {
+            controlling += 1;
+            assert_eq!(d["name"], v["controlling"]);
+        }
+    }
+    assert_eq!(controlling, 1);
+    assert!(v["stress_margin"].as_f64().unwrap() >= 1.0);
+}
+
+#[test]
+fn without_sac_or_depth_minutes_are_null() {
+    let mut t = demo();
+    t.as_object_mut().unwrap().remove("depth");
+    let (code, out, _) = plan_json(&t);
+    assert_eq!(code, 0);
+    let v: serde_json::Value = serde_json::from_str(&out).unwrap();
+    assert!(v["divers"][0]["minutes_to_turn"].is_null());
+}
+
+/// Each edit of the demo team must exit 2 with a message naming the field.
+#[test]
+fn every_validation_error_names_the_field() {
+    type Edit = fn(&mut serde_json::Value);
+    let cases: Vec<(&str, Edit)> = vec![
+        ("divers", |t| {
+            t["divers"].as_array_mut().unwrap().truncate(1);
+        }),
+        ("divers", |t| {
+            let d = t["divers"][0].clone();
+            let a = t["divers"].as_array_mut().unwrap();
+            while a.len() < 7 {
+                a.push(d.clone());
+            }
+        }),
+        ("divers[0].start", |t| t["divers"][0]["start"] = 0.into()),
+        ("divers[0].start", |t| {
+            t["divers"][0]["start"] = (-20).into()
+        }),
+        ("divers[0].start", |t| t["divers"][0]["start"] = 350.into()),
+        ("divers[2].start", |t| {
+            t["divers"][2]["cylinders"]["working_bar"] = 300.into();
+            t["divers"][2]["start"] = 420.into();
+        }),
+        ("divers[0].cylinders.water_l", |t| {
+            t["divers"][0]["cylinders"]["water_l"] = 0.4.into()
+        }),
+        ("divers[0].cylinders.water_l", |t| {
+            t["divers"][0]["cylinders"]["water_l"] = 31.into()
+        }),
+        ("divers[0].cylinders.working_bar", |t| {
+            t["divers"][0]["cylinders"]["working_bar"] = 0.into()
+        }),
+        ("divers[1].cylinders.rated_psi", |t| {
+            t["divers"][1]["cylinders"]["rated_psi"] = 0.into()
+        }),
+        ("divers[1].cylinders.rated_cuft", |t| {
+            t["divers"][1]["cylinders"]["rated_cuft"] = (-1).into()
+        }),
+        ("divers[0].cylinders.count", |t| {
+            t["divers"][0]["cylinders"]["count"] = 0.into()
+        }),
+        ("divers[0].cylinders.count", |t| {
+            t["divers"][0]["cylinders"]["count"] = 5.into()
+        }),
+        ("divers[0].cylinders", |t| {
+            t["divers"][0]["cylinders"]["rated_psi"] = 3000.into()
+        }),
+        ("divers[0].mix.o2", |t| {
+            t["divers"][0]["mix"]["o2"] = 0.04.into()
+        }),
+        ("divers[0].mix.he", |t| {
+            t["divers"][0]["mix"]["o2"] = 0.3.into();
+            t["divers"][0]["mix"]["he"] = 0.8.into();
+        }),
+        ("divers[0].name", |t| t["divers"][0]["name"] = "  ".into()),
+        ("divers[0].sac", |t| t["divers"][0]["sac"] = 0.into()),
+        ("rule", |t| t["rule"] = "sevenths".into()),
+        ("gauge_step", |t| t["gauge_step"] = 0.into()),
+        ("gauge_step", |t| t["gauge_step"] = (-10).into()),
+        ("water_temp", |t| t["water_temp"] = 80.into()),
+        ("depth", |t| t["depth"] = (-5).into()),
+        ("colour", |t| t["colour"] = "red".into()),
+        ("tank", |t| t["divers"][0]["tank"] = 1.into()),
+    ];
+    for (field, edit) in cases {
+        let mut t = demo();
+        edit(&mut t);
+        let (code, out, err) = plan_json(&t);
+        assert_eq!(code, 2, "{field}: expected exit 2; stdout {out}");
+        assert!(err.contains(field), "message does not name {field}: {err}");
+        assert!(out.is_empty(), "no plan may be printed on bad input");
+    }
+}
+
+#[test]
+fn unreadable_and_malformed_files_exit_2() {
+    let out = bin()
+        .args(["plan", "/nonexistent/team.json"])
+        .output()
+        .unwrap();
+    assert_eq!(out.status.code(), Some(2));
+    assert!(String::from_utf8_lossy(&out.stderr).contains("cannot read team file"));
+    let dir = tempfile::tempdir().unwrap();
+    let p = dir.path().join("bad.json");
+    std::fs::write(&p, "{\"units\": \"metric\", ").unwrap();
+    let out = bin().arg("plan").arg(&p).output().unwrap();
+    assert_eq!(out.status.code(), Some(2));
+    assert!(String::from_utf8_lossy(&out.stderr).contains("team file"));
+}
+
+#[test]
+fn gas_command_reports_both_models_and_cooling() {
+    // Domain notes (CoolProp 8.0.0): air at 232 bar, 20 °C holds about 219 L per litre.
+    let out = bin()
+        .args(["gas", "--litres", "1", "--pressure", "232", "--json"])
+        .output()
+        .unwrap();
+    assert_eq!(out.status.code(), Some(0));
+    let v: serde_json::Value = serde_json::from_slice(&out.stdout).unwrap();
+    let real = v["content_l"].as_f64().unwrap();
+    assert!((real - 218.0).abs() < 1.0, "{real}");
+    assert!((v["content_hand_l"].as_f64().unwrap() - 232.0 / 1.01325).abs() < 0.01);
+    assert!(v["pressure_after"].is_null());
+    // Same reference: 232 bar at 35 °C cooled to 12 °C → 207.2 bar.
+    let out = bin()
+        .args([
+            "gas",
+            "--litres",
+            "12",
+            "--pressure",
+            "232",
+            "--temp",
+            "35",
+            "--to-temp",
+            "12",
+            "--json",
+        ])
+        .output()
+        .unwrap();
+    let v: serde_json::Value = serde_json::from_slice(&out.stdout).unwrap();
+    assert!((v["pressure_after"].as_f64().unwrap() - 207.16).abs() < 0.5);
+    let out = bin()
+        .args(["gas", "--litres", "12", "--pressure", "0"])
+        .output()
+        .unwrap();
+    assert_eq!(out.status.code(), Some(2));
+    assert!(String::from_utf8_lossy(&out.stderr).contains("--pressure"));
+    let out = bin()
+        .args([
+            "gas",
+            "--litres",
+            "12",
+            "--pressure",
+            "200",
+            "--o2",
+            "30",
+            "--he",
+            "80",
+        ])
+        .output()
+        .unwrap();
+    assert_eq!(out.status.code(), Some(2));
+    assert!(String::from_utf8_lossy(&out.stderr).contains("--he"));
+}
+
+#[test]
+fn help_explains_the_commands() {
+    let out = bin().arg("--help").output().unwrap();
+    assert_eq!(out.status.code(), Some(0));
+    let text = String::from_utf8(out.stdout).unwrap();
+    assert!(text.contains("plan") && text.contains("gas"), "{text}");
+}

@@ -1,0 +1,188 @@
+//! Worked gas-matching cases done by hand with tank factors (common practice: the
+//! volume-matching method taught for dissimilar cylinders). The tank-factor model must
+//! reproduce the hand arithmetic exactly; the shown turn is never below it.
+
+use turnsheet::plan::{
+    CylinderSet, CylinderSpec, DiverInput, Mix, ModelKind, Pressure, Rule, TeamInput, Temperature,
+    UnitSystem, Water, plan_team,
+};
+
+fn stamped(count: u8, water_l: f64, working_bar: f64) -> CylinderSet {
+    CylinderSet {
+        count,
+        spec: CylinderSpec::Stamped {
+            water_l,
+            working_bar,
+        },
+    }
+}
+
+fn rated(count: u8, rated_cuft: f64, rated_psi: f64) -> CylinderSet {
+    CylinderSet {
+        count,
+        spec: CylinderSpec::Rated {
+            rated_cuft,
+            rated_psi,
+        },
+    }
+}
+
+fn diver(name: &str, cylinders: CylinderSet, start: Pressure) -> DiverInput {
+    DiverInput {
+        name: name.into(),
+        cylinders,
+        mix: Mix::AIR,
+        start,
+        sac_l_per_min: None,
+    }
+}
+
+fn team(units: UnitSystem, rule: Rule, step: f64, divers: Vec<DiverInput>) -> TeamInput {
+    TeamInput {
+        units,
+        rule,
+        gauge_step: step,
+        water_temp: Temperature::from_celsius(20.0),
+        depth: None,
+        water: Water::Fresh,
+        divers,
+    }
+}
+
+#[test]
+fn identical_twins_turn_at_two_thirds_of_start() {
+    // Common practice: identical cylinders and fills reduce to the gauge rule of thirds.
+    // Twin 12 L at 210 bar: a third is 70 bar, turn at 140 bar.
+    let t = team(
+        UnitSystem::Metric,
+        Rule::Thirds,
+        10.0,
+        vec![
+            diver("A", stamped(2, 12.0, 232.0), Pressure::from_bar(210.0)),
+            diver("B", stamped(2, 12.0, 232.0), Pressure::from_bar(210.0)),
+        ],
+    );
+    let plan = plan_team(&t).unwrap();
+    for d in &plan.divers {
+        assert!(
+            (d.turn_hand.bar() - 140.0).abs() < 1e-9,
+            "{}",
+            d.turn_hand.bar()
+        );
+        assert_eq!(d.turn_shown_value, 140.0);
+        // Real gas says a little lower; the hand turn is kept.
+        assert!(d.turn_real.bar() < 140.0);
+        assert_eq!(d.set_by, ModelKind::Hand);
+    }
+    assert!(plan.stress.margin >= 1.0 - 1e-9);
+}
+
+#[test]
+fn metric_worked_case_by_hand() {
+    // Worked by hand (tank factor = water capacity, litres per bar):
+    //   A: twin 12 L = 24 L/bar at 220 bar → 5280 L; a third = 1760 L
+    //   B: twin 7 L = 14 L/bar at 280 bar → 3920 L; a third = 1306.7 L  → B controls
+    //   A drops 1306.7 / 24 = 54.44 bar → turn 165.56 → shown 170 bar (round up to 10)
+    //   B drops 1306.7 / 14 = 93.33 bar → turn 186.67 → shown 190 bar
+    let t = team(
+        UnitSystem::Metric,
+        Rule::Thirds,
+        10.0,
+        vec![
+            diver("A", stamped(2, 12.0, 232.0), Pressure::from_bar(220.0)),
+            diver("B", stamped(2, 7.0, 300.0), Pressure::from_bar(280.0)),
+        ],
+    );
+    let plan = plan_team(&t).unwrap();
+    let allowance = 14.0 * 280.0 / 3.0;
+    let a_turn = 220.0 - allowance / 24.0;
+    let b_turn = 280.0 - allowance / 14.0;
+    assert!((plan.divers[0].turn_hand.bar() - a_turn).abs() < 1e-9);
+    assert!((plan.divers[1].turn_hand.bar() - b_turn).abs() < 1e-9);
+    assert_eq!(plan.controlling, 1);
+    assert!(plan.divers[0].turn_shown_value >= 170.0);
+    assert!(plan.divers[1].turn_shown_value >= 190.0);
+}
+
+#[test]
+fn imperial_worked_case_with_published_tank_factors() {
+    // Tank factors (common practice, cu ft per 100 psi): AL80 77.4 cu ft @ 3000 psi = 2.58;
+    // LP85 85 cu ft @ 2640 psi = 3.22.
+    //   A: twin AL80 at 3000 psi → 154.8 cu ft; a third = 51.6 cu ft → A controls
+    //   B: twin LP85 at 2640 psi → 170 cu ft; a third = 56.7 cu ft
+    //   A turns at 2000 psi; B drops 51.6 / 6.439 = 801.3 psi → 1838.7 → shown 1900 psi.
+    let t = team(
+        UnitSystem::Imperial,
+        Rule::Thirds,
+        100.0,
+        vec![
+            diver("A", rated(2, 77.4, 3000.0), Pressure::from_psi(3000.0)),
+            diver("B", rated(2, 85.0, 2640.0), Pressure::from_psi(2640.0)),
+        ],
+    );
+    let plan = plan_team(&t).unwrap();
+    let tf_a: f64 = 2.0 * 77.4 / 30.0; // cu ft per 100 psi
+    let tf_b: f64 = 2.0 * 85.0 / 26.4;
+    assert!((tf_a - 5.16).abs() < 1e-9 && (tf_b - 6.4394).abs() < 1e-3);
+    let allowance = tf_a * 30.0 / 3.0;
+    let b_turn = 2640.0 - allowance / tf_b * 100.0;
+    assert_eq!(plan.controlling, 0);
+    assert!((plan.divers[0].turn_hand.psi() - 2000.0).abs() < 1e-6);
+    assert!(
+        (plan.divers[1].turn_hand.psi() - b_turn).abs() < 1e-6,
+        "{}",
+        plan.divers[1].turn_hand.psi()
+    );
+    assert_eq!(plan.divers[0].turn_shown_value, 2000.0);
+    assert_eq!(plan.divers[1].turn_shown_value, 1900.0);
+    // The ratings are taken to include compressibility: the rated volume at rated pressure
+    // is the same under both models at 70 °F.
+    assert!((plan.team_allowance_hand.cuft() - 51.6).abs() < 1e-6);
+}
+
+#[test]
+fn stricter_rules_turn_earlier() {
+    // Common practice: quarters and sixths keep more in reserve than thirds.
+    let mk = |rule| {
+        let t = team(
+            UnitSystem::Metric,
+            rule,
+            5.0,
+            vec![
+                diver("A", stamped(2, 12.0, 232.0), Pressure::from_bar(220.0)),
+                diver("B", stamped(1, 18.0, 232.0), Pressure::from_bar(210.0)),
+                diver("C", stamped(2, 10.0, 300.0), Pressure::from_bar(290.0)),
+            ],
+        );
+        plan_team(&t).unwrap()
+    };
+    let thirds = mk(Rule::Thirds);
+    let quarters = mk(Rule::Quarters);
+    let sixths = mk(Rule::Sixths);
+    for i in 0..3 {
+        assert!(quarters.divers[i].turn_shown_value >= thirds.divers[i].turn_shown_value);
+        assert!(sixths.divers[i].turn_shown_value >= quarters.divers[i].turn_shown_value);
+    }
+    assert!(quarters.stress.margin >= 1.5 - 1e-9);
+    assert!(sixths.stress.margin >= 2.5 - 1e-9);
+}
+
+#[test]
+fn high_fill_real_gas_is_lower_than_hand_and_hand_is_kept() {
+    // Domain notes: at high fills exact real-gas thirds turn lower than the hand method;
+    // the shown turn keeps the hand method's margin.
+    let t = team(
+        UnitSystem::Metric,
+        Rule::Thirds,
+        10.0,
+        vec![
+            diver("A", stamped(2, 12.0, 300.0), Pressure::from_bar(300.0)),
+            diver("B", stamped(2, 15.0, 232.0), Pressure::from_bar(232.0)),
+        ],
+    );
+    let plan = plan_team(&t).unwrap();
+    for d in &plan.divers {
+        assert!(d.turn_real.bar() < d.turn_hand.bar());
+        assert!(d.turn_shown.bar() >= d.turn_hand.bar() - 1e-9);
+    }
+}
