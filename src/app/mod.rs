@@ -1,7 +1,65 @@
-//! The app: controllers, adapters and the desktop entry point.
+//! The app: controllers hold state and call the planning core; adapters connect them
+//! to the Slint globals; `run_desktop` opens the window.
+
+pub mod adapters;
+pub mod cautions;
+pub mod keypad;
+pub mod locker_controller;
+pub mod nav;
+pub mod session;
+pub mod team_controller;
+pub mod view_models;
+
+slint::include_modules!();
+
+use std::cell::RefCell;
+use std::rc::Rc;
+
+use crate::storage::Store;
+use crate::storage::data_dir::desktop_data_dir;
+use session::Session;
+
+/// A window with its session, wired together.
+pub struct App {
+    pub window: AppWindow,
+    pub session: Rc<RefCell<Session>>,
+}
+
+impl App {
+    /// Build the window over the files in `data_dir`.
+    pub fn new(data_dir: impl Into<std::path::PathBuf>) -> Result<App, slint::PlatformError> {
+        let window = AppWindow::new()?;
+        let session = Rc::new(RefCell::new(Session::open(Store::new(data_dir))));
+        adapters::connect_all(&window, &session);
+        adapters::refresh_all(&window, &session.borrow());
+        Ok(App { window, session })
+    }
+
+    /// Save everything now (lifecycle events).
+    pub fn save(&self) {
+        self.session.borrow_mut().save_all();
+    }
+}
 
 /// Open the app window (desktop). Returns the process exit code.
 pub fn run_desktop() -> i32 {
-    eprintln!("the app window is not built yet");
-    1
+    let dir = desktop_data_dir();
+    let app = match App::new(&dir) {
+        Ok(a) => a,
+        Err(e) => {
+            eprintln!(
+                "turnsheet: cannot open a window ({e}). For servers use `turnsheet plan TEAM.json`."
+            );
+            return 1;
+        }
+    };
+    let result = app.window.run();
+    app.save();
+    match result {
+        Ok(()) => 0,
+        Err(e) => {
+            eprintln!("turnsheet: {e}");
+            1
+        }
+    }
 }

@@ -1,0 +1,107 @@
+//! Render every page headless to PNG at phone size (412×915 logical px, scale 1)
+//! with Slint's software renderer, into docs/screenshots/.
+//!
+//! Run: `cargo run --example screenshots`
+
+use std::path::Path;
+
+use i_slint_backend_testing::{TestingBackend, TestingBackendOptions};
+use slint::ComponentHandle;
+use turnsheet::app::App;
+use turnsheet::app::adapters::refresh_all;
+use turnsheet::app::nav::Screen;
+use turnsheet::app::session::EntryTarget;
+use turnsheet::formats::team_file::CylindersFile;
+use turnsheet::plan::catalogue::{Material, presets};
+use turnsheet::storage::locker::LockerEntry;
+
+fn save_png(app: &App, path: &Path) {
+    let buffer = app.window.window().take_snapshot().expect("snapshot");
+    let file = std::fs::File::create(path).expect("create png");
+    let mut enc = png::Encoder::new(
+        std::io::BufWriter::new(file),
+        buffer.width(),
+        buffer.height(),
+    );
+    enc.set_color(png::ColorType::Rgba);
+    enc.set_depth(png::BitDepth::Eight);
+    let mut w = enc.write_header().expect("png header");
+    w.write_image_data(buffer.as_bytes()).expect("png data");
+    println!("wrote {}", path.display());
+}
+
+fn main() {
+    slint::platform::set_platform(Box::new(TestingBackend::new(TestingBackendOptions {
+        mock_time: true,
+        threading: false,
+        renderer_name: Some("software".into()),
+    })))
+    .expect("platform");
+    let out = Path::new(env!("CARGO_MANIFEST_DIR")).join("docs/screenshots");
+    std::fs::create_dir_all(&out).unwrap();
+    let data = tempfile::tempdir().unwrap();
+    let app = App::new(data.path()).expect("app");
+    app.window
+        .window()
+        .set_size(slint::LogicalSize::new(412.0, 915.0));
+    app.window.show().unwrap();
+
+    let shot = |name: &str, f: &dyn Fn(&mut turnsheet::app::session::Session)| {
+        f(&mut app.session.borrow_mut());
+        refresh_all(&app.window, &app.session.borrow());
+        save_png(&app, &out.join(format!("{name}.png")));
+    };
+
+    shot("01-cautions", &|_| {});
+    shot("02-team", &|s| s.acknowledge_cautions());
+    shot("03-keypad", &|s| {
+        s.open_entry(EntryTarget::Start(1));
+        for k in ["clear", "2", "1", "0"] {
+            s.key(k);
+        }
+    });
+    shot("04-keypad-invalid", &|s| s.key("0"));
+    shot("05-turns", &|s| {
+        s.cancel_entry();
+        s.go(Screen::Turns);
+    });
+    shot("06-buddy", &|s| s.go(Screen::Buddy));
+    shot("07-mix", &|s| {
+        s.back();
+        s.back();
+        s.open_mix_picker(0);
+    });
+    shot("08-cylinders", &|s| {
+        s.close_picker();
+        s.open_cylinder_picker(2);
+    });
+    shot("09-locker", &|s| {
+        s.close_picker();
+        let p = &presets()[0];
+        for (name, set, note) in [
+            ("Steel twins", presets()[0].set, "Test due March"),
+            ("Side AL", presets()[9].set, ""),
+        ] {
+            let id = s.locker.file.next_id();
+            s.locker.file.entries.push(LockerEntry {
+                id,
+                name: name.into(),
+                cylinders: CylindersFile::from_set(&set),
+                material: if name.contains("AL") {
+                    Material::Aluminium
+                } else {
+                    p.material
+                },
+                note: note.into(),
+                mine: id == 1,
+            });
+        }
+        s.go(Screen::Locker);
+    });
+    shot("10-locker-edit", &|s| s.locker_edit(1));
+    shot("11-settings", &|s| {
+        s.back();
+        s.back();
+        s.go(Screen::Settings);
+    });
+}

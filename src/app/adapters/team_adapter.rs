@@ -1,0 +1,75 @@
+//! TeamAdapter: the Team page.
+
+use slint::ComponentHandle;
+
+use super::super::session::{EntryTarget, Session};
+use super::super::view_models as vm;
+use super::super::{AppWindow, DiverCard, TeamAdapter};
+use super::{Shared, act, handles, model, strings};
+use crate::plan::Rule;
+
+pub fn connect(ui: &AppWindow, s: &Shared) {
+    let a = ui.global::<TeamAdapter>();
+    let (w, st) = handles(ui, s);
+    a.on_edit_name(move |i| {
+        act(&w, &st, |x| {
+            x.open_entry(EntryTarget::DiverName(i as usize))
+        })
+    });
+    let (w, st) = handles(ui, s);
+    a.on_pick_cylinders(move |i| act(&w, &st, |x| x.open_cylinder_picker(i as usize)));
+    let (w, st) = handles(ui, s);
+    a.on_pick_mix(move |i| act(&w, &st, |x| x.open_mix_picker(i as usize)));
+    let (w, st) = handles(ui, s);
+    a.on_edit_start(move |i| act(&w, &st, |x| x.open_entry(EntryTarget::Start(i as usize))));
+    let (w, st) = handles(ui, s);
+    a.on_nudge_start(move |i, d| act(&w, &st, |x| x.nudge_start(i as usize, d)));
+    let (w, st) = handles(ui, s);
+    a.on_edit_sac(move |i| act(&w, &st, |x| x.open_entry(EntryTarget::Sac(i as usize))));
+    let (w, st) = handles(ui, s);
+    a.on_remove_diver(move |i| act(&w, &st, |x| x.remove_diver(i as usize)));
+    let (w, st) = handles(ui, s);
+    a.on_add_diver(move || act(&w, &st, |x| x.add_diver()));
+    let (w, st) = handles(ui, s);
+    a.on_set_rule(move |i| act(&w, &st, |x| x.set_rule(i as usize)));
+    let (w, st) = handles(ui, s);
+    a.on_set_step(move |i| act(&w, &st, |x| x.set_step(i as usize)));
+    let (w, st) = handles(ui, s);
+    a.on_edit_depth(move || act(&w, &st, |x| x.open_entry(EntryTarget::Depth)));
+    let (w, st) = handles(ui, s);
+    a.on_toggle_water(move || act(&w, &st, |x| x.toggle_water()));
+    let (w, st) = handles(ui, s);
+    a.on_new_team(move || act(&w, &st, |x| x.new_team()));
+}
+
+pub fn refresh(ui: &AppWindow, s: &Session) {
+    let a = ui.global::<TeamAdapter>();
+    let input = s.team.input();
+    let cards: Vec<DiverCard> = vm::diver_cards(s)
+        .into_iter()
+        .map(|c| DiverCard {
+            name: c.name.into(),
+            cylinders: c.cylinders.into(),
+            mix: c.mix.into(),
+            start: c.start.into(),
+            unit: c.unit.into(),
+            sac: c.sac.into(),
+            error: c.error.into(),
+        })
+        .collect();
+    a.set_divers(model(cards));
+    a.set_rule_index(Rule::ALL.iter().position(|r| *r == input.rule).unwrap_or(1) as i32);
+    a.set_step_options(strings(vm::step_labels(input.units)));
+    a.set_step_index(vm::step_index(input.units, input.gauge_step));
+    a.set_depth_text(vm::depth_label(s).into());
+    a.set_water_text(
+        match input.water {
+            crate::plan::Water::Fresh => "Fresh",
+            crate::plan::Water::Salt => "Salt",
+        }
+        .into(),
+    );
+    a.set_can_add(s.team.can_add());
+    a.set_can_remove(s.team.can_remove());
+    a.set_summary(vm::team_summary(s).into());
+}

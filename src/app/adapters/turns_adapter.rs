@@ -1,0 +1,42 @@
+//! TurnsAdapter and BuddyAdapter: the plan, shown.
+
+use slint::ComponentHandle;
+
+use super::super::session::Session;
+use super::super::view_models as vm;
+use super::super::{AppWindow, BuddyAdapter, BuddyRow, TurnRow, TurnsAdapter};
+use super::{model, strings};
+
+pub fn refresh(ui: &AppWindow, s: &Session) {
+    let rows = vm::turn_rows(s);
+    let a = ui.global::<TurnsAdapter>();
+    a.set_rows(model(
+        rows.iter()
+            .map(|r| TurnRow {
+                name: r.name.clone().into(),
+                turn: r.turn.clone().into(),
+                unit: r.unit.clone().into(),
+                detail: r.detail.clone().into(),
+                set_by: r.set_by.clone().into(),
+                minutes: r.minutes.clone().into(),
+                controlling: r.controlling,
+            })
+            .collect(),
+    ));
+    a.set_rule_text(vm::rule_text(s).into());
+    a.set_margin_text(vm::margin_text(s).into());
+    a.set_warnings(strings(s.team.plan().warnings.clone()));
+    a.set_first_text(vm::first_text(s).into());
+    a.set_error("".into());
+    let b = ui.global::<BuddyAdapter>();
+    b.set_unit(s.units().pressure_label().into());
+    b.set_rows(model(
+        rows.iter()
+            .map(|r| BuddyRow {
+                name: r.name.clone().into(),
+                turn: r.turn.clone().into(),
+                controlling: r.controlling,
+            })
+            .collect(),
+    ));
+}

@@ -1,0 +1,134 @@
+//! The entry buffer behind our own keypads: digits or letters, no system keyboard.
+
+/// Text being typed on a keypad.
+#[derive(Clone, Debug, PartialEq)]
+pub struct KeypadBuffer {
+    text: String,
+    letters: bool,
+    decimal: bool,
+    max_len: usize,
+}
+
+impl KeypadBuffer {
+    pub fn digits(initial: &str, decimal: bool) -> Self {
+        KeypadBuffer {
+            text: initial.to_string(),
+            letters: false,
+            decimal,
+            max_len: 7,
+        }
+    }
+
+    pub fn letters(initial: &str, max_len: usize) -> Self {
+        KeypadBuffer {
+            text: initial.to_string(),
+            letters: true,
+            decimal: false,
+            max_len,
+        }
+    }
+
+    pub fn text(&self) -> &str {
+        &self.text
+    }
+    pub fn is_letters(&self) -> bool {
+        self.letters
+    }
+    pub fn allows_decimal(&self) -> bool {
+        self.decimal
+    }
+    pub fn set_text(&mut self, text: String) {
+        self.text = text;
+    }
+
+    /// The number typed, if any.
+    pub fn value(&self) -> Option<f64> {
+        if self.text.is_empty() || self.text == "." {
+            None
+        } else {
+            self.text.parse().ok()
+        }
+    }
+
+    /// Apply one key: a digit or letter, ".", "del", "clear" or " ". Unknown keys are ignored.
+    pub fn press(&mut self, key: &str) {
+        match key {
+            "del" => {
+                self.text.pop();
+            }
+            "clear" => self.text.clear(),
+            _ if self.text.chars().count() >= self.max_len => {}
+            "." if !self.letters => {
+                if self.decimal && !self.text.contains('.') {
+                    if self.text.is_empty() {
+                        self.text.push('0');
+                    }
+                    self.text.push('.');
+                }
+            }
+            k if !self.letters && k.len() == 1 && k.as_bytes()[0].is_ascii_digit() => {
+                if self.text == "0" {
+                    self.text.clear();
+                }
+                self.text.push_str(k);
+            }
+            k if self.letters && k.chars().count() == 1 => {
+                let c = k.chars().next().unwrap_or(' ');
+                if c == ' ' && (self.text.is_empty() || self.text.ends_with(' ')) {
+                    return;
+                }
+                // Capitalise the first letter of each word; lower-case the rest.
+                let word_start = self.text.is_empty() || self.text.ends_with([' ', '-', '/']);
+                if c.is_alphabetic() {
+                    if word_start {
+                        self.text.extend(c.to_uppercase());
+                    } else {
+                        self.text.extend(c.to_lowercase());
+                    }
+                } else {
+                    self.text.push(c);
+                }
+            }
+            _ => {}
+        }
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn digits_build_a_number() {
+        let mut b = KeypadBuffer::digits("", false);
+        for k in ["0", "2", "1", "8", "."] {
+            b.press(k);
+        }
+        assert_eq!(b.text(), "218");
+        assert_eq!(b.value(), Some(218.0));
+        b.press("del");
+        assert_eq!(b.value(), Some(21.0));
+        b.press("clear");
+        assert_eq!(b.value(), None);
+        b.press("A");
+        assert_eq!(b.text(), "");
+    }
+
+    #[test]
+    fn one_decimal_point_when_allowed() {
+        let mut b = KeypadBuffer::digits("", true);
+        for k in [".", "5", ".", "1"] {
+            b.press(k);
+        }
+        assert_eq!(b.text(), "0.51");
+    }
+
+    #[test]
+    fn letters_capitalise_words() {
+        let mut b = KeypadBuffer::letters("", 24);
+        for k in [" ", "M", "A", "R", "I", " ", "L", "U", "-", "K", "A"] {
+            b.press(k);
+        }
+        assert_eq!(b.text(), "Mari Lu-Ka");
+    }
+}
