@@ -7,4 +7,5 @@ pub mod app;
 pub mod cli;
 pub mod formats;
 pub mod plan;
+pub mod platform;
 pub mod storage;

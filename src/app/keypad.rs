@@ -58,13 +58,11 @@ impl KeypadBuffer {
             }
             "clear" => self.text.clear(),
             _ if self.text.chars().count() >= self.max_len => {}
-            "." if !self.letters => {
-                if self.decimal && !self.text.contains('.') {
-                    if self.text.is_empty() {
-                        self.text.push('0');
-                    }
-                    self.text.push('.');
+            "." if !self.letters && self.decimal && !self.text.contains('.') => {
+                if self.text.is_empty() {
+                    self.text.push('0');
                 }
+                self.text.push('.');
             }
             k if !self.letters && k.len() == 1 && k.as_bytes()[0].is_ascii_digit() => {
                 if self.text == "0" {

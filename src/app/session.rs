@@ -119,6 +119,23 @@ impl Session {
         }
     }
 
+    /// Read the files again if another program changed them since they were last read
+    /// or written (on resume). The page stays where it was. Returns whether it reloaded.
+    pub fn reload_if_changed(&mut self) -> bool {
+        if !self.store.changed_on_disk() {
+            return false;
+        }
+        let page = self.nav.current();
+        let dir = self.store.dir().to_path_buf();
+        let fresh = Session::open(Store::new(dir));
+        let nav = self.nav.clone();
+        *self = fresh;
+        if page != Screen::Cautions && self.settings.cautions_acknowledged {
+            self.nav = nav;
+        }
+        true
+    }
+
     pub fn units(&self) -> UnitSystem {
         self.team.input().units
     }
@@ -468,12 +485,12 @@ impl Session {
         }
     }
     pub fn draft_rated(&mut self, rated: bool) {
-        if let Some(d) = self.locker.draft.as_mut() {
-            if d.rated != rated {
-                d.rated = rated;
-                d.first = None;
-                d.second = None;
-            }
+        if let Some(d) = self.locker.draft.as_mut()
+            && d.rated != rated
+        {
+            d.rated = rated;
+            d.first = None;
+            d.second = None;
         }
     }
     pub fn draft_material(&mut self, idx: usize) {
@@ -715,8 +732,25 @@ impl Session {
                 }
             }
         };
+        let failed = result.is_err();
         if let Some(e) = self.entry.as_mut() {
             e.reason = result.err().map(|e| e.message).unwrap_or_default();
+        }
+        // While the typed text is unusable, the plan shows the value the entry started from.
+        if apply
+            && failed
+            && is_live(entry.target)
+            && entry.buffer.text() != entry.original
+            && let Some(e) = self.entry.as_mut()
+        {
+            let typed = e.buffer.text().to_string();
+            let reason = e.reason.clone();
+            e.buffer.set_text(e.original.clone());
+            self.validate_entry(true);
+            if let Some(e) = self.entry.as_mut() {
+                e.buffer.set_text(typed);
+                e.reason = reason;
+            }
         }
     }
 
@@ -764,23 +798,27 @@ impl Session {
 
     /// Cancel: put back the value the entry started from.
     pub fn cancel_entry(&mut self) {
-        if let Some(mut entry) = self.entry.take() {
-            let live = matches!(
-                entry.target,
-                EntryTarget::Start(_)
-                    | EntryTarget::Sac(_)
-                    | EntryTarget::Depth
-                    | EntryTarget::WaterTemp
-                    | EntryTarget::DiverName(_)
-            );
-            if live {
-                entry.buffer.set_text(entry.original.clone());
-                self.entry = Some(entry);
-                self.validate_entry(true);
-                self.entry = None;
-            }
+        if let Some(mut entry) = self.entry.take()
+            && is_live(entry.target)
+        {
+            entry.buffer.set_text(entry.original.clone());
+            self.entry = Some(entry);
+            self.validate_entry(true);
+            self.entry = None;
         }
     }
+}
+
+/// Entries whose value drives the plan as it is typed.
+fn is_live(t: EntryTarget) -> bool {
+    matches!(
+        t,
+        EntryTarget::Start(_)
+            | EntryTarget::Sac(_)
+            | EntryTarget::Depth
+            | EntryTarget::WaterTemp
+            | EntryTarget::DiverName(_)
+    )
 }
 
 fn round_down(v: f64, step: f64) -> f64 {

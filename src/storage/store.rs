@@ -1,7 +1,8 @@
 //! The app's three files in one directory.
 
-use std::collections::HashSet;
+use std::collections::{HashMap, HashSet};
 use std::path::{Path, PathBuf};
+use std::time::SystemTime;
 
 use super::atomic::{ReadOutcome, read_json, write_json};
 use super::locker::{LOCKER_SCHEMA, LockerFile};
@@ -26,7 +27,11 @@ pub struct LoadReport {
 pub struct Store {
     dir: PathBuf,
     blocked: HashSet<&'static str>,
+    /// Modification time of each file as last loaded or written by this store.
+    seen: HashMap<&'static str, Option<SystemTime>>,
 }
+
+const FILES: [&str; 3] = [LOCKER_FILE, SETTINGS_FILE, TEAM_FILE];
 
 pub struct Loaded {
     pub locker: LockerFile,
@@ -40,6 +45,7 @@ impl Store {
         Store {
             dir: dir.into(),
             blocked: HashSet::new(),
+            seen: HashMap::new(),
         }
     }
 
@@ -58,6 +64,9 @@ impl Store {
             .take(SETTINGS_FILE, SETTINGS_SCHEMA, "settings", &mut report)
             .unwrap_or_default();
         let team = self.take(TEAM_FILE, TEAM_SCHEMA, "last team", &mut report);
+        for name in FILES {
+            self.remember(name);
+        }
         Loaded {
             locker,
             settings,
@@ -94,22 +103,43 @@ impl Store {
         }
     }
 
-    fn save<T: serde::Serialize>(&self, name: &'static str, value: &T) -> Result<(), String> {
+    fn modified(&self, name: &str) -> Option<SystemTime> {
+        std::fs::metadata(self.dir.join(name))
+            .and_then(|m| m.modified())
+            .ok()
+    }
+
+    fn remember(&mut self, name: &'static str) {
+        let t = self.modified(name);
+        self.seen.insert(name, t);
+    }
+
+    /// Whether another program changed a file since this store last read or wrote it.
+    pub fn changed_on_disk(&self) -> bool {
+        FILES
+            .iter()
+            .any(|name| self.seen.get(name).copied().flatten() != self.modified(name))
+    }
+
+    fn save<T: serde::Serialize>(&mut self, name: &'static str, value: &T) -> Result<(), String> {
         if self.blocked.contains(name) {
             return Err(format!(
                 "{name} is not saved: the unreadable file is kept in its place"
             ));
         }
-        write_json(&self.dir.join(name), value).map_err(|e| format!("could not save {name}: {e}"))
+        write_json(&self.dir.join(name), value)
+            .map_err(|e| format!("could not save {name}: {e}"))?;
+        self.remember(name);
+        Ok(())
     }
 
-    pub fn save_locker(&self, locker: &LockerFile) -> Result<(), String> {
+    pub fn save_locker(&mut self, locker: &LockerFile) -> Result<(), String> {
         self.save(LOCKER_FILE, locker)
     }
-    pub fn save_settings(&self, settings: &Settings) -> Result<(), String> {
+    pub fn save_settings(&mut self, settings: &Settings) -> Result<(), String> {
         self.save(SETTINGS_FILE, settings)
     }
-    pub fn save_team(&self, team: &TeamState) -> Result<(), String> {
+    pub fn save_team(&mut self, team: &TeamState) -> Result<(), String> {
         self.save(TEAM_FILE, team)
     }
 }

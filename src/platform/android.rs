@@ -1,0 +1,45 @@
+//! Android entry point: the same window as desktop, storage in app-private files,
+//! saves on lifecycle events. Everything it calls is covered by the desktop tests.
+
+use std::cell::RefCell;
+use std::rc::Rc;
+
+use slint::android::android_activity::{MainEvent, PollEvent};
+
+use super::{Lifecycle, android_data_dir, handle_lifecycle};
+use crate::app::App;
+use crate::app::session::Session;
+
+fn lifecycle(event: &PollEvent<'_>) -> Lifecycle {
+    match event {
+        PollEvent::Main(MainEvent::SaveState { .. }) => Lifecycle::SaveState,
+        PollEvent::Main(MainEvent::Pause) => Lifecycle::Pause,
+        PollEvent::Main(MainEvent::Stop) => Lifecycle::Stop,
+        PollEvent::Main(MainEvent::Destroy) => Lifecycle::Destroy,
+        PollEvent::Main(MainEvent::Start) => Lifecycle::Start,
+        PollEvent::Main(MainEvent::Resume { .. }) => Lifecycle::Resume,
+        _ => Lifecycle::Other,
+    }
+}
+
+#[unsafe(no_mangle)]
+fn android_main(app: slint::android::AndroidApp) {
+    let dir = android_data_dir(app.internal_data_path());
+    let session: Rc<RefCell<Option<(Rc<RefCell<Session>>, slint::Weak<crate::app::AppWindow>)>>> =
+        Rc::new(RefCell::new(None));
+    let listener_session = session.clone();
+    slint::android::init_with_event_listener(app, move |event| {
+        if let Some((s, w)) = listener_session.borrow().as_ref() {
+            let refresh = handle_lifecycle(&mut s.borrow_mut(), lifecycle(event));
+            if let (true, Some(ui)) = (refresh, w.upgrade()) {
+                crate::app::adapters::refresh_all(&ui, &s.borrow());
+            }
+        }
+    })
+    .expect("Slint Android backend");
+    let app = App::new(dir).expect("app window");
+    use slint::ComponentHandle;
+    *session.borrow_mut() = Some((app.session.clone(), app.window.as_weak()));
+    let _ = app.window.run();
+    app.save();
+}

@@ -1,0 +1,364 @@
+//! UI behaviour through the real toolkit (i-slint-backend-testing, pinned to the Slint
+//! version): keys are pressed through their accessibility actions, values read back from
+//! the accessibility tree, as a screen reader or a finger would.
+
+use i_slint_backend_testing::ElementHandle;
+use slint::ComponentHandle;
+use slint::platform::{Key, WindowEvent};
+use turnsheet::app::{App, Nav, Page};
+use turnsheet::formats::team_file::TeamFile;
+use turnsheet::plan::{CylinderSet, CylinderSpec, Mix, Pressure, UnitSystem, plan_team};
+
+fn init() {
+    i_slint_backend_testing::init_no_event_loop();
+}
+
+fn find(app: &App, label: &str) -> ElementHandle {
+    let all: Vec<_> = ElementHandle::find_by_accessible_label(&app.window, label).collect();
+    assert_eq!(
+        all.len(),
+        1,
+        "expected exactly one element labelled {label:?}, found {}",
+        all.len()
+    );
+    all.into_iter().next().unwrap()
+}
+
+fn press(app: &App, label: &str) {
+    find(app, label).invoke_accessible_default_action();
+}
+
+fn value(app: &App, label: &str) -> String {
+    find(app, label)
+        .accessible_value()
+        .unwrap_or_default()
+        .to_string()
+}
+
+fn type_keys(app: &App, keys: &str) {
+    for c in keys.chars() {
+        press(app, &c.to_string());
+    }
+}
+
+fn page(app: &App) -> Page {
+    app.window.global::<Nav>().get_page()
+}
+
+/// A phone-wide window, tall enough that no scrolling hides an element (the
+/// accessibility queries only see elements inside their clip).
+fn open(dir: &std::path::Path) -> App {
+    let app = App::new(dir).unwrap();
+    app.window
+        .window()
+        .set_size(slint::LogicalSize::new(412.0, 4000.0));
+    app
+}
+
+fn open_acknowledged(dir: &std::path::Path) -> App {
+    let app = open(dir);
+    if page(&app) == Page::Cautions {
+        press(&app, "acknowledge cautions");
+    }
+    assert_eq!(page(&app), Page::Team);
+    app
+}
+
+fn back_key(app: &App) {
+    app.window.window().dispatch_event(WindowEvent::KeyPressed {
+        text: Key::Escape.into(),
+    });
+    app.window
+        .window()
+        .dispatch_event(WindowEvent::KeyReleased {
+            text: Key::Escape.into(),
+        });
+}
+
+fn turn_number(app: &App, name: &str) -> f64 {
+    let v = value(app, &format!("turn of {name}"));
+    v.split_whitespace().next().unwrap().parse().unwrap()
+}
+
+#[test]
+fn first_launch_asks_for_the_cautions_then_shows_the_demo_team() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open(dir.path());
+    assert_eq!(page(&app), Page::Cautions);
+    press(&app, "acknowledge cautions");
+    assert_eq!(page(&app), Page::Team);
+    drop(app);
+    let app = open(dir.path());
+    assert_eq!(page(&app), Page::Team, "acknowledgement is remembered");
+}
+
+#[test]
+fn three_diver_team_entered_with_keypad_matches_the_core() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_acknowledged(dir.path());
+    press(&app, "new team");
+    press(&app, "add diver");
+    // Cylinders from the generic catalogue.
+    press(&app, "cylinders of Me");
+    press(&app, "pick Twin 10 L 300 bar");
+    press(&app, "cylinders of Diver 3");
+    press(&app, "pick Single 18 L 232 bar");
+    // Rename diver 3 with the letter pad.
+    press(&app, "name of diver 3");
+    press(&app, "clear");
+    type_keys(&app, "SOL");
+    press(&app, "done");
+    // Start pressures with the number pad.
+    for (who, digits) in [("Me", "285"), ("Buddy", "215"), ("Sol", "225")] {
+        press(&app, &format!("start pressure of {who}"));
+        press(&app, "clear");
+        type_keys(&app, digits);
+        assert_eq!(value(&app, "entry"), digits);
+        assert_eq!(value(&app, "entry problem"), "");
+        press(&app, "done");
+        assert_eq!(
+            value(&app, &format!("start pressure of {who}")),
+            format!("{digits} bar")
+        );
+    }
+    press(&app, "show turns");
+    assert_eq!(page(&app), Page::Turns);
+
+    // The same team, built directly on the planning core.
+    let stamped = |count, water_l, working_bar| CylinderSet {
+        count,
+        spec: CylinderSpec::Stamped {
+            water_l,
+            working_bar,
+        },
+    };
+    let mut input = TeamFile::parse(turnsheet::app::session::DEMO_TEAM)
+        .unwrap()
+        .to_input()
+        .unwrap();
+    input.divers.truncate(2);
+    let mut third = input.divers[1].clone();
+    input.depth = None;
+    input.water_temp = turnsheet::plan::Temperature::from_celsius(20.0);
+    for (d, (name, set, start)) in input
+        .divers
+        .iter_mut()
+        .chain(std::iter::once(&mut third))
+        .zip([
+            ("Me", stamped(2, 10.0, 300.0), 285.0),
+            ("Buddy", stamped(2, 12.0, 232.0), 215.0),
+            ("Sol", stamped(1, 18.0, 232.0), 225.0),
+        ])
+    {
+        d.name = name.into();
+        d.cylinders = set;
+        d.start = Pressure::from_bar(start);
+        d.mix = Mix::AIR;
+        d.sac_l_per_min = None;
+    }
+    input.divers.push(third);
+    let plan = plan_team(&input).unwrap();
+    for d in &plan.divers {
+        assert_eq!(turn_number(&app, &d.name), d.turn_shown_value, "{}", d.name);
+    }
+    // Sol's single 18 L holds the least gas: Sol controls.
+    let sol = find(&app, "turn of Sol");
+    assert_eq!(
+        sol.accessible_description().unwrap_or_default(),
+        "controlling diver"
+    );
+    assert_eq!(plan.controlling_diver().name, "Sol");
+}
+
+#[test]
+fn invalid_entry_shows_its_reason_and_leaves_the_plan_alone() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_acknowledged(dir.path());
+    let before = value(&app, "team summary");
+    press(&app, "start pressure of Ines");
+    press(&app, "clear");
+    type_keys(&app, "360");
+    let reason = value(&app, "entry problem");
+    assert!(reason.contains("1.5 × the working pressure"), "{reason}");
+    assert_eq!(value(&app, "team summary"), before);
+    press(&app, "done"); // disabled while invalid
+    assert!(
+        app.session.borrow().entry.is_some(),
+        "done must not accept an invalid entry"
+    );
+    // A valid value updates the plan live, on every key press.
+    press(&app, "delete");
+    press(&app, "delete");
+    type_keys(&app, "00");
+    assert_eq!(value(&app, "entry problem"), "");
+    assert_ne!(value(&app, "team summary"), before);
+    // Cancel restores the start pressure and the plan.
+    press(&app, "cancel entry");
+    assert_eq!(value(&app, "team summary"), before);
+    assert_eq!(value(&app, "start pressure of Ines"), "218 bar");
+}
+
+#[test]
+fn locker_add_edit_delete_survive_a_restart() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    {
+        let app = open_acknowledged(dir.path());
+        press(&app, "Locker");
+        press(&app, "+ New");
+        assert_eq!(page(&app), Page::LockerEdit);
+        press(&app, "edit NAME");
+        type_keys(&app, "DEEP");
+        press(&app, "done");
+        press(&app, "edit WATER CAPACITY PER CYLINDER");
+        type_keys(&app, "45");
+        assert!(value(&app, "entry problem").contains("allowed 0.5 to 30 L"));
+        press(&app, "delete");
+        press(&app, "delete");
+        type_keys(&app, "15");
+        press(&app, "done");
+        press(&app, "edit WORKING PRESSURE");
+        type_keys(&app, "232");
+        press(&app, "done");
+        press(&app, "Save");
+        assert_eq!(page(&app), Page::Locker);
+        assert_eq!(value(&app, "locker entry"), "Deep");
+    }
+    {
+        let app = open_acknowledged(dir.path());
+        press(&app, "Locker");
+        assert_eq!(value(&app, "locker entry"), "Deep");
+        press(&app, "edit Deep");
+        press(&app, "fewer cylinders");
+        press(&app, "Save");
+        // A second set, then delete it with undo.
+        press(&app, "copy Aluminium 40 (stage)");
+        press(&app, "Save");
+        press(&app, "delete Aluminium 40 (stage)");
+        press(&app, "undo delete");
+        press(&app, "delete Aluminium 40 (stage)");
+    }
+    let app = open_acknowledged(dir.path());
+    let locker = &app.session.borrow().locker.file;
+    assert_eq!(locker.entries.len(), 1);
+    assert_eq!(locker.entries[0].name, "Deep");
+    assert_eq!(locker.entries[0].cylinders.count, 1);
+    assert_eq!(locker.entries[0].cylinders.water_l, Some(15.0));
+    assert!(locker.entries[0].mine);
+}
+
+#[test]
+fn corrupt_locker_is_kept_aside_and_the_app_starts() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    std::fs::write(
+        dir.path().join("locker.json"),
+        "{\"schema\": 1, \"entries\": [oops",
+    )
+    .unwrap();
+    let app = open_acknowledged(dir.path());
+    let msg = value(&app, "message");
+    assert!(
+        msg.contains("cylinder locker") && msg.contains("unreadable"),
+        "{msg}"
+    );
+    let kept: Vec<_> = std::fs::read_dir(dir.path())
+        .unwrap()
+        .filter_map(|e| e.ok())
+        .filter(|e| {
+            e.file_name()
+                .to_string_lossy()
+                .starts_with("locker.json.unreadable")
+        })
+        .collect();
+    assert_eq!(kept.len(), 1);
+    assert!(
+        std::fs::read_to_string(kept[0].path())
+            .unwrap()
+            .contains("oops")
+    );
+    press(&app, "dismiss message");
+    assert_eq!(
+        ElementHandle::find_by_accessible_label(&app.window, "message").count(),
+        0
+    );
+}
+
+#[test]
+fn back_goes_one_page_back_and_is_rejected_on_the_team_page() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_acknowledged(dir.path());
+    press(&app, "show turns");
+    press(&app, "Buddy view");
+    assert_eq!(page(&app), Page::Buddy);
+    back_key(&app);
+    assert_eq!(page(&app), Page::Turns);
+    back_key(&app);
+    assert_eq!(page(&app), Page::Team);
+    back_key(&app);
+    assert_eq!(page(&app), Page::Team);
+    assert!(
+        !app.window.global::<Nav>().invoke_back(),
+        "Back on the Team page is left to the system"
+    );
+
+    press(&app, "Settings");
+    press(&app, "open locker");
+    press(&app, "+ New");
+    assert_eq!(page(&app), Page::LockerEdit);
+    press(&app, "edit NAME");
+    back_key(&app); // closes the keypad first
+    assert_eq!(page(&app), Page::LockerEdit);
+    assert!(app.session.borrow().entry.is_none());
+    back_key(&app);
+    assert_eq!(page(&app), Page::Locker);
+    back_key(&app);
+    assert_eq!(page(&app), Page::Settings);
+    back_key(&app);
+    assert_eq!(page(&app), Page::Team);
+
+    // The buddy view closes on any tap, too.
+    press(&app, "show turns");
+    press(&app, "Buddy view");
+    press(&app, "close buddy view");
+    assert_eq!(page(&app), Page::Turns);
+    // On-screen back button.
+    press(&app, "back");
+    assert_eq!(page(&app), Page::Team);
+}
+
+#[test]
+fn units_switch_shows_numbers_consistent_with_the_core() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_acknowledged(dir.path());
+    press(&app, "Settings");
+    press(&app, "units imperial");
+    back_key(&app);
+    assert_eq!(value(&app, "start pressure of Ines"), "3161 psi");
+    press(&app, "show turns");
+    let mut input = TeamFile::parse(turnsheet::app::session::DEMO_TEAM)
+        .unwrap()
+        .to_input()
+        .unwrap();
+    input.units = UnitSystem::Imperial;
+    input.gauge_step = 100.0;
+    let plan = plan_team(&input).unwrap();
+    for d in &plan.divers {
+        let shown = value(&app, &format!("turn of {}", d.name));
+        assert_eq!(shown, format!("{} psi", d.turn_shown_value), "{}", d.name);
+    }
+    // The buddy view says the unit once and shows the same digits.
+    press(&app, "Buddy view");
+    for d in &plan.divers {
+        let row = find(&app, &format!("buddy turn of {}", d.name));
+        assert_eq!(
+            row.accessible_value().unwrap(),
+            format!("{}", d.turn_shown_value)
+        );
+    }
+}
