@@ -223,9 +223,14 @@ pub fn preset_rows() -> Vec<(String, String)> {
     presets()
         .iter()
         .map(|p| {
+            let water = p.set.spec.water_per_cylinder(crate::plan::ModelKind::Real);
             (
                 p.name.to_string(),
-                format!("{} · {}", p.set.describe(), p.material.name()),
+                format!(
+                    "{} · {} L water each",
+                    p.material.name(),
+                    fmt_num((water.litres() * 10.0).round() / 10.0)
+                ),
             )
         })
         .collect()
