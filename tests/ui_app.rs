@@ -362,3 +362,51 @@ fn units_switch_shows_numbers_consistent_with_the_core() {
         );
     }
 }
+
+#[test]
+fn every_button_is_a_big_touch_target() {
+    use i_slint_backend_testing::{AccessibleRole, ElementQuery};
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_acknowledged(dir.path());
+    let check = |what: &str| {
+        let buttons = ElementQuery::from_root(&app.window)
+            .match_descendants()
+            .match_accessible_role(AccessibleRole::Button)
+            .find_all();
+        assert!(buttons.len() >= 3, "{what}: only {} buttons", buttons.len());
+        for b in buttons {
+            let size = b.size();
+            let label = b.accessible_label().unwrap_or_default();
+            // 64 px = 64 dp on Android: the minimum touch target for wet hands.
+            assert!(
+                size.width >= 63.9 && size.height >= 63.9,
+                "{what}: button {label:?} is {}×{} px",
+                size.width,
+                size.height
+            );
+        }
+    };
+    check("team page");
+    press(&app, "start pressure of Ines");
+    check("number pad");
+    press(&app, "cancel entry");
+    press(&app, "name of diver 1");
+    check("letter pad");
+    press(&app, "cancel entry");
+    press(&app, "mix of Ines");
+    check("mix picker");
+    press(&app, "cancel mix");
+    press(&app, "cylinders of Ines");
+    check("cylinder picker");
+    press(&app, "cancel pick");
+    press(&app, "show turns");
+    check("turns page");
+    press(&app, "back");
+    press(&app, "Settings");
+    check("settings page");
+    press(&app, "open locker");
+    check("locker page");
+    press(&app, "+ New");
+    check("locker editor");
+}

@@ -8,14 +8,31 @@ use crate::plan::{ContentModel, HandModel, Mix, Pressure, RealGasModel, Temperat
 
 use super::PressureUnit;
 
+#[derive(clap::Args, Debug)]
 pub struct GasArgs {
+    /// Water capacity in litres (all cylinders of the set together).
+    #[arg(long)]
     pub litres: f64,
+    /// Gauge pressure, in --unit.
+    #[arg(long)]
     pub pressure: f64,
+    /// Pressure unit.
+    #[arg(long, value_enum, default_value_t = PressureUnit::Bar)]
     pub unit: PressureUnit,
+    /// Oxygen, percent.
+    #[arg(long, default_value_t = 21.0)]
     pub o2: f64,
+    /// Helium, percent.
+    #[arg(long, default_value_t = 0.0)]
     pub he: f64,
+    /// Gas temperature now, °C.
+    #[arg(long, default_value_t = 20.0)]
     pub temp: f64,
+    /// Predict the pressure once the gas reaches this temperature, °C.
+    #[arg(long)]
     pub to_temp: Option<f64>,
+    /// Print machine-readable JSON.
+    #[arg(long)]
     pub json: bool,
 }
 

@@ -45,32 +45,7 @@ pub enum Command {
         json: bool,
     },
     /// Gas content of a cylinder (both models), and its pressure after a temperature change.
-    Gas {
-        /// Water capacity in litres (all cylinders of the set together).
-        #[arg(long)]
-        litres: f64,
-        /// Gauge pressure, in --unit.
-        #[arg(long)]
-        pressure: f64,
-        /// Pressure unit.
-        #[arg(long, value_enum, default_value_t = PressureUnit::Bar)]
-        unit: PressureUnit,
-        /// Oxygen, percent.
-        #[arg(long, default_value_t = 21.0)]
-        o2: f64,
-        /// Helium, percent.
-        #[arg(long, default_value_t = 0.0)]
-        he: f64,
-        /// Gas temperature now, °C.
-        #[arg(long, default_value_t = 20.0)]
-        temp: f64,
-        /// Predict the pressure once the gas reaches this temperature, °C.
-        #[arg(long)]
-        to_temp: Option<f64>,
-        /// Print machine-readable JSON.
-        #[arg(long)]
-        json: bool,
-    },
+    Gas(gas_cmd::GasArgs),
 }
 
 #[derive(clap::ValueEnum, Clone, Copy, Debug, PartialEq, Eq)]
@@ -83,25 +58,7 @@ pub enum PressureUnit {
 pub fn run(command: Command) -> i32 {
     let result = match command {
         Command::Plan { team, json } => plan_cmd::run(&team, json),
-        Command::Gas {
-            litres,
-            pressure,
-            unit,
-            o2,
-            he,
-            temp,
-            to_temp,
-            json,
-        } => gas_cmd::run(&gas_cmd::GasArgs {
-            litres,
-            pressure,
-            unit,
-            o2,
-            he,
-            temp,
-            to_temp,
-            json,
-        }),
+        Command::Gas(args) => gas_cmd::run(&args),
     };
     match result {
         Ok(text) => {
