@@ -123,7 +123,16 @@ impl CylindersFile {
 impl TeamFile {
     /// Parse JSON text; syntax errors and unknown keys name the place.
     pub fn parse(text: &str) -> Result<TeamFile, InputError> {
-        serde_json::from_str(text).map_err(|e| InputError::new("team file", e.to_string()))
+        let de = &mut serde_json::Deserializer::from_str(text);
+        serde_path_to_error::deserialize(de).map_err(|e| {
+            let path = e.path().to_string();
+            let field = if path.is_empty() || path == "." {
+                "team file".to_string()
+            } else {
+                path
+            };
+            InputError::new(field, format!("team file: {}", e.inner()))
+        })
     }
 
     /// Convert to planning inputs (ranges are checked by `TeamInput::validate`).
@@ -225,6 +234,14 @@ mod tests {
         let e =
             TeamFile::parse(&TEXT.replace("\"water\":\"salt\"", "\"watr\":\"salt\"")).unwrap_err();
         assert!(e.message.contains("watr"), "{e}");
+    }
+
+    #[test]
+    fn type_errors_name_the_field() {
+        let e = TeamFile::parse(&TEXT.replace("\"count\":2", "\"count\":300")).unwrap_err();
+        assert_eq!(e.field, "divers[0].cylinders.count", "{e}");
+        let e = TeamFile::parse(&TEXT.replace("\"start\":3300", "\"start\":\"full\"")).unwrap_err();
+        assert_eq!(e.field, "divers[1].start", "{e}");
     }
 
     #[test]
