@@ -104,4 +104,10 @@ fn main() {
         s.back();
         s.go(Screen::Settings);
     });
+    shot("12-fill", &|s| {
+        s.back();
+        s.fill.pressure = turnsheet::plan::Pressure::from_bar(232.0);
+        s.fill.temperature = turnsheet::plan::Temperature::from_celsius(32.0);
+        s.go(Screen::Fill);
+    });
 }

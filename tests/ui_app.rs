@@ -409,4 +409,42 @@ fn every_button_is_a_big_touch_target() {
     check("locker page");
     press(&app, "+ New");
     check("locker editor");
+    back_key(&app);
+    back_key(&app);
+    back_key(&app);
+    press(&app, "fill check");
+    check("fill page");
+}
+
+#[test]
+fn fill_check_predicts_the_in_water_pressure() {
+    // Reference (CoolProp 8.0.0, tests/reference/temperature_change.csv): air filled to
+    // 232 bar at 35 °C reads 207.16 bar at 12 °C. Shown rounded down: 207 bar.
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_acknowledged(dir.path());
+    press(&app, "fill check");
+    assert_eq!(page(&app), Page::Fill);
+    // The demo team breathes EAN32: switch Ines to air first.
+    back_key(&app);
+    press(&app, "mix of Ines");
+    press(&app, "Air");
+    press(&app, "mix done");
+    press(&app, "fill check");
+    press(&app, "fill pressure");
+    press(&app, "clear");
+    type_keys(&app, "232");
+    press(&app, "done");
+    press(&app, "fill temperature");
+    press(&app, "clear");
+    type_keys(&app, "35");
+    press(&app, "done");
+    press(&app, "water temperature for the fill check");
+    press(&app, "clear");
+    type_keys(&app, "12");
+    press(&app, "done");
+    assert_eq!(value(&app, "expected pressure in the water"), "207 bar");
+    press(&app, "use as start pressure");
+    back_key(&app);
+    assert_eq!(value(&app, "start pressure of Ines"), "207 bar");
 }

@@ -9,6 +9,7 @@ pub enum Screen {
     Locker,
     LockerEdit,
     Settings,
+    Fill,
 }
 
 #[derive(Clone, Debug)]

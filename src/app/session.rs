@@ -34,6 +34,8 @@ pub enum EntryTarget {
     LockerNote,
     LockerFirst,
     LockerSecond,
+    FillPressure,
+    FillTemp,
 }
 
 #[derive(Clone, Debug)]
@@ -45,6 +47,15 @@ pub struct Entry {
     pub unit: String,
     /// Why the current text cannot be used; empty when it can.
     pub reason: String,
+}
+
+/// The fill-to-water check: a fill pressure and the temperature at the fill station,
+/// for one diver's gas.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct FillCheck {
+    pub diver: usize,
+    pub pressure: crate::plan::Pressure,
+    pub temperature: Temperature,
 }
 
 /// An open picker.
@@ -64,6 +75,7 @@ pub struct Session {
     pub nav: NavController,
     pub entry: Option<Entry>,
     pub picker: Picker,
+    pub fill: FillCheck,
     pub status: Vec<String>,
 }
 
@@ -107,9 +119,15 @@ impl Session {
         } else {
             Screen::Team
         };
+        let fill = FillCheck {
+            diver: 0,
+            pressure: team.input().divers[0].cylinders.working_pressure(),
+            temperature: Temperature::from_celsius(team.input().water_temp.celsius() + 15.0),
+        };
         Session {
             store,
             settings,
+            fill,
             team,
             locker: LockerController::new(loaded.locker),
             nav: NavController::new(first),
@@ -248,6 +266,7 @@ impl Session {
         if i < self.team.len() {
             let r = self.team.remove_diver(i);
             self.team_result(r);
+            self.fill.diver = self.fill.diver.min(self.team.len() - 1);
         }
     }
 
@@ -499,6 +518,43 @@ impl Session {
         }
     }
 
+    // ---- fill to water -----------------------------------------------------------
+
+    /// Show the check for the next (`dir` > 0) or previous diver.
+    pub fn fill_cycle(&mut self, dir: i32) {
+        let n = self.team.len() as i32;
+        self.fill.diver = ((self.fill.diver as i32 + dir).rem_euclid(n)) as usize;
+    }
+
+    pub fn nudge_fill_temp(&mut self, dir: i32) {
+        let u = self.units();
+        let v = u.temperature_value(self.fill.temperature).round() + f64::from(dir.signum());
+        let t = u.temperature(v);
+        if (-20.0..=60.0).contains(&t.celsius()) {
+            self.fill.temperature = t;
+        }
+    }
+
+    /// Predicted pressure once the gas has reached the water temperature.
+    pub fn fill_prediction(&self) -> crate::plan::temperature::TemperatureChange {
+        let d = self.fill.diver.min(self.team.len() - 1);
+        crate::plan::temperature::pressure_after_temperature_change(
+            self.team.input().divers[d].mix,
+            self.fill.pressure,
+            self.fill.temperature,
+            self.team.input().water_temp,
+        )
+    }
+
+    /// Use the predicted in-water pressure (rounded down) as the diver's start.
+    pub fn fill_use_as_start(&mut self) {
+        let d = self.fill.diver.min(self.team.len() - 1);
+        let u = self.units();
+        let v = (u.pressure_value(self.fill_prediction().real) + 1e-6).floor();
+        let r = self.team.set_start(d, u.pressure(v));
+        self.team_result(r);
+    }
+
     // ---- keypad entry ------------------------------------------------------------
 
     pub fn open_entry(&mut self, target: EntryTarget) {
@@ -557,6 +613,22 @@ impl Session {
                     false,
                 ),
                 "Water temperature (the gas cools to it)".to_string(),
+                u.temperature_label().to_string(),
+            ),
+            EntryTarget::FillPressure => (
+                KeypadBuffer::digits(
+                    &fmt_num(u.pressure_value(self.fill.pressure).floor()),
+                    false,
+                ),
+                "Pressure at the fill station".to_string(),
+                u.pressure_label().to_string(),
+            ),
+            EntryTarget::FillTemp => (
+                KeypadBuffer::digits(
+                    &fmt_num(u.temperature_value(self.fill.temperature).round()),
+                    false,
+                ),
+                "Gas temperature at the fill (a warm cylinder)".to_string(),
                 u.temperature_label().to_string(),
             ),
             EntryTarget::DiverName(i) => (
@@ -716,6 +788,23 @@ impl Session {
                 }
             }
             EntryTarget::LockerNote => Ok(()),
+            EntryTarget::FillPressure => match v {
+                None => Err(InputError::new("fill pressure", "enter a pressure")),
+                Some(v) => {
+                    let max = u
+                        .pressure_value(crate::plan::Pressure::from_bar(400.0))
+                        .floor();
+                    check_range("fill pressure", v, 1.0, max, u.pressure_label())
+                }
+            },
+            EntryTarget::FillTemp => match v {
+                None => Err(InputError::new("fill temperature", "enter a temperature")),
+                Some(v) => {
+                    let lo = u.temperature_value(Temperature::from_celsius(0.0)).ceil();
+                    let hi = u.temperature_value(Temperature::from_celsius(60.0)).floor();
+                    check_range("fill temperature", v, lo, hi, u.temperature_label())
+                }
+            },
             EntryTarget::LockerFirst | EntryTarget::LockerSecond => {
                 let first = entry.target == EntryTarget::LockerFirst;
                 match self.locker.draft.as_ref() {
@@ -779,6 +868,16 @@ impl Session {
             EntryTarget::LockerNote => {
                 if let Some(d) = self.locker.draft.as_mut() {
                     d.note = text;
+                }
+            }
+            EntryTarget::FillPressure => {
+                if let Some(v) = v {
+                    self.fill.pressure = self.units().pressure(v);
+                }
+            }
+            EntryTarget::FillTemp => {
+                if let Some(v) = v {
+                    self.fill.temperature = self.units().temperature(v);
                 }
             }
             EntryTarget::LockerFirst => {

@@ -1,6 +1,7 @@
 //! Adapters: connect the session to each page's Slint global and push view data back.
 //! Every callback runs one session method, then the views are refreshed.
 
+mod fill_adapter;
 mod keypad_adapter;
 mod locker_adapter;
 mod nav_adapter;
@@ -47,6 +48,7 @@ pub fn connect_all(ui: &AppWindow, s: &Shared) {
     keypad_adapter::connect(ui, s);
     locker_adapter::connect(ui, s);
     settings_adapter::connect(ui, s);
+    fill_adapter::connect(ui, s);
 }
 
 pub fn refresh_all(ui: &AppWindow, s: &Session) {
@@ -57,4 +59,5 @@ pub fn refresh_all(ui: &AppWindow, s: &Session) {
     keypad_adapter::refresh(ui, s);
     locker_adapter::refresh(ui, s);
     settings_adapter::refresh(ui, s);
+    fill_adapter::refresh(ui, s);
 }

@@ -16,6 +16,7 @@ fn page(s: Screen) -> Page {
         Screen::Locker => Page::Locker,
         Screen::LockerEdit => Page::LockerEdit,
         Screen::Settings => Page::Settings,
+        Screen::Fill => Page::Fill,
     }
 }
 
@@ -28,6 +29,7 @@ fn screen(p: Page) -> Screen {
         Page::Locker => Screen::Locker,
         Page::LockerEdit => Screen::LockerEdit,
         Page::Settings => Screen::Settings,
+        Page::Fill => Screen::Fill,
     }
 }
 
