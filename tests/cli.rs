@@ -246,3 +246,25 @@ fn help_explains_the_commands() {
     let text = String::from_utf8(out.stdout).unwrap();
     assert!(text.contains("plan") && text.contains("gas"), "{text}");
 }
+
+#[test]
+fn stages_get_a_drop_pressure() {
+    let mut t = demo();
+    t["divers"][0]["stage"] = serde_json::json!({
+        "cylinders": {"water_l": 11.1, "working_bar": 207}, "mix": {"o2": 0.5}, "start": 200});
+    t["divers"][2]["stage"] = serde_json::json!({
+        "cylinders": {"water_l": 7, "working_bar": 232}, "mix": {"o2": 0.5}, "start": 200});
+    let (code, out, err) = plan_json(&t);
+    assert_eq!(code, 0, "{err}");
+    let v: serde_json::Value = serde_json::from_str(&out).unwrap();
+    // Hand arithmetic as in tests/hand_method.rs: drops at 160 and 140 bar.
+    assert_eq!(v["divers"][0]["stage_drop"].as_f64(), Some(160.0));
+    assert_eq!(v["divers"][2]["stage_drop"].as_f64(), Some(140.0));
+    assert_eq!(v["divers"][2]["stage_controlling"].as_bool(), Some(true));
+    assert!(v["divers"][1]["stage_drop"].is_null());
+    // A bad stage names its field.
+    t["divers"][2]["stage"]["start"] = 400.into();
+    let (code, _, err) = plan_json(&t);
+    assert_eq!(code, 2);
+    assert!(err.contains("divers[2].stage.start"), "{err}");
+}

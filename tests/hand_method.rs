@@ -34,6 +34,7 @@ fn diver(name: &str, cylinders: CylinderSet, start: Pressure) -> DiverInput {
         mix: Mix::AIR,
         start,
         sac_l_per_min: None,
+        stage: None,
     }
 }
 
@@ -184,5 +185,52 @@ fn high_fill_real_gas_is_lower_than_hand_and_hand_is_kept() {
     for d in &plan.divers {
         assert!(d.turn_real.bar() < d.turn_hand.bar());
         assert!(d.turn_shown.bar() >= d.turn_hand.bar() - 1e-9);
+    }
+}
+
+#[test]
+fn stages_are_matched_on_volume_like_the_main_gas() {
+    // Worked by hand (common practice: each stage on its own thirds, matched across the team):
+    //   A: stage 11.1 L at 200 bar → 2220 L; a third 740 L
+    //   B: stage 7 L at 200 bar → 1400 L; a third 466.7 L → B's stage controls
+    //   A drops 466.7 / 11.1 = 42.04 bar → 157.96 → shown 160 bar
+    //   B drops 466.7 / 7 = 66.67 bar → 133.33 → shown 140 bar
+    use turnsheet::plan::StageInput;
+    let mut t = team(
+        UnitSystem::Metric,
+        Rule::Thirds,
+        10.0,
+        vec![
+            diver("A", stamped(2, 12.0, 232.0), Pressure::from_bar(220.0)),
+            diver("B", stamped(2, 12.0, 232.0), Pressure::from_bar(220.0)),
+            diver("C", stamped(2, 12.0, 232.0), Pressure::from_bar(220.0)),
+        ],
+    );
+    t.divers[0].stage = Some(StageInput {
+        cylinders: stamped(1, 11.1, 207.0),
+        mix: Mix::nitrox(0.5),
+        start: Pressure::from_bar(200.0),
+    });
+    t.divers[1].stage = Some(StageInput {
+        cylinders: stamped(1, 7.0, 232.0),
+        mix: Mix::nitrox(0.5),
+        start: Pressure::from_bar(200.0),
+    });
+    let plan = plan_team(&t).unwrap();
+    let allowance = 7.0 * 200.0 / 3.0;
+    let a = plan.divers[0].stage.as_ref().unwrap();
+    let b = plan.divers[1].stage.as_ref().unwrap();
+    assert!((a.drop_hand.bar() - (200.0 - allowance / 11.1)).abs() < 1e-9);
+    assert!((b.drop_hand.bar() - (200.0 - allowance / 7.0)).abs() < 1e-9);
+    assert_eq!(a.drop_shown_value, 160.0);
+    assert_eq!(b.drop_shown_value, 140.0);
+    assert!(b.controlling && !a.controlling);
+    assert!(plan.divers[2].stage.is_none());
+    // The main gas plan is unchanged by stages.
+    t.divers[0].stage = None;
+    t.divers[1].stage = None;
+    let without = plan_team(&t).unwrap();
+    for (x, y) in plan.divers.iter().zip(&without.divers) {
+        assert_eq!(x.turn_shown_value, y.turn_shown_value);
     }
 }

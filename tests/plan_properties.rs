@@ -2,8 +2,8 @@
 
 use proptest::prelude::*;
 use turnsheet::plan::{
-    CylinderSet, CylinderSpec, Depth, DiverInput, Mix, Pressure, Rule, TeamInput, Temperature,
-    UnitSystem, Water, plan_team,
+    CylinderSet, CylinderSpec, Depth, DiverInput, Mix, Pressure, Rule, StageInput, TeamInput,
+    Temperature, UnitSystem, Water, plan_team,
 };
 
 fn cylinders() -> impl Strategy<Value = CylinderSet> {
@@ -47,14 +47,26 @@ fn mix() -> impl Strategy<Value = Mix> {
     ]
 }
 
+fn stage() -> impl Strategy<Value = StageInput> {
+    (cylinders(), mix(), 0.3f64..=1.2).prop_map(|(cylinders, mix, fill)| {
+        let wp = cylinders.working_pressure().bar();
+        StageInput {
+            cylinders,
+            mix,
+            start: Pressure::from_bar((wp * fill).min(399.0)),
+        }
+    })
+}
+
 fn diver(i: usize) -> impl Strategy<Value = DiverInput> {
     (
         cylinders(),
         mix(),
         0.3f64..=1.4,
         prop::option::of(10.0f64..=30.0),
+        prop::option::weighted(0.4, stage()),
     )
-        .prop_map(move |(cylinders, mix, fill, sac)| {
+        .prop_map(move |(cylinders, mix, fill, sac, stage)| {
             let wp = cylinders.working_pressure().bar();
             let start = (wp * fill).min(399.0);
             DiverInput {
@@ -63,6 +75,7 @@ fn diver(i: usize) -> impl Strategy<Value = DiverInput> {
                 mix,
                 start: Pressure::from_bar(start),
                 sac_l_per_min: sac,
+                stage,
             }
         })
 }
@@ -120,7 +133,24 @@ proptest! {
                 prop_assert!(shown >= u.pressure_value(d.turn_hand) - 1e-9);
             }
             prop_assert!(d.used_real.litres() <= plan.team_allowance_real.litres() + 1e-6);
+            match (&t.divers[i].stage, &d.stage) {
+                (None, None) => {}
+                (Some(input), Some(st)) => {
+                    let start = u.pressure_value(input.start);
+                    let drop = st.drop_shown_value;
+                    prop_assert!(drop <= start + 1e-9);
+                    if drop < start - 1e-9 {
+                        let k = drop / t.gauge_step;
+                        prop_assert!((k - k.round()).abs() < 1e-9);
+                        prop_assert!(drop >= u.pressure_value(st.drop_real) - 1e-9);
+                        prop_assert!(drop >= u.pressure_value(st.drop_hand) - 1e-9);
+                    }
+                }
+                _ => prop_assert!(false, "stage plan must exist exactly when a stage is carried"),
+            }
         }
+        prop_assert!(plan.divers.iter().filter(|d| d.stage.as_ref().is_some_and(|s| s.controlling)).count()
+            == usize::from(t.divers.iter().any(|d| d.stage.is_some())));
         let guaranteed = t.rule.guaranteed_margin();
         prop_assert!(plan.stress.margin >= guaranteed - 1e-9,
             "margin {} below {guaranteed}", plan.stress.margin);

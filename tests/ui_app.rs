@@ -157,6 +157,7 @@ fn three_diver_team_entered_with_keypad_matches_the_core() {
         d.start = Pressure::from_bar(start);
         d.mix = Mix::AIR;
         d.sac_l_per_min = None;
+        d.stage = None;
     }
     input.divers.push(third);
     let plan = plan_team(&input).unwrap();
@@ -235,11 +236,11 @@ fn locker_add_edit_delete_survive_a_restart() {
         press(&app, "fewer cylinders");
         press(&app, "Save");
         // A second set, then delete it with undo.
-        press(&app, "copy Aluminium 40 (stage)");
+        press(&app, "copy Aluminium 40");
         press(&app, "Save");
-        press(&app, "delete Aluminium 40 (stage)");
+        press(&app, "delete Aluminium 40");
         press(&app, "undo delete");
-        press(&app, "delete Aluminium 40 (stage)");
+        press(&app, "delete Aluminium 40");
     }
     let app = open_acknowledged(dir.path());
     let locker = &app.session.borrow().locker.file;
@@ -447,4 +448,84 @@ fn fill_check_predicts_the_in_water_pressure() {
     press(&app, "use as start pressure");
     back_key(&app);
     assert_eq!(value(&app, "start pressure of Ines"), "207 bar");
+}
+
+#[test]
+fn stages_get_drop_pressures_matching_the_core() {
+    use turnsheet::plan::StageInput;
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_acknowledged(dir.path());
+    // The demo team carries stages already; replace them.
+    press(&app, "stage of Ines");
+    press(&app, "pick Aluminium 40");
+    press(&app, "stage mix of Ines");
+    press(&app, "EAN50");
+    press(&app, "mix done");
+    press(&app, "stage pressure of Ines");
+    press(&app, "clear");
+    type_keys(&app, "200");
+    press(&app, "done");
+    press(&app, "stage of Sol");
+    press(&app, "pick Single 10 L 200 bar");
+    press(&app, "stage pressure of Sol");
+    press(&app, "clear");
+    type_keys(&app, "190");
+    press(&app, "done");
+    press(&app, "show turns");
+
+    let mut input = TeamFile::parse(turnsheet::app::session::DEMO_TEAM)
+        .unwrap()
+        .to_input()
+        .unwrap();
+    input.divers[0].stage = Some(StageInput {
+        cylinders: CylinderSet {
+            count: 1,
+            spec: CylinderSpec::Rated {
+                rated_cuft: 40.0,
+                rated_psi: 3000.0,
+            },
+        },
+        mix: Mix::nitrox(0.5),
+        start: Pressure::from_bar(200.0),
+    });
+    input.divers[2].stage = Some(StageInput {
+        cylinders: CylinderSet {
+            count: 1,
+            spec: CylinderSpec::Stamped {
+                water_l: 10.0,
+                working_bar: 200.0,
+            },
+        },
+        mix: Mix::nitrox(0.5),
+        start: Pressure::from_bar(190.0),
+    });
+    let plan = plan_team(&input).unwrap();
+    for i in [0, 2] {
+        let d = &plan.divers[i];
+        let st = d.stage.as_ref().unwrap();
+        let text = value(&app, &format!("stage drop of {}", d.name));
+        assert!(
+            text.starts_with(&format!("Stage: drop at {} bar", st.drop_shown_value)),
+            "{text}"
+        );
+    }
+    // The main turns do not change with stages.
+    for d in &plan.divers {
+        assert_eq!(turn_number(&app, &d.name), d.turn_shown_value);
+    }
+    press(&app, "back");
+    press(&app, "stage of Sol");
+    press(&app, "no stage");
+    assert!(app.session.borrow().team.input().divers[2].stage.is_none());
+    press(&app, "show turns");
+    let warnings: Vec<String> = ElementHandle::find_by_accessible_label(&app.window, "warning")
+        .map(|w| w.accessible_value().unwrap_or_default().to_string())
+        .collect();
+    assert!(
+        warnings
+            .iter()
+            .any(|w| w.contains("Only one diver carries a stage")),
+        "{warnings:?}"
+    );
 }

@@ -16,6 +16,7 @@ use super::team_controller::{TeamController, step_options};
 
 /// The demo team of an invented scenario, for the first launch.
 pub const DEMO_TEAM: &str = include_str!("../../examples/hollowmere-team.json");
+const DEMO_STAGE_LABELS: [&str; 3] = ["Aluminium 40", "", "Single 7 L 232 bar"];
 const DEMO_LABELS: [&str; 3] = [
     "Twin 12 L 232 bar",
     "Sidemount 2× aluminium 80",
@@ -26,6 +27,7 @@ const DEMO_LABELS: [&str; 3] = [
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
 pub enum EntryTarget {
     Start(usize),
+    StageStart(usize),
     Sac(usize),
     Depth,
     WaterTemp,
@@ -58,13 +60,21 @@ pub struct FillCheck {
     pub temperature: Temperature,
 }
 
-/// An open picker.
+/// An open picker, for a diver's main gas or stage.
 #[derive(Clone, Copy, Debug, PartialEq)]
 pub enum Picker {
     None,
-    Cylinders(usize),
-    /// Diver, O2 %, He %.
-    Mix(usize, i32, i32),
+    Cylinders {
+        diver: usize,
+        stage: bool,
+    },
+    /// O2 and He in percent.
+    Mix {
+        diver: usize,
+        stage: bool,
+        o2: i32,
+        he: i32,
+    },
 }
 
 pub struct Session {
@@ -80,12 +90,14 @@ pub struct Session {
 }
 
 fn demo_team(settings: &Settings) -> TeamController {
-    let mut input = TeamFile::parse(DEMO_TEAM)
-        .and_then(|f| f.to_input())
-        .expect("the bundled demo team is valid");
-    input.rule = settings.rule;
-    let mut t = TeamController::new(input, DEMO_LABELS.iter().map(|s| s.to_string()).collect())
-        .expect("the bundled demo team plans");
+    let state = crate::storage::team_state::TeamState {
+        schema: crate::storage::team_state::TEAM_SCHEMA,
+        team: TeamFile::parse(DEMO_TEAM).expect("the bundled demo team is valid"),
+        cylinder_labels: DEMO_LABELS.iter().map(|s| s.to_string()).collect(),
+        stage_labels: DEMO_STAGE_LABELS.iter().map(|s| s.to_string()).collect(),
+    };
+    let mut t = TeamController::from_state(&state).expect("the bundled demo team plans");
+    let _ = t.set_rule(settings.rule);
     let _ = t.set_units(settings.units);
     let _ = t.set_gauge_step(settings.gauge_step());
     t
@@ -285,6 +297,7 @@ impl Session {
             let _ = t.set_cylinders(i, set, &label);
             let _ = t.set_mix(i, Mix::AIR);
             let _ = t.set_sac(i, None);
+            let _ = t.set_stage_cylinders(i, None, "");
             let wp = set.working_pressure();
             let u = t.input().units;
             let start = crate::plan::matching::round_down_to_step(
@@ -303,33 +316,66 @@ impl Session {
 
     pub fn open_cylinder_picker(&mut self, i: usize) {
         if i < self.team.len() {
-            self.picker = Picker::Cylinders(i);
+            self.picker = Picker::Cylinders {
+                diver: i,
+                stage: false,
+            };
+        }
+    }
+
+    pub fn open_stage_picker(&mut self, i: usize) {
+        if i < self.team.len() {
+            self.picker = Picker::Cylinders {
+                diver: i,
+                stage: true,
+            };
         }
     }
 
     pub fn pick_locker(&mut self, idx: usize) {
-        let Picker::Cylinders(i) = self.picker else {
+        let Picker::Cylinders { diver, stage } = self.picker else {
             return;
         };
         let Some(e) = self.locker.file.entries.get(idx).cloned() else {
             return;
         };
         match e.cylinders.to_set("locker") {
-            Ok(set) => self.apply_cylinders(i, set, &e.name),
+            Ok(set) => self.apply_cylinders(diver, stage, set, &e.name),
             Err(err) => self.status.push(err.to_string()),
         }
     }
 
     pub fn pick_preset(&mut self, idx: usize) {
-        let Picker::Cylinders(i) = self.picker else {
+        let Picker::Cylinders { diver, stage } = self.picker else {
             return;
         };
         if let Some(p) = presets().get(idx) {
-            self.apply_cylinders(i, p.set, p.name);
+            self.apply_cylinders(diver, stage, p.set, p.name);
         }
     }
 
-    fn apply_cylinders(&mut self, i: usize, set: crate::plan::CylinderSet, label: &str) {
+    /// Take a diver's stage away.
+    pub fn pick_no_stage(&mut self) {
+        if let Picker::Cylinders { diver, stage: true } = self.picker {
+            let r = self.team.set_stage_cylinders(diver, None, "");
+            self.team_result(r);
+            self.picker = Picker::None;
+        }
+    }
+
+    fn apply_cylinders(
+        &mut self,
+        i: usize,
+        stage: bool,
+        set: crate::plan::CylinderSet,
+        label: &str,
+    ) {
+        if stage {
+            let r = self.team.set_stage_cylinders(i, Some(set), label);
+            self.team_result(r);
+            self.picker = Picker::None;
+            return;
+        }
         match self.team.set_cylinders(i, set, label) {
             Ok(reset) => {
                 if reset {
@@ -347,17 +393,35 @@ impl Session {
 
     pub fn open_mix_picker(&mut self, i: usize) {
         if let Some(d) = self.team.input().divers.get(i) {
-            self.picker = Picker::Mix(
-                i,
-                (d.mix.o2 * 100.0).round() as i32,
-                (d.mix.he * 100.0).round() as i32,
-            );
+            self.picker = Picker::Mix {
+                diver: i,
+                stage: false,
+                o2: (d.mix.o2 * 100.0).round() as i32,
+                he: (d.mix.he * 100.0).round() as i32,
+            };
+        }
+    }
+
+    pub fn open_stage_mix_picker(&mut self, i: usize) {
+        if let Some(st) = self
+            .team
+            .input()
+            .divers
+            .get(i)
+            .and_then(|d| d.stage.as_ref())
+        {
+            self.picker = Picker::Mix {
+                diver: i,
+                stage: true,
+                o2: (st.mix.o2 * 100.0).round() as i32,
+                he: (st.mix.he * 100.0).round() as i32,
+            };
         }
     }
 
     pub fn picker_mix(&self) -> Option<Mix> {
         match self.picker {
-            Picker::Mix(_, o2, he) => Some(Mix {
+            Picker::Mix { o2, he, .. } => Some(Mix {
                 o2: f64::from(o2) / 100.0,
                 he: f64::from(he) / 100.0,
             }),
@@ -376,25 +440,30 @@ impl Session {
     }
 
     pub fn nudge_mix(&mut self, o2_delta: i32, he_delta: i32) {
-        if let Picker::Mix(i, o2, he) = self.picker {
-            self.picker = Picker::Mix(
-                i,
-                (o2 + o2_delta).clamp(5, 100),
-                (he + he_delta).clamp(0, 95),
-            );
+        if let Picker::Mix { o2, he, .. } = &mut self.picker {
+            *o2 = (*o2 + o2_delta).clamp(5, 100);
+            *he = (*he + he_delta).clamp(0, 95);
         }
     }
 
+    /// The quick choices of the mix picker: air, EAN32, EAN50, Tx 21/35, Tx 18/45.
     pub fn quick_mix(&mut self, idx: usize) {
-        const QUICK: [(i32, i32); 5] = [(21, 0), (32, 0), (36, 0), (21, 35), (18, 45)];
-        if let (Picker::Mix(i, _, _), Some((o2, he))) = (self.picker, QUICK.get(idx)) {
-            self.picker = Picker::Mix(i, *o2, *he);
+        const QUICK: [(i32, i32); 5] = [(21, 0), (32, 0), (50, 0), (21, 35), (18, 45)];
+        if let (Picker::Mix { o2, he, .. }, Some((q_o2, q_he))) = (&mut self.picker, QUICK.get(idx))
+        {
+            *o2 = *q_o2;
+            *he = *q_he;
         }
     }
 
     pub fn mix_done(&mut self) {
-        if let (Picker::Mix(i, _, _), Some(mix)) = (self.picker, self.picker_mix()) {
-            match self.team.set_mix(i, mix) {
+        if let (Picker::Mix { diver, stage, .. }, Some(mix)) = (self.picker, self.picker_mix()) {
+            let r = if stage {
+                self.team.set_stage_mix(diver, mix)
+            } else {
+                self.team.set_mix(diver, mix)
+            };
+            match r {
                 Ok(()) => {
                     self.save_team();
                     self.picker = Picker::None;
@@ -574,6 +643,23 @@ impl Session {
                     u.pressure_label().to_string(),
                 )
             }
+            EntryTarget::StageStart(i) => {
+                let Some((d, st)) = divers
+                    .get(i)
+                    .and_then(|d| d.stage.as_ref().map(|st| (d, st)))
+                else {
+                    return;
+                };
+                (
+                    KeypadBuffer::digits(&fmt_num(u.pressure_value(st.start).floor()), false),
+                    format!(
+                        "Stage pressure for {} ({}), read in the water",
+                        d.name,
+                        self.team.stage_labels()[i]
+                    ),
+                    u.pressure_label().to_string(),
+                )
+            }
             EntryTarget::Sac(i) => {
                 let Some(d) = divers.get(i) else { return };
                 let text = d
@@ -687,7 +773,7 @@ impl Session {
             return;
         };
         if key == "+step" || key == "-step" {
-            if let EntryTarget::Start(_) = entry.target {
+            if let EntryTarget::Start(_) | EntryTarget::StageStart(_) = entry.target {
                 let step = self.team.input().gauge_step;
                 let v = entry.buffer.value().unwrap_or(0.0);
                 let next = if key == "+step" {
@@ -727,6 +813,25 @@ impl Session {
                             Ok(())
                         }
                     })
+                }
+            },
+            EntryTarget::StageStart(i) => match (v, &self.team.input().divers[i].stage) {
+                (None, _) => Err(InputError::new(
+                    "stage start",
+                    "enter the stage pressure read in the water",
+                )),
+                (_, None) => Err(InputError::new("stage", "this diver carries no stage")),
+                (Some(v), Some(st)) => {
+                    let p = u.pressure(v);
+                    validate_start(u, "stage start", p, st.cylinders.working_pressure()).and_then(
+                        |_| {
+                            if apply {
+                                self.team.set_stage_start(i, p)
+                            } else {
+                                Ok(())
+                            }
+                        },
+                    )
                 }
             },
             EntryTarget::Sac(i) => {
@@ -913,6 +1018,7 @@ fn is_live(t: EntryTarget) -> bool {
     matches!(
         t,
         EntryTarget::Start(_)
+            | EntryTarget::StageStart(_)
             | EntryTarget::Sac(_)
             | EntryTarget::Depth
             | EntryTarget::WaterTemp

@@ -22,6 +22,7 @@ pub fn step_options(units: UnitSystem) -> [f64; 2] {
 pub struct TeamController {
     input: TeamInput,
     labels: Vec<String>,
+    stage_labels: Vec<String>,
     plan: TeamPlan,
 }
 
@@ -36,15 +37,32 @@ impl TeamController {
                 *l = input.divers[i].cylinders.describe();
             }
         }
+        let stage_labels = input
+            .divers
+            .iter()
+            .map(|d| {
+                d.stage
+                    .as_ref()
+                    .map(|st| st.cylinders.describe())
+                    .unwrap_or_default()
+            })
+            .collect();
         Ok(TeamController {
             input,
             labels,
+            stage_labels,
             plan,
         })
     }
 
     pub fn from_state(state: &TeamState) -> Result<Self, InputError> {
-        Self::new(state.team.to_input()?, state.cylinder_labels.clone())
+        let mut t = Self::new(state.team.to_input()?, state.cylinder_labels.clone())?;
+        for (i, l) in state.stage_labels.iter().enumerate() {
+            if i < t.stage_labels.len() && !l.is_empty() && t.input.divers[i].stage.is_some() {
+                t.stage_labels[i] = l.clone();
+            }
+        }
+        Ok(t)
     }
 
     pub fn to_state(&self) -> TeamState {
@@ -52,6 +70,7 @@ impl TeamController {
             schema: TEAM_SCHEMA,
             team: TeamFile::from_input(&self.input),
             cylinder_labels: self.labels.clone(),
+            stage_labels: self.stage_labels.clone(),
         }
     }
 
@@ -63,6 +82,62 @@ impl TeamController {
     }
     pub fn labels(&self) -> &[String] {
         &self.labels
+    }
+    pub fn stage_labels(&self) -> &[String] {
+        &self.stage_labels
+    }
+
+    /// Give a diver a stage set, or take it away. A new stage starts full (its working
+    /// pressure); a changed set keeps the start if it still fits.
+    pub fn set_stage_cylinders(
+        &mut self,
+        i: usize,
+        set: Option<CylinderSet>,
+        label: &str,
+    ) -> Result<(), InputError> {
+        match set {
+            None => {
+                self.try_update(|t| t.divers[i].stage = None)?;
+                self.stage_labels[i].clear();
+            }
+            Some(set) => {
+                let u = self.input.units;
+                let full = u.pressure(round_down_to_step(
+                    u.pressure_value(set.working_pressure()),
+                    self.input.gauge_step,
+                ));
+                let old = self.input.divers[i].stage.clone();
+                let kept = old.as_ref().map(|st| st.start).filter(|p| {
+                    p.bar() <= set.working_pressure().bar() * crate::plan::team::MAX_FILL_RATIO
+                });
+                let mix = old.map(|st| st.mix).unwrap_or(Mix::nitrox(0.5));
+                self.try_update(|t| {
+                    t.divers[i].stage = Some(crate::plan::StageInput {
+                        cylinders: set,
+                        mix,
+                        start: kept.unwrap_or(full),
+                    })
+                })?;
+                self.stage_labels[i] = label.to_string();
+            }
+        }
+        Ok(())
+    }
+
+    pub fn set_stage_start(&mut self, i: usize, p: Pressure) -> Result<(), InputError> {
+        self.try_update(|t| {
+            if let Some(st) = t.divers[i].stage.as_mut() {
+                st.start = p;
+            }
+        })
+    }
+
+    pub fn set_stage_mix(&mut self, i: usize, mix: Mix) -> Result<(), InputError> {
+        self.try_update(|t| {
+            if let Some(st) = t.divers[i].stage.as_mut() {
+                st.mix = mix;
+            }
+        })
     }
     pub fn len(&self) -> usize {
         self.input.divers.len()
@@ -213,9 +288,11 @@ impl TeamController {
                 mix,
                 start,
                 sac_l_per_min: None,
+                stage: None,
             })
         })?;
         self.labels.push(label.to_string());
+        self.stage_labels.push(String::new());
         Ok(())
     }
 
@@ -230,6 +307,7 @@ impl TeamController {
             t.divers.remove(i);
         })?;
         self.labels.remove(i);
+        self.stage_labels.remove(i);
         Ok(())
     }
 }

@@ -27,6 +27,10 @@ pub struct DiverCardVm {
     pub unit: String,
     pub sac: String,
     pub error: String,
+    pub has_stage: bool,
+    pub stage: String,
+    pub stage_mix: String,
+    pub stage_start: String,
 }
 
 pub fn diver_cards(s: &Session) -> Vec<DiverCardVm> {
@@ -57,8 +61,46 @@ pub fn diver_cards(s: &Session) -> Vec<DiverCardVm> {
                 .map(|w| w[d.name.len() + 1..].trim().to_string())
                 .collect::<Vec<_>>()
                 .join(" "),
+            has_stage: d.stage.is_some(),
+            stage: match &d.stage {
+                Some(_) => format!("Stage: {}", s.team.stage_labels()[i]),
+                None => "+ Stage (dropped on the way in)".to_string(),
+            },
+            stage_mix: d
+                .stage
+                .as_ref()
+                .map(|st| st.mix.label())
+                .unwrap_or_default(),
+            stage_start: d
+                .stage
+                .as_ref()
+                .map(|st| start_text(u, st.start))
+                .unwrap_or_default(),
         })
         .collect()
+}
+
+/// "Stage: drop at 160 bar …" for a diver with a stage, else empty.
+pub fn stage_text(s: &Session, i: usize) -> String {
+    let plan = s.team.plan();
+    let u = s.units();
+    match (&plan.divers[i].stage, &s.team.input().divers[i].stage) {
+        (Some(st), Some(si)) => format!(
+            "Stage: drop at {} {} · {} {} from {} · {}{}",
+            turn_text(st.drop_shown_value),
+            u.pressure_label(),
+            s.team.stage_labels()[i],
+            si.mix.label(),
+            start_text(u, st.start),
+            st.set_by.describe(),
+            if st.controlling {
+                " · ▶ controls stages"
+            } else {
+                ""
+            }
+        ),
+        _ => String::new(),
+    }
 }
 
 pub struct TurnRowVm {
@@ -69,6 +111,9 @@ pub struct TurnRowVm {
     pub set_by: String,
     pub minutes: String,
     pub controlling: bool,
+    pub stage: String,
+    /// Short form for the buddy view: "stage drop 160".
+    pub stage_short: String,
 }
 
 pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
@@ -118,6 +163,12 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
                     })
                     .unwrap_or_default(),
                 controlling: d.controlling,
+                stage: stage_text(s, i),
+                stage_short: d
+                    .stage
+                    .as_ref()
+                    .map(|st| format!("stage drop {}", turn_text(st.drop_shown_value)))
+                    .unwrap_or_default(),
             }
         })
         .collect()
@@ -246,8 +297,19 @@ pub fn picker_title(s: &Session) -> String {
             .unwrap_or_default()
     };
     match s.picker {
-        Picker::Cylinders(i) => format!("Cylinders for {}", name(i)),
-        Picker::Mix(i, _, _) => format!("Gas for {}", name(i)),
+        Picker::Cylinders {
+            diver,
+            stage: false,
+        } => format!("Cylinders for {}", name(diver)),
+        Picker::Cylinders { diver, stage: true } => format!("Stage for {}", name(diver)),
+        Picker::Mix {
+            diver,
+            stage: false,
+            ..
+        } => format!("Gas for {}", name(diver)),
+        Picker::Mix {
+            diver, stage: true, ..
+        } => format!("Stage gas for {}", name(diver)),
         Picker::None => String::new(),
     }
 }

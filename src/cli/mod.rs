@@ -36,6 +36,8 @@ pub enum Command {
     ///  "divers": [{"name": "…", "cylinders": {"count": 2, "water_l": 12, "working_bar": 232},
     ///              "mix": {"o2": 0.32, "he": 0.0}, "start": 220, "sac": 18}]}
     /// Cylinders may instead be {"count": 2, "rated_cuft": 80, "rated_psi": 3000}.
+    /// A diver may carry a stage: "stage": {"cylinders": {...}, "mix": {...}, "start": 200};
+    /// stages are matched on volume among the divers who carry one and get a drop pressure.
     /// water_temp is °C (metric) or °F (imperial); mix defaults to air; unknown keys are errors.
     Plan {
         /// The team file (JSON).

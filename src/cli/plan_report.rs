@@ -37,6 +37,12 @@ pub struct JsonDiver {
     pub used_l: f64,
     pub controlling: bool,
     pub minutes_to_turn: Option<f64>,
+    /// Stage drop pressure (shown, on the gauge step), or null without a stage.
+    pub stage_drop: Option<f64>,
+    pub stage_drop_real: Option<f64>,
+    pub stage_drop_hand: Option<f64>,
+    pub stage_set_by: Option<String>,
+    pub stage_controlling: Option<bool>,
 }
 
 fn r3(x: f64) -> f64 {
@@ -77,6 +83,20 @@ pub fn json_report(input: &TeamInput, plan: &TeamPlan) -> JsonPlan {
                 used_l: r3(d.used_real.litres()),
                 controlling: d.controlling,
                 minutes_to_turn: d.minutes_to_turn.map(r3),
+                stage_drop: d.stage.as_ref().map(|st| r3(st.drop_shown_value)),
+                stage_drop_real: d
+                    .stage
+                    .as_ref()
+                    .map(|st| r3(u.pressure_value(st.drop_real))),
+                stage_drop_hand: d
+                    .stage
+                    .as_ref()
+                    .map(|st| r3(u.pressure_value(st.drop_hand))),
+                stage_set_by: d
+                    .stage
+                    .as_ref()
+                    .map(|st| format!("{:?}", st.set_by).to_lowercase()),
+                stage_controlling: d.stage.as_ref().map(|st| st.controlling),
             })
             .collect(),
     }
@@ -88,8 +108,7 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
     let vu = u.volume_label();
     let mut s = String::new();
     s.push_str(&format!(
-        "Turn pressures: {} (rule of {}), gauge step {} {pu}, water {:.0} {}\n\n",
-        input.rule.name(),
+        "Turn pressures, rule of {}, gauge step {} {pu}, water {:.0} {}\n\n",
         input.rule.name(),
         crate::plan::error::fmt_num(input.gauge_step),
         u.temperature_value(input.water_temp),
@@ -143,6 +162,26 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
             margin_for_display(plan.stress.margin),
             input.rule.guaranteed_margin()
         ));
+    }
+    if plan.divers.iter().any(|d| d.stage.is_some()) {
+        s.push_str(&format!(
+            "\nStages ({} each, matched on volume): breathe down to the drop pressure, then leave the stage.\n",
+            input.rule.name()
+        ));
+        for (i, d) in plan.divers.iter().enumerate() {
+            if let (Some(st), Some(si)) = (&d.stage, &input.divers[i].stage) {
+                s.push_str(&format!(
+                    "{} {:<16} {:<26} {:<10} {:>7} → drop {:>5} {pu}  ({})\n",
+                    if st.controlling { "▶" } else { " " },
+                    d.name,
+                    si.cylinders.describe(),
+                    si.mix.label(),
+                    format!("{:.0}", u.pressure_value(st.start)),
+                    format!("{:.0}", st.drop_shown_value),
+                    st.set_by.describe()
+                ));
+            }
+        }
     }
     if let Some(i) = plan.first_to_turn {
         s.push_str(&format!(

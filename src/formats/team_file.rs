@@ -4,7 +4,9 @@
 use serde::{Deserialize, Serialize};
 
 use crate::plan::error::InputError;
-use crate::plan::{CylinderSet, CylinderSpec, DiverInput, Mix, Rule, TeamInput, UnitSystem, Water};
+use crate::plan::{
+    CylinderSet, CylinderSpec, DiverInput, Mix, Rule, StageInput, TeamInput, UnitSystem, Water,
+};
 
 #[derive(Clone, Debug, PartialEq, Serialize, Deserialize)]
 #[serde(deny_unknown_fields)]
@@ -42,6 +44,19 @@ pub struct DiverFile {
     /// Surface breathing rate in L/min (metric) or cu ft/min (imperial).
     #[serde(default, skip_serializing_if = "Option::is_none")]
     pub sac: Option<f64>,
+    /// An optional stage, dropped on the way in.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub stage: Option<StageFile>,
+}
+
+#[derive(Clone, Debug, PartialEq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct StageFile {
+    pub cylinders: CylindersFile,
+    #[serde(default)]
+    pub mix: Mix,
+    /// Stage pressure read in the water, in the team's pressure unit.
+    pub start: f64,
 }
 
 #[derive(Clone, Debug, PartialEq, Serialize, Deserialize)]
@@ -158,6 +173,16 @@ impl TeamFile {
                     mix: d.mix,
                     start: u.pressure(d.start),
                     sac_l_per_min: d.sac.map(|s| u.volume(s).litres()),
+                    stage: match &d.stage {
+                        None => None,
+                        Some(st) => Some(StageInput {
+                            cylinders: st
+                                .cylinders
+                                .to_set(&format!("divers[{i}].stage.cylinders"))?,
+                            mix: st.mix,
+                            start: u.pressure(st.start),
+                        }),
+                    },
                 })
             })
             .collect::<Result<Vec<_>, InputError>>()?;
@@ -201,6 +226,11 @@ impl TeamFile {
                     sac: d
                         .sac_l_per_min
                         .map(|s| round6(u.volume_value(crate::plan::Volume::from_litres(s)))),
+                    stage: d.stage.as_ref().map(|st| StageFile {
+                        cylinders: CylindersFile::from_set(&st.cylinders),
+                        mix: st.mix,
+                        start: round6(u.pressure_value(st.start)),
+                    }),
                 })
                 .collect(),
         }
@@ -217,7 +247,8 @@ mod tests {
 
     const TEXT: &str = r#"{"units":"imperial","rule":"quarters","gauge_step":100,"water_temp":68,"depth":90,"water":"salt",
       "divers":[{"name":"A","cylinders":{"count":2,"rated_cuft":80,"rated_psi":3000},"start":3000,"sac":0.6},
-                {"name":"B","cylinders":{"count":1,"water_l":12,"working_bar":232},"mix":{"o2":0.32,"he":0},"start":3300}]}"#;
+                {"name":"B","cylinders":{"count":1,"water_l":12,"working_bar":232},"mix":{"o2":0.32,"he":0},"start":3300,
+                 "stage":{"cylinders":{"rated_cuft":40,"rated_psi":3000},"mix":{"o2":0.5},"start":3000}}]}"#;
 
     #[test]
     fn round_trips_through_input() {

@@ -112,7 +112,7 @@ pub fn presets() -> Vec<Preset> {
             material: Aluminium,
         },
         Preset {
-            name: "Aluminium 40 (stage)",
+            name: "Aluminium 40",
             set: rated(1, 40.0, 3000.0),
             material: Aluminium,
         },

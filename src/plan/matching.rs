@@ -1,7 +1,9 @@
 //! Volume matching: each diver's turn pressure from the team's smallest allowance.
 
+use super::cylinders::CylinderSet;
 use super::error::InputError;
 use super::gas_model::{ContentModel, HandModel, ModelKind};
+use super::mix::Mix;
 use super::out_of_gas::{StressCheck, stress_check};
 use super::real_gas::RealGasModel;
 use super::team::TeamInput;
@@ -30,6 +32,24 @@ pub struct DiverPlan {
     pub controlling: bool,
     /// Minutes from start to the shown turn at the given SAC and depth, if known.
     pub minutes_to_turn: Option<f64>,
+    pub start: Pressure,
+    /// The stage plan, for a diver who carries a stage.
+    pub stage: Option<StagePlan>,
+}
+
+/// A stage's drop pressure: the stage is breathed from its start down to the drop
+/// pressure, then left for the way out.
+#[derive(Clone, Debug, PartialEq)]
+pub struct StagePlan {
+    pub content_real: Volume,
+    pub drop_real: Pressure,
+    pub drop_hand: Pressure,
+    pub drop_shown: Pressure,
+    /// In the team's unit, on the gauge step (or the start).
+    pub drop_shown_value: f64,
+    pub set_by: ModelKind,
+    /// This stage holds the smallest allowance among the team's stages.
+    pub controlling: bool,
     pub start: Pressure,
 }
 
@@ -66,72 +86,154 @@ pub fn round_down_to_step(value: f64, step: f64) -> f64 {
     k * step
 }
 
+/// One gas supply to match: a diver's main cylinders or a stage.
+struct Supply<'a> {
+    cylinders: &'a CylinderSet,
+    mix: Mix,
+    start: Pressure,
+}
+
+/// Matching results for one supply.
+struct Matched {
+    content_real: Volume,
+    content_hand: Volume,
+    turn_real: Pressure,
+    turn_hand: Pressure,
+    turn_shown: Pressure,
+    turn_shown_value: f64,
+    set_by: ModelKind,
+    used_real: Volume,
+}
+
+/// Match a group of supplies on volume under both models: the smallest allowance
+/// governs; each supply's turn is the higher exact turn, rounded up to the step,
+/// never above its start. Returns the results and the controlling index.
+fn match_group(team: &TeamInput, supplies: &[Supply<'_>]) -> (Vec<Matched>, usize, Volume, Volume) {
+    let u = team.units;
+    let f = team.rule.fraction();
+    let hand = HandModel;
+    let reals: Vec<RealGasModel> = supplies
+        .iter()
+        .map(|s| RealGasModel::new(s.mix, team.water_temp))
+        .collect();
+    let water_real: Vec<Volume> = supplies
+        .iter()
+        .map(|s| s.cylinders.water(ModelKind::Real))
+        .collect();
+    let water_hand: Vec<Volume> = supplies
+        .iter()
+        .map(|s| s.cylinders.water(ModelKind::Hand))
+        .collect();
+    let content_real: Vec<Volume> = supplies
+        .iter()
+        .enumerate()
+        .map(|(i, s)| reals[i].content(water_real[i], s.start))
+        .collect();
+    let content_hand: Vec<Volume> = supplies
+        .iter()
+        .enumerate()
+        .map(|(i, s)| hand.content(water_hand[i], s.start))
+        .collect();
+    let (controlling, allowance_real) = smallest(&content_real, f);
+    let (_, allowance_hand) = smallest(&content_hand, f);
+
+    let matched = supplies
+        .iter()
+        .enumerate()
+        .map(|(i, s)| {
+            let turn_real = reals[i].pressure_for(water_real[i], content_real[i] - allowance_real);
+            let turn_hand = hand.pressure_for(water_hand[i], content_hand[i] - allowance_hand);
+            let (higher, set_by) = if turn_hand.bar() > turn_real.bar() {
+                (turn_hand, ModelKind::Hand)
+            } else {
+                (turn_real, ModelKind::Real)
+            };
+            let start_value = u.pressure_value(s.start);
+            let rounded = round_up_to_step(u.pressure_value(higher), team.gauge_step);
+            let shown_value = rounded.min(start_value);
+            let turn_shown = u.pressure(shown_value);
+            let used_real =
+                (content_real[i] - reals[i].content(water_real[i], turn_shown)).max_zero();
+            Matched {
+                content_real: content_real[i],
+                content_hand: content_hand[i],
+                turn_real,
+                turn_hand,
+                turn_shown,
+                turn_shown_value: shown_value,
+                set_by,
+                used_real,
+            }
+        })
+        .collect();
+    (matched, controlling, allowance_real, allowance_hand)
+}
+
 /// Plan the team: validate, then match on volume under both models.
 pub fn plan_team(team: &TeamInput) -> Result<TeamPlan, InputError> {
     team.validate()?;
     let u = team.units;
-    let f = team.rule.fraction();
-    let hand = HandModel;
-    let reals: Vec<RealGasModel> = team
+    let supplies: Vec<Supply<'_>> = team
         .divers
         .iter()
-        .map(|d| RealGasModel::new(d.mix, team.water_temp))
+        .map(|d| Supply {
+            cylinders: &d.cylinders,
+            mix: d.mix,
+            start: d.start,
+        })
         .collect();
+    let (matched, controlling, allowance_real, allowance_hand) = match_group(team, &supplies);
+    let content_real: Vec<Volume> = matched.iter().map(|m| m.content_real).collect();
 
-    let water_real: Vec<Volume> = team
+    let mut divers: Vec<DiverPlan> = team
         .divers
         .iter()
-        .map(|d| d.cylinders.water(ModelKind::Real))
-        .collect();
-    let water_hand: Vec<Volume> = team
-        .divers
-        .iter()
-        .map(|d| d.cylinders.water(ModelKind::Hand))
-        .collect();
-    let content_real: Vec<Volume> = team
-        .divers
-        .iter()
+        .zip(matched)
         .enumerate()
-        .map(|(i, d)| reals[i].content(water_real[i], d.start))
-        .collect();
-    let content_hand: Vec<Volume> = team
-        .divers
-        .iter()
-        .enumerate()
-        .map(|(i, d)| hand.content(water_hand[i], d.start))
-        .collect();
-
-    let (controlling, allowance_real) = smallest(&content_real, f);
-    let (_, allowance_hand) = smallest(&content_hand, f);
-
-    let mut divers = Vec::with_capacity(team.divers.len());
-    for (i, d) in team.divers.iter().enumerate() {
-        let turn_real = reals[i].pressure_for(water_real[i], content_real[i] - allowance_real);
-        let turn_hand = hand.pressure_for(water_hand[i], content_hand[i] - allowance_hand);
-        let (higher, set_by) = if turn_hand.bar() > turn_real.bar() {
-            (turn_hand, ModelKind::Hand)
-        } else {
-            (turn_real, ModelKind::Real)
-        };
-        let start_value = u.pressure_value(d.start);
-        let rounded = round_up_to_step(u.pressure_value(higher), team.gauge_step);
-        let shown_value = rounded.min(start_value);
-        let turn_shown = u.pressure(shown_value);
-        let used_real = (content_real[i] - reals[i].content(water_real[i], turn_shown)).max_zero();
-        divers.push(DiverPlan {
+        .map(|(i, (d, m))| DiverPlan {
             name: d.name.clone(),
-            content_real: content_real[i],
-            content_hand: content_hand[i],
-            turn_real,
-            turn_hand,
-            turn_shown,
-            turn_shown_value: shown_value,
-            set_by,
-            used_real,
+            content_real: m.content_real,
+            content_hand: m.content_hand,
+            turn_real: m.turn_real,
+            turn_hand: m.turn_hand,
+            turn_shown: m.turn_shown,
+            turn_shown_value: m.turn_shown_value,
+            set_by: m.set_by,
+            used_real: m.used_real,
             controlling: i == controlling,
             minutes_to_turn: None,
             start: d.start,
-        });
+            stage: None,
+        })
+        .collect();
+
+    // Stages: matched among the divers who carry one, on the same rule.
+    let with_stage: Vec<usize> = (0..team.divers.len())
+        .filter(|&i| team.divers[i].stage.is_some())
+        .collect();
+    let stage_supplies: Vec<Supply<'_>> = with_stage
+        .iter()
+        .filter_map(|&i| team.divers[i].stage.as_ref())
+        .map(|st| Supply {
+            cylinders: &st.cylinders,
+            mix: st.mix,
+            start: st.start,
+        })
+        .collect();
+    if !stage_supplies.is_empty() {
+        let (stage_matched, stage_ctrl, _, _) = match_group(team, &stage_supplies);
+        for (k, (i, m)) in with_stage.iter().zip(stage_matched).enumerate() {
+            divers[*i].stage = Some(StagePlan {
+                content_real: m.content_real,
+                drop_real: m.turn_real,
+                drop_hand: m.turn_hand,
+                drop_shown: m.turn_shown,
+                drop_shown_value: m.turn_shown_value,
+                set_by: m.set_by,
+                controlling: k == stage_ctrl,
+                start: stage_supplies[k].start,
+            });
+        }
     }
 
     let mut first_to_turn = None;

@@ -19,6 +19,17 @@ pub const MAX_WATER_L: f64 = 30.0;
 /// Below this share of working pressure a start pressure draws a low-fill warning.
 pub const LOW_FILL_RATIO: f64 = 0.5;
 
+/// A stage cylinder (or a pair) carried and dropped on the way in. Common practice:
+/// each stage is planned on its own rule and matched on volume across the team, giving
+/// each stage-carrying diver a drop pressure.
+#[derive(Clone, Debug, PartialEq)]
+pub struct StageInput {
+    pub cylinders: CylinderSet,
+    pub mix: Mix,
+    /// Stage pressure read in the water (gauge).
+    pub start: Pressure,
+}
+
 /// One diver's inputs.
 #[derive(Clone, Debug, PartialEq)]
 pub struct DiverInput {
@@ -29,6 +40,8 @@ pub struct DiverInput {
     pub start: Pressure,
     /// Surface breathing rate, free litres per minute.
     pub sac_l_per_min: Option<f64>,
+    /// An optional stage.
+    pub stage: Option<StageInput>,
 }
 
 /// A team's inputs.
@@ -106,7 +119,26 @@ impl TeamInput {
                     .to_string(),
             );
         }
+        if self.divers.iter().filter(|d| d.stage.is_some()).count() == 1 {
+            w.push(
+                "Only one diver carries a stage: it is planned on its own, with no teammate's stage to match."
+                    .to_string(),
+            );
+        }
         for d in &self.divers {
+            if let Some(st) = &d.stage {
+                let swp = st.cylinders.working_pressure();
+                if st.start.bar() > swp.bar() * 1.000_001 {
+                    w.push(format!(
+                        "{}: stage start {} {} is above its working pressure {} {}.",
+                        d.name,
+                        fmt_num(self.units.pressure_value(st.start).round()),
+                        self.units.pressure_label(),
+                        fmt_num(self.units.pressure_value(swp).round()),
+                        self.units.pressure_label()
+                    ));
+                }
+            }
             let wp = d.cylinders.working_pressure();
             let u = self.units;
             if d.start.bar() > wp.bar() * 1.000_001 {
@@ -234,6 +266,16 @@ fn validate_diver(u: UnitSystem, i: usize, d: &DiverInput) -> Result<(), InputEr
         d.start,
         d.cylinders.working_pressure(),
     )?;
+    if let Some(st) = &d.stage {
+        validate_cylinders(u, &format!("{f}.stage.cylinders"), &st.cylinders)?;
+        validate_mix(&format!("{f}.stage.mix"), &st.mix)?;
+        validate_start(
+            u,
+            &format!("{f}.stage.start"),
+            st.start,
+            st.cylinders.working_pressure(),
+        )?;
+    }
     if let Some(sac) = d.sac_l_per_min {
         let (v, lo, hi) = match u {
             UnitSystem::Metric => (sac, 3.0, 100.0),

@@ -14,4 +14,7 @@ pub struct TeamState {
     /// The name of each diver's cylinder set, as picked (locker or preset).
     #[serde(default)]
     pub cylinder_labels: Vec<String>,
+    /// The name of each diver's stage, as picked (empty without a stage).
+    #[serde(default)]
+    pub stage_labels: Vec<String>,
 }

@@ -23,14 +23,17 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
     a.on_mix_done(move || act(&w, &st, |x| x.mix_done()));
     let (w, st) = handles(ui, s);
     a.on_close(move || act(&w, &st, |x| x.close_picker()));
+    let (w, st) = handles(ui, s);
+    a.on_no_stage(move || act(&w, &st, |x| x.pick_no_stage()));
 }
 
 pub fn refresh(ui: &AppWindow, s: &Session) {
     let a = ui.global::<PickerAdapter>();
-    a.set_cylinders_open(matches!(s.picker, Picker::Cylinders(_)));
-    a.set_mix_open(matches!(s.picker, Picker::Mix(..)));
+    a.set_cylinders_open(matches!(s.picker, Picker::Cylinders { .. }));
+    a.set_stage_mode(matches!(s.picker, Picker::Cylinders { stage: true, .. }));
+    a.set_mix_open(matches!(s.picker, Picker::Mix { .. }));
     a.set_title(vm::picker_title(s).into());
-    if let Picker::Cylinders(_) = s.picker {
+    if let Picker::Cylinders { .. } = s.picker {
         a.set_locker(model(
             vm::locker_pick_rows(s)
                 .into_iter()
@@ -52,7 +55,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
                 .collect(),
         ));
     }
-    if let (Picker::Mix(_, o2, he), Some(mix)) = (s.picker, s.picker_mix()) {
+    if let (Picker::Mix { o2, he, .. }, Some(mix)) = (s.picker, s.picker_mix()) {
         a.set_o2(o2);
         a.set_he(he);
         a.set_mix_text(mix.label().into());

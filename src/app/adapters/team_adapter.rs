@@ -40,6 +40,16 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
     a.on_toggle_water(move || act(&w, &st, |x| x.toggle_water()));
     let (w, st) = handles(ui, s);
     a.on_new_team(move || act(&w, &st, |x| x.new_team()));
+    let (w, st) = handles(ui, s);
+    a.on_pick_stage(move |i| act(&w, &st, |x| x.open_stage_picker(i as usize)));
+    let (w, st) = handles(ui, s);
+    a.on_pick_stage_mix(move |i| act(&w, &st, |x| x.open_stage_mix_picker(i as usize)));
+    let (w, st) = handles(ui, s);
+    a.on_edit_stage_start(move |i| {
+        act(&w, &st, |x| {
+            x.open_entry(EntryTarget::StageStart(i as usize))
+        })
+    });
 }
 
 pub fn refresh(ui: &AppWindow, s: &Session) {
@@ -55,6 +65,10 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
             unit: c.unit.into(),
             sac: c.sac.into(),
             error: c.error.into(),
+            has_stage: c.has_stage,
+            stage: c.stage.into(),
+            stage_mix: c.stage_mix.into(),
+            stage_start: c.stage_start.into(),
         })
         .collect();
     a.set_divers(model(cards));

@@ -20,6 +20,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
                 set_by: r.set_by.clone().into(),
                 minutes: r.minutes.clone().into(),
                 controlling: r.controlling,
+                stage: r.stage.clone().into(),
             })
             .collect(),
     ));
@@ -36,6 +37,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
                 name: r.name.clone().into(),
                 turn: r.turn.clone().into(),
                 controlling: r.controlling,
+                stage: r.stage_short.clone().into(),
             })
             .collect(),
     ));
