@@ -268,3 +268,27 @@ fn stages_get_a_drop_pressure() {
     assert_eq!(code, 2);
     assert!(err.contains("divers[2].stage.start"), "{err}");
 }
+
+#[test]
+fn chart_command_prints_every_pair() {
+    let out = bin().arg("chart").arg(demo_path()).output().unwrap();
+    assert_eq!(out.status.code(), Some(0));
+    let text = String::from_utf8(out.stdout).unwrap();
+    assert!(text.contains("keep the HIGHEST turn"), "{text}");
+    assert_eq!(text.matches("rows: ").count(), 6, "3 divers make 6 charts");
+    let out = bin()
+        .args(["chart", "--json"])
+        .arg(demo_path())
+        .output()
+        .unwrap();
+    let v: serde_json::Value = serde_json::from_slice(&out.stdout).unwrap();
+    let charts = v.as_array().unwrap();
+    assert_eq!(charts.len(), 6);
+    let c = &charts[0];
+    assert_eq!(
+        c["turns"].as_array().unwrap().len(),
+        c["diver_starts"].as_array().unwrap().len()
+    );
+    let out = bin().args(["chart", "/nonexistent.json"]).output().unwrap();
+    assert_eq!(out.status.code(), Some(2));
+}

@@ -1,6 +1,7 @@
 //! The command line: `plan` prints a team's turn pressures, `gas` a cylinder's contents.
 //! Exit codes: 0 ok, 2 bad input (the message names the field).
 
+pub mod chart_cmd;
 pub mod gas_cmd;
 pub mod plan_cmd;
 pub mod plan_report;
@@ -48,6 +49,24 @@ pub enum Command {
     },
     /// Gas content of a cylinder (both models), and its pressure after a temperature change.
     Gas(gas_cmd::GasArgs),
+    /// Print wet-notes charts: each diver's turn for a range of own and teammate start
+    /// pressures, to re-match a changed fill without a phone.
+    ///
+    /// With more than one teammate, read the chart against each teammate and keep the
+    /// HIGHEST turn.
+    Chart {
+        /// The team file (JSON), as for `plan`.
+        team: std::path::PathBuf,
+        /// Gauge steps above each planned start.
+        #[arg(long, default_value_t = 2)]
+        above: usize,
+        /// Gauge steps below each planned start.
+        #[arg(long, default_value_t = 7)]
+        below: usize,
+        /// Print machine-readable JSON.
+        #[arg(long)]
+        json: bool,
+    },
 }
 
 #[derive(clap::ValueEnum, Clone, Copy, Debug, PartialEq, Eq)]
@@ -61,6 +80,12 @@ pub fn run(command: Command) -> i32 {
     let result = match command {
         Command::Plan { team, json } => plan_cmd::run(&team, json),
         Command::Gas(args) => gas_cmd::run(&args),
+        Command::Chart {
+            team,
+            above,
+            below,
+            json,
+        } => chart_cmd::run(&team, above, below, json),
     };
     match result {
         Ok(text) => {

@@ -8,15 +8,19 @@ use crate::plan::plan_team;
 
 use super::plan_report;
 
-pub fn run(path: &Path, json: bool) -> Result<String, InputError> {
+/// Read and convert a team file; errors name the field.
+pub fn read_team(path: &Path) -> Result<crate::plan::TeamInput, InputError> {
     let text = std::fs::read_to_string(path).map_err(|e| {
         InputError::new(
             "TEAM",
             format!("cannot read team file {}: {e}", path.display()),
         )
     })?;
-    let file = TeamFile::parse(&text)?;
-    let input = file.to_input()?;
+    TeamFile::parse(&text)?.to_input()
+}
+
+pub fn run(path: &Path, json: bool) -> Result<String, InputError> {
+    let input = read_team(path)?;
     let plan = plan_team(&input)?;
     if json {
         let out = plan_report::json_report(&input, &plan);

@@ -2,6 +2,7 @@
 //! Pure Rust: no user interface, no file or network I/O.
 
 pub mod catalogue;
+pub mod chart;
 pub mod cylinders;
 pub mod error;
 pub mod gas_model;

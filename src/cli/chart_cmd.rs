@@ -1,0 +1,103 @@
+//! `turnsheet chart TEAM.json`: wet-notes charts for every diver against every teammate.
+
+use std::path::Path;
+
+use serde::Serialize;
+
+use crate::plan::chart::team_charts;
+use crate::plan::error::{InputError, fmt_num};
+
+use super::plan_cmd::read_team;
+
+#[derive(Serialize, Debug)]
+struct JsonChart {
+    diver: String,
+    teammate: String,
+    unit: String,
+    diver_starts: Vec<f64>,
+    teammate_starts: Vec<f64>,
+    /// turns[row][column]: the diver's turn for diver_starts[row] and teammate_starts[column].
+    turns: Vec<Vec<Option<f64>>>,
+}
+
+pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String, InputError> {
+    if above + below > 30 {
+        return Err(InputError::new(
+            "--above/--below",
+            "at most 30 rows and columns in all",
+        ));
+    }
+    let team = read_team(path)?;
+    let charts = team_charts(&team, above, below)?;
+    let u = team.units;
+    let pu = u.pressure_label();
+    let name = |i: usize| team.divers[i].name.clone();
+    if json {
+        let out: Vec<JsonChart> = charts
+            .iter()
+            .map(|c| JsonChart {
+                diver: name(c.me),
+                teammate: name(c.buddy),
+                unit: pu.to_string(),
+                diver_starts: c.my_starts.clone(),
+                teammate_starts: c.buddy_starts.clone(),
+                turns: c.turns.clone(),
+            })
+            .collect();
+        return Ok(serde_json::to_string_pretty(&out).unwrap_or_default() + "\n");
+    }
+    let mut s = format!(
+        "Wet-notes charts: rule of {}, gauge step {} {pu}, water {:.0} {}.\n\
+         Each chart gives the first diver's turn ({pu}) for their start (rows) and the teammate's start (columns).\n\
+         With more than one teammate, read every chart of yours and keep the HIGHEST turn.\n",
+        team.rule.name(),
+        fmt_num(team.gauge_step),
+        u.temperature_value(team.water_temp),
+        u.temperature_label()
+    );
+    let width = charts
+        .iter()
+        .flat_map(|c| c.buddy_starts.iter().chain(c.my_starts.iter()))
+        .map(|v| fmt_num(*v).len())
+        .max()
+        .unwrap_or(3)
+        .max(3)
+        + 1;
+    for c in &charts {
+        let me = &team.divers[c.me];
+        let buddy = &team.divers[c.buddy];
+        s.push_str(&format!(
+            "\n{} ({}, {}) with {} ({}, {})\n",
+            me.name,
+            me.cylinders.describe(),
+            me.mix.label(),
+            buddy.name,
+            buddy.cylinders.describe(),
+            buddy.mix.label()
+        ));
+        s.push_str(&format!(
+            "rows: {}'s start; columns: {}'s start; cells: {}'s turn\n",
+            me.name, buddy.name, me.name
+        ));
+        s.push_str(&format!("{:>w$} │", pu, w = width + 2));
+        for b in &c.buddy_starts {
+            s.push_str(&format!("{:>width$}", fmt_num(*b)));
+        }
+        s.push('\n');
+        s.push_str(&format!(
+            "{}┼{}\n",
+            "─".repeat(width + 3),
+            "─".repeat(width * c.buddy_starts.len())
+        ));
+        for (r, mine) in c.my_starts.iter().enumerate() {
+            s.push_str(&format!("{:>w$} │", fmt_num(*mine), w = width + 2));
+            for cell in &c.turns[r] {
+                let text = cell.map(fmt_num).unwrap_or_else(|| "-".into());
+                s.push_str(&format!("{text:>width$}"));
+            }
+            s.push('\n');
+        }
+    }
+    s.push_str("\n'-' marks a start that does not fit the cylinders. Check by hand; turn at the first limit.\n");
+    Ok(s)
+}
