@@ -110,4 +110,9 @@ fn main() {
         s.fill.temperature = turnsheet::plan::Temperature::from_celsius(32.0);
         s.go(Screen::Fill);
     });
+    shot("13-chart", &|s| {
+        s.back();
+        s.go(Screen::Turns);
+        s.go(Screen::Chart);
+    });
 }

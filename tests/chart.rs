@@ -90,3 +90,24 @@ fn highest_turn_over_pair_charts_is_the_team_turn() {
         assert_eq!(highest, d.turn_shown_value, "{}", d.name);
     }
 }
+
+#[test]
+fn reading_between_grid_lines_toward_safety_never_gives_a_lower_turn() {
+    // Own start between rows → the row above; teammate's start between columns → the
+    // column below. The chart cell must be at least the exact plan's turn.
+    let team = demo(); // Ines starts at 218 bar, Bram at 205 bar: both between grid lines.
+    let charts = team_charts(&team, 2, 7).unwrap();
+    for c in charts.iter().filter(|c| c.me == 0 && c.buddy == 1) {
+        let mine = team.divers[0].start.bar();
+        let theirs = team.divers[1].start.bar();
+        let r = c.my_starts.iter().rposition(|x| *x >= mine).unwrap();
+        let col = c.buddy_starts.iter().position(|x| *x <= theirs).unwrap();
+        let mut pair = team.clone();
+        pair.divers.truncate(2);
+        for d in &mut pair.divers {
+            d.stage = None;
+        }
+        let exact = plan_team(&pair).unwrap().divers[0].turn_shown_value;
+        assert!(c.turns[r][col].unwrap() >= exact);
+    }
+}

@@ -415,6 +415,10 @@ fn every_button_is_a_big_touch_target() {
     back_key(&app);
     press(&app, "fill check");
     check("fill page");
+    back_key(&app);
+    press(&app, "show turns");
+    press(&app, "Chart");
+    check("chart page");
 }
 
 #[test]
@@ -528,4 +532,36 @@ fn stages_get_drop_pressures_matching_the_core() {
             .any(|w| w.contains("Only one diver carries a stage")),
         "{warnings:?}"
     );
+}
+
+#[test]
+fn wet_notes_chart_page_shows_the_core_chart() {
+    use turnsheet::plan::chart::{pair_chart, starts_around};
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_acknowledged(dir.path());
+    press(&app, "show turns");
+    press(&app, "Chart");
+    assert_eq!(page(&app), Page::Chart);
+    assert_eq!(value(&app, "chart diver"), "Ines");
+    assert_eq!(value(&app, "chart teammate"), "Bram");
+    press(&app, "next teammate");
+    assert_eq!(value(&app, "chart teammate"), "Sol");
+    press(&app, "next diver"); // Bram against Sol
+    press(&app, "next diver"); // Sol: the teammate moves on so they differ
+    assert_eq!(value(&app, "chart diver"), "Sol");
+    assert_eq!(value(&app, "chart teammate"), "Ines");
+
+    let input = TeamFile::parse(turnsheet::app::session::DEMO_TEAM)
+        .unwrap()
+        .to_input()
+        .unwrap();
+    let around = |i: usize| starts_around(input.divers[i].start.bar(), 10.0, 2, 7);
+    let chart = pair_chart(&input, 2, 0, &around(2), &around(0)).unwrap();
+    for (r, row) in chart.turns.iter().enumerate() {
+        for (c, cell) in row.iter().enumerate() {
+            let shown = value(&app, &format!("chart cell {r} {c}"));
+            assert_eq!(shown, format!("{}", cell.unwrap()), "cell {r} {c}");
+        }
+    }
 }

@@ -10,6 +10,7 @@ pub enum Screen {
     LockerEdit,
     Settings,
     Fill,
+    Chart,
 }
 
 #[derive(Clone, Debug)]

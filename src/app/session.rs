@@ -86,6 +86,8 @@ pub struct Session {
     pub entry: Option<Entry>,
     pub picker: Picker,
     pub fill: FillCheck,
+    /// The wet-notes chart shown: (diver, teammate).
+    pub chart: (usize, usize),
     pub status: Vec<String>,
 }
 
@@ -140,6 +142,7 @@ impl Session {
             store,
             settings,
             fill,
+            chart: (0, 1),
             team,
             locker: LockerController::new(loaded.locker),
             nav: NavController::new(first),
@@ -279,6 +282,7 @@ impl Session {
             let r = self.team.remove_diver(i);
             self.team_result(r);
             self.fill.diver = self.fill.diver.min(self.team.len() - 1);
+            self.chart = (0, 1);
         }
     }
 
@@ -622,6 +626,51 @@ impl Session {
         let v = (u.pressure_value(self.fill_prediction().real) + 1e-6).floor();
         let r = self.team.set_start(d, u.pressure(v));
         self.team_result(r);
+    }
+
+    // ---- wet-notes chart -----------------------------------------------------------
+
+    /// Step the chart's diver (`teammate` false) or teammate through the team; the two
+    /// are always different divers.
+    pub fn chart_cycle(&mut self, teammate: bool, dir: i32) {
+        let n = self.team.len();
+        let (mut me, mut other) = (self.chart.0.min(n - 1), self.chart.1.min(n - 1));
+        let step = |x: usize| ((x as i32 + dir).rem_euclid(n as i32)) as usize;
+        if teammate {
+            other = step(other);
+            if other == me {
+                other = step(other);
+            }
+        } else {
+            me = step(me);
+            if me == other {
+                other = step(other);
+                if other == me {
+                    other = step(other);
+                }
+            }
+        }
+        self.chart = (me, other);
+    }
+
+    /// The chart of the selected pair, centred on their planned starts.
+    pub fn current_chart(&self) -> Option<crate::plan::chart::PairChart> {
+        let n = self.team.len();
+        let (me, other) = (self.chart.0.min(n - 1), self.chart.1.min(n - 1));
+        if me == other {
+            return None;
+        }
+        let input = self.team.input();
+        let u = input.units;
+        let around = |i: usize| {
+            crate::plan::chart::starts_around(
+                u.pressure_value(input.divers[i].start),
+                input.gauge_step,
+                2,
+                7,
+            )
+        };
+        crate::plan::chart::pair_chart(input, me, other, &around(me), &around(other)).ok()
     }
 
     // ---- keypad entry ------------------------------------------------------------

@@ -49,7 +49,8 @@ pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String
     let mut s = format!(
         "Wet-notes charts: rule of {}, gauge step {} {pu}, water {:.0} {}.\n\
          Each chart gives the first diver's turn ({pu}) for their start (rows) and the teammate's start (columns).\n\
-         With more than one teammate, read every chart of yours and keep the HIGHEST turn.\n",
+         With more than one teammate, read every chart of yours and keep the HIGHEST turn.\n\
+         Between two rows read the higher own start; between two columns the lower teammate start.\n",
         team.rule.name(),
         fmt_num(team.gauge_step),
         u.temperature_value(team.water_temp),

@@ -1,6 +1,7 @@
 //! Adapters: connect the session to each page's Slint global and push view data back.
 //! Every callback runs one session method, then the views are refreshed.
 
+mod chart_adapter;
 mod fill_adapter;
 mod keypad_adapter;
 mod locker_adapter;
@@ -49,6 +50,7 @@ pub fn connect_all(ui: &AppWindow, s: &Shared) {
     locker_adapter::connect(ui, s);
     settings_adapter::connect(ui, s);
     fill_adapter::connect(ui, s);
+    chart_adapter::connect(ui, s);
 }
 
 pub fn refresh_all(ui: &AppWindow, s: &Session) {
@@ -60,4 +62,5 @@ pub fn refresh_all(ui: &AppWindow, s: &Session) {
     locker_adapter::refresh(ui, s);
     settings_adapter::refresh(ui, s);
     fill_adapter::refresh(ui, s);
+    chart_adapter::refresh(ui, s);
 }

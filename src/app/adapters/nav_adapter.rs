@@ -17,6 +17,7 @@ fn page(s: Screen) -> Page {
         Screen::LockerEdit => Page::LockerEdit,
         Screen::Settings => Page::Settings,
         Screen::Fill => Page::Fill,
+        Screen::Chart => Page::Chart,
     }
 }
 
@@ -30,6 +31,7 @@ fn screen(p: Page) -> Screen {
         Page::LockerEdit => Screen::LockerEdit,
         Page::Settings => Screen::Settings,
         Page::Fill => Screen::Fill,
+        Page::Chart => Screen::Chart,
     }
 }
 
