@@ -266,21 +266,9 @@ fn corrupt_locker_is_kept_aside_and_the_app_starts() {
         msg.contains("cylinder locker") && msg.contains("unreadable"),
         "{msg}"
     );
-    let kept: Vec<_> = std::fs::read_dir(dir.path())
-        .unwrap()
-        .filter_map(|e| e.ok())
-        .filter(|e| {
-            e.file_name()
-                .to_string_lossy()
-                .starts_with("locker.json.unreadable")
-        })
-        .collect();
+    let kept = turnsheet::storage::atomic::kept_aside(dir.path(), "locker.json");
     assert_eq!(kept.len(), 1);
-    assert!(
-        std::fs::read_to_string(kept[0].path())
-            .unwrap()
-            .contains("oops")
-    );
+    assert!(std::fs::read_to_string(&kept[0]).unwrap().contains("oops"));
     press(&app, "dismiss message");
     assert_eq!(
         ElementHandle::find_by_accessible_label(&app.window, "message").count(),

@@ -72,6 +72,22 @@ pub fn read_json<T: DeserializeOwned>(path: &Path, max_schema: u32) -> ReadOutco
     }
 }
 
+/// Files set aside for `name` in `dir` (`<name>.unreadable-…`), oldest name first.
+pub fn kept_aside(dir: &Path, name: &str) -> Vec<PathBuf> {
+    let prefix = format!("{name}.unreadable");
+    let mut found: Vec<PathBuf> = fs::read_dir(dir)
+        .map(|entries| {
+            entries
+                .filter_map(|e| e.ok())
+                .filter(|e| e.file_name().to_string_lossy().starts_with(&prefix))
+                .map(|e| e.path())
+                .collect()
+        })
+        .unwrap_or_default();
+    found.sort();
+    found
+}
+
 fn set_aside<T>(path: &Path, reason: String) -> ReadOutcome<T> {
     let stamp = std::time::SystemTime::now()
         .duration_since(std::time::UNIX_EPOCH)

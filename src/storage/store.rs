@@ -158,19 +158,11 @@ mod tests {
         assert!(loaded.report.first_launch);
         assert_eq!(loaded.report.messages.len(), 1);
         assert!(loaded.report.messages[0].contains("cylinder locker"));
-        let kept: Vec<_> = std::fs::read_dir(dir.path())
-            .unwrap()
-            .filter_map(|e| e.ok())
-            .filter(|e| {
-                e.file_name()
-                    .to_string_lossy()
-                    .starts_with("locker.json.unreadable")
-            })
-            .collect();
+        let kept = super::super::atomic::kept_aside(dir.path(), LOCKER_FILE);
         assert_eq!(kept.len(), 1);
-        assert_eq!(std::fs::read_to_string(kept[0].path()).unwrap(), "[[[");
+        assert_eq!(std::fs::read_to_string(&kept[0]).unwrap(), "[[[");
         // Saving afterwards writes a fresh file and leaves the kept copy alone.
         store.save_locker(&LockerFile::default()).unwrap();
-        assert_eq!(std::fs::read_to_string(kept[0].path()).unwrap(), "[[[");
+        assert_eq!(std::fs::read_to_string(&kept[0]).unwrap(), "[[[");
     }
 }
