@@ -149,6 +149,7 @@ fn every_validation_error_names_the_field() {
             t["divers"][0]["mix"]["he"] = 0.8.into();
         }),
         ("divers[0].name", |t| t["divers"][0]["name"] = "  ".into()),
+        ("divers[2].name", |t| t["divers"][2]["name"] = "Ines".into()),
         ("divers[0].sac", |t| t["divers"][0]["sac"] = 0.into()),
         ("rule", |t| t["rule"] = "sevenths".into()),
         ("gauge_step", |t| t["gauge_step"] = 0.into()),

@@ -106,6 +106,18 @@ impl TeamInput {
         }
         for (i, d) in self.divers.iter().enumerate() {
             validate_diver(u, i, d)?;
+            if self.divers[..i]
+                .iter()
+                .any(|o| o.name.trim() == d.name.trim())
+            {
+                return Err(InputError::new(
+                    format!("divers[{i}].name"),
+                    format!(
+                        "another diver is already called {}; names must differ",
+                        d.name.trim()
+                    ),
+                ));
+            }
         }
         Ok(())
     }

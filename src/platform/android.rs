@@ -29,11 +29,15 @@ fn android_main(app: slint::android::AndroidApp) {
         Rc::new(RefCell::new(None));
     let listener_session = session.clone();
     slint::android::init_with_event_listener(app, move |event| {
-        let Ok(slot) = listener_session.try_borrow() else { return };
+        let Ok(slot) = listener_session.try_borrow() else {
+            return;
+        };
         let Some((s, w)) = slot.as_ref() else { return };
         // A lifecycle event never arrives inside a UI callback; if it ever did, skip it
         // rather than panic (every edit is already saved as it happens).
-        let Ok(mut session) = s.try_borrow_mut() else { return };
+        let Ok(mut session) = s.try_borrow_mut() else {
+            return;
+        };
         let refresh = handle_lifecycle(&mut session, lifecycle(event));
         drop(session);
         if let (true, Some(ui)) = (refresh, w.upgrade()) {
