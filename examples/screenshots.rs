@@ -115,4 +115,9 @@ fn main() {
         s.go(Screen::Turns);
         s.go(Screen::Chart);
     });
+    shot("14-turns-imperial", &|s| {
+        s.back();
+        s.set_units(turnsheet::plan::UnitSystem::Imperial);
+    });
+    shot("15-buddy-imperial", &|s| s.go(Screen::Buddy));
 }

@@ -112,7 +112,7 @@ pub struct TurnRowVm {
     pub minutes: String,
     pub controlling: bool,
     pub stage: String,
-    /// Short form for the buddy view: "stage drop 160".
+    /// Short form for the buddy view: "stage 160" (the stage drop pressure).
     pub stage_short: String,
 }
 
@@ -167,7 +167,7 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
                 stage_short: d
                     .stage
                     .as_ref()
-                    .map(|st| format!("stage drop {}", turn_text(st.drop_shown_value)))
+                    .map(|st| format!("stage {}", turn_text(st.drop_shown_value)))
                     .unwrap_or_default(),
             }
         })
