@@ -553,3 +553,30 @@ fn wet_notes_chart_page_shows_the_core_chart() {
         }
     }
 }
+
+#[test]
+fn the_set_marked_mine_starts_a_new_team() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_acknowledged(dir.path());
+    press(&app, "Locker");
+    press(&app, "copy Twin LP 85");
+    press(&app, "Save");
+    press(&app, "copy Twin 10 L 300 bar");
+    press(&app, "Save");
+    press(&app, "mark Twin 10 L 300 bar as mine");
+    back_key(&app);
+    press(&app, "new team");
+    assert_eq!(value(&app, "start pressure of Me"), "300 bar");
+    assert_eq!(value(&app, "start pressure of Buddy"), "300 bar");
+    press(&app, "add diver");
+    assert_eq!(value(&app, "start pressure of Diver 3"), "300 bar");
+    let s = app.session.borrow();
+    for d in &s.team.input().divers {
+        assert_eq!(
+            d.cylinders,
+            CylinderSet { count: 2, spec: CylinderSpec::Stamped { water_l: 10.0, working_bar: 300.0 } }
+        );
+    }
+    assert!(s.team.labels().iter().all(|l| l == "Twin 10 L 300 bar"));
+}
