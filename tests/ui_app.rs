@@ -575,7 +575,13 @@ fn the_set_marked_mine_starts_a_new_team() {
     for d in &s.team.input().divers {
         assert_eq!(
             d.cylinders,
-            CylinderSet { count: 2, spec: CylinderSpec::Stamped { water_l: 10.0, working_bar: 300.0 } }
+            CylinderSet {
+                count: 2,
+                spec: CylinderSpec::Stamped {
+                    water_l: 10.0,
+                    working_bar: 300.0
+                }
+            }
         );
     }
     assert!(s.team.labels().iter().all(|l| l == "Twin 10 L 300 bar"));

@@ -120,9 +120,16 @@ impl Session {
             Some(state) => match TeamController::from_state(&state) {
                 Ok(t) => t,
                 Err(e) => {
-                    messages.push(format!(
-                        "The last team could not be planned ({e}); the demo team is shown instead."
-                    ));
+                    let kept = store.set_aside_team(&e.to_string());
+                    messages.push(match kept {
+                        Some(p) => format!(
+                            "The last team could not be planned ({e}). It was kept as {} and the demo team is shown instead.",
+                            p.display()
+                        ),
+                        None => format!(
+                            "The last team could not be planned ({e}). It was left untouched and will not be overwritten; the demo team is shown instead."
+                        ),
+                    });
                     demo_team(&settings)
                 }
             },
@@ -1103,5 +1110,28 @@ pub fn depth_text(d: Option<Depth>, u: UnitSystem) -> String {
             }),
             u.depth_label()
         ),
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn a_saved_team_that_no_longer_plans_is_kept_aside() {
+        let dir = tempfile::tempdir().unwrap();
+        let text = crate::app::session::DEMO_TEAM.replace("\"Sol\"", "\"Ines\"");
+        let saved = format!("{{\"schema\": 1, \"team\": {text}}}");
+        std::fs::write(dir.path().join("last-team.json"), &saved).unwrap();
+        let mut s = Session::open(Store::new(dir.path()));
+        assert!(
+            s.status.iter().any(|m| m.contains("could not be planned")),
+            "{:?}",
+            s.status
+        );
+        s.save_all();
+        let kept = crate::storage::atomic::kept_aside(dir.path(), "last-team.json");
+        assert_eq!(kept.len(), 1);
+        assert_eq!(std::fs::read_to_string(&kept[0]).unwrap(), saved);
     }
 }

@@ -88,7 +88,7 @@ pub fn kept_aside(dir: &Path, name: &str) -> Vec<PathBuf> {
     found
 }
 
-fn set_aside<T>(path: &Path, reason: String) -> ReadOutcome<T> {
+pub(crate) fn set_aside<T>(path: &Path, reason: String) -> ReadOutcome<T> {
     let stamp = std::time::SystemTime::now()
         .duration_since(std::time::UNIX_EPOCH)
         .map(|d| d.as_secs())

@@ -4,7 +4,7 @@ use std::collections::{HashMap, HashSet};
 use std::path::{Path, PathBuf};
 use std::time::SystemTime;
 
-use super::atomic::{ReadOutcome, read_json, write_json};
+use super::atomic::{ReadOutcome, read_json, set_aside, write_json};
 use super::locker::{LOCKER_SCHEMA, LockerFile};
 use super::settings::{SETTINGS_SCHEMA, Settings};
 use super::team_state::{TEAM_SCHEMA, TeamState};
@@ -112,6 +112,19 @@ impl Store {
     fn remember(&mut self, name: &'static str) {
         let t = self.modified(name);
         self.seen.insert(name, t);
+    }
+
+    /// Keep the last-team file aside (it read, but no longer plans), so that the next
+    /// save cannot overwrite it. Returns where it was kept.
+    pub fn set_aside_team(&mut self, reason: &str) -> Option<PathBuf> {
+        let path = self.dir.join(TEAM_FILE);
+        match set_aside::<()>(&path, reason.to_string()) {
+            ReadOutcome::SetAside { kept_as, .. } if kept_as != path => Some(kept_as),
+            _ => {
+                self.blocked.insert(TEAM_FILE);
+                None
+            }
+        }
     }
 
     /// Whether another program changed a file since this store last read or wrote it.
