@@ -81,6 +81,11 @@ fn json_output_has_the_documented_keys() {
     }
     assert_eq!(controlling, 1);
     assert!(v["stress_margin"].as_f64().unwrap() >= 1.0);
+    // Every diver has a SAC and the team a depth: the margin at the first turn is known
+    // and never below the all-used margin.
+    assert!(
+        v["stress_margin_at_first_turn"].as_f64().unwrap() >= v["stress_margin"].as_f64().unwrap()
+    );
 }
 
 #[test]

@@ -234,3 +234,35 @@ fn stages_are_matched_on_volume_like_the_main_gas() {
         assert_eq!(x.turn_shown_value, y.turn_shown_value);
     }
 }
+
+#[test]
+fn slower_breathers_have_used_less_when_the_team_turns() {
+    // Domain notes (common practice): the diver with the higher breathing rate reaches the
+    // allowance first; at that moment the others have used less. Identical twins, SAC 20
+    // and 10 L/min at one depth: when A turns, B has used half of A's gas.
+    let mut t = team(
+        UnitSystem::Metric,
+        Rule::Thirds,
+        10.0,
+        vec![
+            diver("A", stamped(2, 12.0, 232.0), Pressure::from_bar(210.0)),
+            diver("B", stamped(2, 12.0, 232.0), Pressure::from_bar(210.0)),
+        ],
+    );
+    t.depth = Some(turnsheet::plan::Depth::from_metres(20.0));
+    t.divers[0].sac_l_per_min = Some(20.0);
+    t.divers[1].sac_l_per_min = Some(10.0);
+    let plan = plan_team(&t).unwrap();
+    assert_eq!(plan.first_to_turn, Some(0));
+    let c = plan.divers[0].content_real.litres();
+    let u_a = plan.divers[0].used_real.litres();
+    let u_b = u_a / 2.0;
+    // Worst pair: B fails, A donates: (C - u_A) / (u_A + u_B).
+    let expected = ((c - u_a) / (u_a + u_b)).min((c - u_b) / (u_a + u_b));
+    let at_turn = plan.stress_at_first_turn.as_ref().unwrap().margin;
+    assert!((at_turn - expected).abs() < 1e-9, "{at_turn} vs {expected}");
+    assert!(at_turn > plan.stress.margin);
+    // Without every breathing rate there is no such figure.
+    t.divers[1].sac_l_per_min = None;
+    assert!(plan_team(&t).unwrap().stress_at_first_turn.is_none());
+}

@@ -151,6 +151,9 @@ proptest! {
         }
         prop_assert!(plan.divers.iter().filter(|d| d.stage.as_ref().is_some_and(|s| s.controlling)).count()
             == usize::from(t.divers.iter().any(|d| d.stage.is_some())));
+        if let Some(at_turn) = &plan.stress_at_first_turn {
+            prop_assert!(at_turn.margin >= plan.stress.margin - 1e-9);
+        }
         let guaranteed = t.rule.guaranteed_margin();
         prop_assert!(plan.stress.margin >= guaranteed - 1e-9,
             "margin {} below {guaranteed}", plan.stress.margin);

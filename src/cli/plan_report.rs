@@ -2,7 +2,7 @@
 
 use serde::Serialize;
 
-use crate::plan::out_of_gas::{describe_margin, margin_for_display};
+use crate::plan::out_of_gas::{describe_margin, describe_margin_at_first_turn, margin_for_display};
 use crate::plan::{TeamInput, TeamPlan, UnitSystem};
 
 #[derive(Serialize, Debug)]
@@ -18,6 +18,8 @@ pub struct JsonPlan {
     /// Minimum over diver pairs; null when no gas is spent.
     pub stress_margin: Option<f64>,
     pub stress_text: String,
+    /// The margin when the first diver turns, given every breathing rate and the depth.
+    pub stress_margin_at_first_turn: Option<f64>,
     pub first_to_turn: Option<String>,
     pub warnings: Vec<String>,
     pub divers: Vec<JsonDiver>,
@@ -66,6 +68,11 @@ pub fn json_report(input: &TeamInput, plan: &TeamPlan) -> JsonPlan {
             .is_finite()
             .then(|| r3(plan.stress.margin)),
         stress_text: describe_margin(&plan.stress, &names),
+        stress_margin_at_first_turn: plan
+            .stress_at_first_turn
+            .as_ref()
+            .filter(|c| c.margin.is_finite())
+            .map(|c| r3(c.margin)),
         first_to_turn: plan.first_to_turn.map(|i| names[i].clone()),
         warnings: plan.warnings.clone(),
         divers: plan
@@ -162,6 +169,17 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
             margin_for_display(plan.stress.margin),
             input.rule.guaranteed_margin()
         ));
+    }
+    let at_turn = describe_margin_at_first_turn(
+        plan.stress_at_first_turn.as_ref(),
+        plan.first_to_turn,
+        plan.first_to_turn
+            .and_then(|i| plan.divers[i].minutes_to_turn),
+        &names,
+    );
+    if !at_turn.is_empty() {
+        s.push_str(&at_turn);
+        s.push('\n');
     }
     if plan.divers.iter().any(|d| d.stage.is_some()) {
         s.push_str(&format!(

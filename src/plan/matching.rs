@@ -63,6 +63,10 @@ pub struct TeamPlan {
     pub team_allowance_real: Volume,
     pub team_allowance_hand: Volume,
     pub stress: StressCheck,
+    /// The same check at the moment the team actually turns (the first diver reaches
+    /// their turn) when every breathing rate and the depth are known: the others have
+    /// used less by then, so this margin is never below `stress.margin`.
+    pub stress_at_first_turn: Option<StressCheck>,
     /// Index of the diver who reaches turn first, where times are known for all.
     pub first_to_turn: Option<usize>,
     pub warnings: Vec<String>,
@@ -257,6 +261,23 @@ pub fn plan_team(team: &TeamInput) -> Result<TeamPlan, InputError> {
 
     let used: Vec<Volume> = divers.iter().map(|d| d.used_real).collect();
     let stress = stress_check(&content_real, &used);
+    let stress_at_first_turn = first_to_turn.and_then(|first| {
+        let t_first = divers[first].minutes_to_turn?;
+        let used_then: Option<Vec<Volume>> = divers
+            .iter()
+            .map(|d| {
+                let own = d.minutes_to_turn?;
+                // Linear in time at a constant rate: the share of the own turn reached.
+                let share = if own > 0.0 {
+                    (t_first / own).min(1.0)
+                } else {
+                    1.0
+                };
+                Some(d.used_real.scaled(share))
+            })
+            .collect();
+        used_then.map(|u| stress_check(&content_real, &u))
+    });
 
     let mut warnings = team.warnings();
     for d in &divers {
@@ -281,6 +302,7 @@ pub fn plan_team(team: &TeamInput) -> Result<TeamPlan, InputError> {
         team_allowance_real: allowance_real,
         team_allowance_hand: allowance_hand,
         stress,
+        stress_at_first_turn,
         first_to_turn,
         warnings,
     })

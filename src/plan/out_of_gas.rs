@@ -62,6 +62,24 @@ pub fn describe_margin(check: &StressCheck, names: &[String]) -> String {
     }
 }
 
+/// The sentence for the margin at the moment the first diver turns, if it is known.
+pub fn describe_margin_at_first_turn(
+    at_turn: Option<&StressCheck>,
+    first: Option<usize>,
+    minutes: Option<f64>,
+    names: &[String],
+) -> String {
+    match (at_turn, first, minutes) {
+        (Some(check), Some(i), Some(m)) if check.margin.is_finite() => format!(
+            "With the breathing rates entered, the team turns when {} does, after about {} min; the others have used less by then, and the reserve covers both exits at up to {:.2}× normal breathing.",
+            names[i],
+            m.floor() as i64,
+            margin_for_display(check.margin)
+        ),
+        _ => String::new(),
+    }
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
