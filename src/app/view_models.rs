@@ -3,7 +3,6 @@
 
 use crate::plan::catalogue::presets;
 use crate::plan::error::fmt_num;
-use crate::plan::out_of_gas::{describe_margin, describe_margin_at_first_turn};
 use crate::plan::{ModelKind, Pressure, UnitSystem, Volume};
 
 use super::session::{Picker, Session, depth_text};
@@ -193,19 +192,11 @@ pub fn rule_text(s: &Session) -> String {
 
 pub fn margin_text(s: &Session) -> String {
     let plan = s.team.plan();
-    let names: Vec<String> = plan.divers.iter().map(|d| d.name.clone()).collect();
-    let at_turn = describe_margin_at_first_turn(
-        plan.stress_at_first_turn.as_ref(),
-        plan.first_to_turn,
-        plan.first_to_turn
-            .and_then(|i| plan.divers[i].minutes_to_turn),
-        &names,
-    );
-    let base = describe_margin(&plan.stress, &names);
+    let at_turn = plan.margin_at_first_turn_text();
     if at_turn.is_empty() {
-        base
+        plan.margin_text()
     } else {
-        format!("{base} {at_turn}")
+        format!("{} {at_turn}", plan.margin_text())
     }
 }
 

@@ -2,7 +2,7 @@
 
 use serde::Serialize;
 
-use crate::plan::out_of_gas::{describe_margin, describe_margin_at_first_turn, margin_for_display};
+use crate::plan::out_of_gas::margin_for_display;
 use crate::plan::{TeamInput, TeamPlan, UnitSystem};
 
 #[derive(Serialize, Debug)]
@@ -53,7 +53,7 @@ fn r3(x: f64) -> f64 {
 
 pub fn json_report(input: &TeamInput, plan: &TeamPlan) -> JsonPlan {
     let u = input.units;
-    let names: Vec<String> = plan.divers.iter().map(|d| d.name.clone()).collect();
+    let names = plan.names();
     JsonPlan {
         units: u,
         rule: input.rule.name().to_string(),
@@ -67,7 +67,7 @@ pub fn json_report(input: &TeamInput, plan: &TeamPlan) -> JsonPlan {
             .margin
             .is_finite()
             .then(|| r3(plan.stress.margin)),
-        stress_text: describe_margin(&plan.stress, &names),
+        stress_text: plan.margin_text(),
         stress_margin_at_first_turn: plan
             .stress_at_first_turn
             .as_ref()
@@ -160,8 +160,8 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
     s.push_str(
         "Turn the dive when the FIRST diver reaches their turn pressure, or at any other limit.\n",
     );
-    let names: Vec<String> = plan.divers.iter().map(|d| d.name.clone()).collect();
-    s.push_str(&describe_margin(&plan.stress, &names));
+    let names = plan.names();
+    s.push_str(&plan.margin_text());
     s.push('\n');
     if plan.stress.margin.is_finite() {
         s.push_str(&format!(
@@ -170,13 +170,7 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
             input.rule.guaranteed_margin()
         ));
     }
-    let at_turn = describe_margin_at_first_turn(
-        plan.stress_at_first_turn.as_ref(),
-        plan.first_to_turn,
-        plan.first_to_turn
-            .and_then(|i| plan.divers[i].minutes_to_turn),
-        &names,
-    );
+    let at_turn = plan.margin_at_first_turn_text();
     if !at_turn.is_empty() {
         s.push_str(&at_turn);
         s.push('\n');

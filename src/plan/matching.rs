@@ -76,6 +76,26 @@ impl TeamPlan {
     pub fn controlling_diver(&self) -> &DiverPlan {
         &self.divers[self.controlling]
     }
+
+    pub fn names(&self) -> Vec<String> {
+        self.divers.iter().map(|d| d.name.clone()).collect()
+    }
+
+    /// The out-of-gas check in words (all allowances used).
+    pub fn margin_text(&self) -> String {
+        super::out_of_gas::describe_margin(&self.stress, &self.names())
+    }
+
+    /// The check in words at the moment the first diver turns; empty when unknown.
+    pub fn margin_at_first_turn_text(&self) -> String {
+        super::out_of_gas::describe_margin_at_first_turn(
+            self.stress_at_first_turn.as_ref(),
+            self.first_to_turn,
+            self.first_to_turn
+                .and_then(|i| self.divers[i].minutes_to_turn),
+            &self.names(),
+        )
+    }
 }
 
 /// Round `value` up to a multiple of `step`, tolerating float noise of 1e-9 steps.
