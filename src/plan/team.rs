@@ -261,6 +261,25 @@ pub(crate) fn validate_mix(field: &str, mix: &Mix) -> Result<(), InputError> {
     Ok(())
 }
 
+/// One gas supply (a diver's main set or stage): cylinders, mix and start pressure,
+/// with fields named under `prefix`.
+fn validate_supply(
+    u: UnitSystem,
+    prefix: &str,
+    cylinders: &CylinderSet,
+    mix: &Mix,
+    start: Pressure,
+) -> Result<(), InputError> {
+    validate_cylinders(u, &format!("{prefix}.cylinders"), cylinders)?;
+    validate_mix(&format!("{prefix}.mix"), mix)?;
+    validate_start(
+        u,
+        &format!("{prefix}.start"),
+        start,
+        cylinders.working_pressure(),
+    )
+}
+
 fn validate_diver(u: UnitSystem, i: usize, d: &DiverInput) -> Result<(), InputError> {
     let f = format!("divers[{i}]");
     let name = d.name.trim();
@@ -270,23 +289,9 @@ fn validate_diver(u: UnitSystem, i: usize, d: &DiverInput) -> Result<(), InputEr
             "a name of 1 to 24 characters is needed",
         ));
     }
-    validate_cylinders(u, &format!("{f}.cylinders"), &d.cylinders)?;
-    validate_mix(&format!("{f}.mix"), &d.mix)?;
-    validate_start(
-        u,
-        &format!("{f}.start"),
-        d.start,
-        d.cylinders.working_pressure(),
-    )?;
+    validate_supply(u, &f, &d.cylinders, &d.mix, d.start)?;
     if let Some(st) = &d.stage {
-        validate_cylinders(u, &format!("{f}.stage.cylinders"), &st.cylinders)?;
-        validate_mix(&format!("{f}.stage.mix"), &st.mix)?;
-        validate_start(
-            u,
-            &format!("{f}.stage.start"),
-            st.start,
-            st.cylinders.working_pressure(),
-        )?;
+        validate_supply(u, &format!("{f}.stage"), &st.cylinders, &st.mix, st.start)?;
     }
     if let Some(sac) = d.sac_l_per_min {
         let (v, lo, hi) = match u {
