@@ -98,17 +98,8 @@ impl TeamPlan {
     }
 }
 
-/// Round `value` up to a multiple of `step`, tolerating float noise of 1e-9 steps.
-pub fn round_up_to_step(value: f64, step: f64) -> f64 {
-    let k = (value / step - 1e-9).ceil();
-    k * step
-}
-
-/// Round `value` down to a multiple of `step`, tolerating float noise of 1e-9 steps.
-pub fn round_down_to_step(value: f64, step: f64) -> f64 {
-    let k = (value / step + 1e-9).floor();
-    k * step
-}
+// The rounding helpers live in `rounding.rs`; re-exported so callers keep compiling.
+pub use super::rounding::{round_down_to_step, round_up_to_step};
 
 /// One gas supply to match: a diver's main cylinders or a stage.
 struct Supply<'a> {

@@ -10,6 +10,7 @@ pub mod matching;
 pub mod mix;
 pub mod out_of_gas;
 pub mod real_gas;
+pub mod rounding;
 pub mod rule;
 pub mod team;
 pub mod temperature;
