@@ -72,11 +72,11 @@ fn main() {
         s.open_mix_picker(0);
     });
     shot("08-cylinders", &|s| {
-        s.close_picker();
+        s.picker.close();
         s.open_cylinder_picker(2);
     });
     shot("09-locker", &|s| {
-        s.close_picker();
+        s.picker.close();
         let p = &presets()[0];
         for (name, set, note) in [
             ("Steel twins", presets()[0].set, "Test due March"),

@@ -43,11 +43,7 @@ impl KeypadBuffer {
 
     /// The number typed, if any.
     pub fn value(&self) -> Option<f64> {
-        if self.text.is_empty() || self.text == "." {
-            None
-        } else {
-            self.text.parse().ok()
-        }
+        parse_value(&self.text)
     }
 
     /// Apply one key: a digit or letter, ".", "del", "clear" or " ". Unknown keys are ignored.
@@ -89,6 +85,15 @@ impl KeypadBuffer {
             }
             _ => {}
         }
+    }
+}
+
+/// The number in a keypad text, if it is one.
+pub fn parse_value(text: &str) -> Option<f64> {
+    if text.is_empty() || text == "." {
+        None
+    } else {
+        text.parse().ok()
     }
 }
 

@@ -5,6 +5,7 @@ pub mod adapters;
 pub mod cautions;
 pub mod keypad;
 pub mod locker_controller;
+pub mod locker_draft;
 pub mod nav;
 pub mod session;
 pub mod team_controller;

@@ -1,4 +1,5 @@
-//! Page history: what Back does.
+//! Navigation and status: the page history (what Back does) and the messages shown
+//! until the person dismisses them.
 
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
 pub enum Screen {
@@ -45,9 +46,51 @@ impl NavController {
     }
 }
 
+/// Messages for the person (files that could not be read, edits that were refused),
+/// shown together until dismissed.
+#[derive(Clone, Debug, Default, PartialEq)]
+pub struct Status {
+    messages: Vec<String>,
+}
+
+impl Status {
+    pub fn new(messages: Vec<String>) -> Self {
+        Status { messages }
+    }
+    pub fn push(&mut self, message: impl Into<String>) {
+        self.messages.push(message.into());
+    }
+    /// Keep the message of a failed result.
+    pub fn report<E: std::fmt::Display>(&mut self, r: Result<(), E>) {
+        if let Err(e) = r {
+            self.push(e.to_string());
+        }
+    }
+    pub fn clear(&mut self) {
+        self.messages.clear();
+    }
+    pub fn iter(&self) -> std::slice::Iter<'_, String> {
+        self.messages.iter()
+    }
+    /// All messages, one a line; empty when there are none.
+    pub fn text(&self) -> String {
+        self.messages.join("\n")
+    }
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
+
+    #[test]
+    fn status_keeps_failures_until_dismissed() {
+        let mut s = Status::new(vec!["first".into()]);
+        s.report(Ok::<(), String>(()));
+        s.report(Err::<(), String>("second".into()));
+        assert_eq!(s.text(), "first\nsecond");
+        s.clear();
+        assert_eq!(s.text(), "");
+    }
 
     #[test]
     fn back_walks_the_history_and_stops_at_the_root() {

@@ -2,10 +2,10 @@
 
 use slint::ComponentHandle;
 
-use super::super::session::{EntryTarget, Session};
+use super::super::session::Session;
+use super::super::view_models as vm;
 use super::super::{AppWindow, KeypadAdapter};
 use super::{Shared, act, handles};
-use crate::plan::error::fmt_num;
 
 pub fn connect(ui: &AppWindow, s: &Shared) {
     let a = ui.global::<KeypadAdapter>();
@@ -19,23 +19,18 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
 
 pub fn refresh(ui: &AppWindow, s: &Session) {
     let a = ui.global::<KeypadAdapter>();
-    match &s.entry {
+    match vm::keypad(s) {
         None => a.set_open(false),
-        Some(e) => {
+        Some(k) => {
             a.set_open(true);
-            a.set_letters(e.buffer.is_letters());
-            a.set_title(e.title.clone().into());
-            a.set_display(e.buffer.text().into());
-            a.set_unit(e.unit.clone().into());
-            a.set_reason(e.reason.clone().into());
-            a.set_can_decimal(e.buffer.allows_decimal());
-            let stepping = matches!(e.target, EntryTarget::Start(_));
-            a.set_can_step(stepping);
-            a.set_step_text(if stepping {
-                fmt_num(s.team.input().gauge_step).into()
-            } else {
-                "".into()
-            });
+            a.set_letters(k.letters);
+            a.set_title(k.title.into());
+            a.set_display(k.display.into());
+            a.set_unit(k.unit.into());
+            a.set_reason(k.reason.into());
+            a.set_can_decimal(k.can_decimal);
+            a.set_can_step(k.can_step);
+            a.set_step_text(k.step_text.into());
         }
     }
 }

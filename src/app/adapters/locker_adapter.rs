@@ -6,8 +6,6 @@ use super::super::session::{EntryTarget, Session};
 use super::super::view_models as vm;
 use super::super::{AppWindow, LockerAdapter, LockerEditAdapter, LockerRow, PresetRow};
 use super::{Shared, act, handles, model};
-use crate::plan::catalogue::Material;
-use crate::plan::error::fmt_num;
 
 pub fn connect(ui: &AppWindow, s: &Shared) {
     let a = ui.global::<LockerAdapter>();
@@ -34,11 +32,15 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
     let (w, st) = handles(ui, s);
     e.on_edit_second(move || act(&w, &st, |x| x.open_entry(EntryTarget::LockerSecond)));
     let (w, st) = handles(ui, s);
-    e.on_change_count(move |d| act(&w, &st, |x| x.draft_count(d)));
+    e.on_change_count(move |n| act(&w, &st, |x| x.locker.edit_draft(|d| d.change_count(n))));
     let (w, st) = handles(ui, s);
-    e.on_set_rated(move |r| act(&w, &st, |x| x.draft_rated(r)));
+    e.on_set_rated(move |r| act(&w, &st, |x| x.locker.edit_draft(|d| d.set_rated(r))));
     let (w, st) = handles(ui, s);
-    e.on_set_material(move |i| act(&w, &st, |x| x.draft_material(i as usize)));
+    e.on_set_material(move |i| {
+        act(&w, &st, |x| {
+            x.locker.edit_draft(|d| d.set_material(i as usize))
+        })
+    });
     let (w, st) = handles(ui, s);
     let weak = ui.as_weak();
     e.on_save(move || {
@@ -57,24 +59,14 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
 pub fn refresh(ui: &AppWindow, s: &Session) {
     let a = ui.global::<LockerAdapter>();
     a.set_entries(model(
-        s.locker
-            .file
-            .entries
-            .iter()
-            .map(|e| LockerRow {
-                id: e.id as i32,
-                name: e.name.clone().into(),
-                detail: format!(
-                    "{} · {}",
-                    e.cylinders
-                        .to_set("locker")
-                        .map(|x| x.describe())
-                        .unwrap_or_else(|err| err.to_string()),
-                    e.material.name()
-                )
-                .into(),
-                note: e.note.clone().into(),
-                mine: e.mine,
+        vm::locker_rows(s)
+            .into_iter()
+            .map(|r| LockerRow {
+                id: r.id,
+                name: r.name.into(),
+                detail: r.detail.into(),
+                note: r.note.into(),
+                mine: r.mine,
             })
             .collect(),
     ));
@@ -87,54 +79,20 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
             })
             .collect(),
     ));
-    a.set_undo_text(match &s.locker.undo {
-        Some((_, e)) => format!("Deleted “{}”.", e.name).into(),
-        None => "".into(),
-    });
+    a.set_undo_text(vm::undo_text(s).into());
 
     let e = ui.global::<LockerEditAdapter>();
-    if let Some(d) = &s.locker.draft {
-        let specs = d.field_specs();
-        e.set_title(
-            if d.id.is_some() {
-                "Edit set"
-            } else {
-                "New set"
-            }
-            .into(),
-        );
-        e.set_name(d.name.clone().into());
-        e.set_count(i32::from(d.count));
+    if let Some(d) = vm::locker_edit(s) {
+        e.set_title(d.title.into());
+        e.set_name(d.name.into());
+        e.set_count(d.count);
         e.set_rated(d.rated);
-        e.set_first_label(specs[0].0.into());
-        e.set_second_label(specs[1].0.into());
-        e.set_first_value(
-            d.first
-                .map(|v| format!("{} {}", fmt_num(v), specs[0].1))
-                .unwrap_or_default()
-                .into(),
-        );
-        e.set_second_value(
-            d.second
-                .map(|v| format!("{} {}", fmt_num(v), specs[1].1))
-                .unwrap_or_default()
-                .into(),
-        );
-        e.set_material_index(
-            Material::ALL
-                .iter()
-                .position(|m| *m == d.material)
-                .unwrap_or(0) as i32,
-        );
-        e.set_note(d.note.clone().into());
-        e.set_summary(
-            d.to_set()
-                .map(|set| {
-                    let w = set.water(crate::plan::ModelKind::Real).litres();
-                    format!("{} · {:.1} L of water in all", set.describe(), w)
-                })
-                .unwrap_or_default()
-                .into(),
-        );
+        e.set_first_label(d.first_label.into());
+        e.set_second_label(d.second_label.into());
+        e.set_first_value(d.first_value.into());
+        e.set_second_value(d.second_value.into());
+        e.set_material_index(d.material_index);
+        e.set_note(d.note.into());
+        e.set_summary(d.summary.into());
     }
 }

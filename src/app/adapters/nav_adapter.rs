@@ -51,7 +51,7 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
 }
 
 pub fn refresh(ui: &AppWindow, s: &Session) {
-    ui.global::<Nav>().set_page(page(s.nav.current()));
+    ui.global::<Nav>().set_page(page(s.page()));
     ui.global::<StatusAdapter>()
-        .set_message(s.status.join("\n").into());
+        .set_message(s.status.text().into());
 }

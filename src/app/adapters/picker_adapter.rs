@@ -14,15 +14,15 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
     let (w, st) = handles(ui, s);
     a.on_pick_preset(move |i| act(&w, &st, |x| x.pick_preset(i as usize)));
     let (w, st) = handles(ui, s);
-    a.on_nudge_o2(move |d| act(&w, &st, |x| x.nudge_mix(d, 0)));
+    a.on_nudge_o2(move |d| act(&w, &st, |x| x.picker.nudge_mix(d, 0)));
     let (w, st) = handles(ui, s);
-    a.on_nudge_he(move |d| act(&w, &st, |x| x.nudge_mix(0, d)));
+    a.on_nudge_he(move |d| act(&w, &st, |x| x.picker.nudge_mix(0, d)));
     let (w, st) = handles(ui, s);
-    a.on_quick_mix(move |i| act(&w, &st, |x| x.quick_mix(i as usize)));
+    a.on_quick_mix(move |i| act(&w, &st, |x| x.picker.quick_mix(i as usize)));
     let (w, st) = handles(ui, s);
     a.on_mix_done(move || act(&w, &st, |x| x.mix_done()));
     let (w, st) = handles(ui, s);
-    a.on_close(move || act(&w, &st, |x| x.close_picker()));
+    a.on_close(move || act(&w, &st, |x| x.picker.close()));
     let (w, st) = handles(ui, s);
     a.on_no_stage(move || act(&w, &st, |x| x.pick_no_stage()));
 }
@@ -55,10 +55,10 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
                 .collect(),
         ));
     }
-    if let (Picker::Mix { o2, he, .. }, Some(mix)) = (s.picker, s.picker_mix()) {
+    if let (Picker::Mix { o2, he, .. }, Some(mix)) = (s.picker, s.picker.mix()) {
         a.set_o2(o2);
         a.set_he(he);
         a.set_mix_text(mix.label().into());
-        a.set_mix_reason(s.mix_reason().into());
+        a.set_mix_reason(s.picker.mix_reason().into());
     }
 }

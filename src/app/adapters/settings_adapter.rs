@@ -2,12 +2,11 @@
 
 use slint::ComponentHandle;
 
-use super::super::cautions::CAUTIONS;
 use super::super::session::{EntryTarget, Session};
 use super::super::view_models as vm;
 use super::super::{AppWindow, CautionsAdapter, SettingsAdapter};
 use super::{Shared, act, handles, strings};
-use crate::plan::{Rule, UnitSystem};
+use crate::plan::UnitSystem;
 
 pub fn connect(ui: &AppWindow, s: &Shared) {
     let a = ui.global::<SettingsAdapter>();
@@ -36,23 +35,16 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
 
 pub fn refresh(ui: &AppWindow, s: &Session) {
     let a = ui.global::<SettingsAdapter>();
-    let cfg = &s.settings;
-    a.set_imperial(cfg.units == UnitSystem::Imperial);
-    a.set_rule_index(Rule::ALL.iter().position(|r| *r == cfg.rule).unwrap_or(1) as i32);
-    a.set_step_options(strings(vm::step_labels(cfg.units)));
-    a.set_step_index(vm::step_index(cfg.units, cfg.gauge_step()));
-    a.set_water_temp(vm::water_temp_text(s).into());
-    let cautions: Vec<String> = CAUTIONS.iter().map(|c| c.to_string()).collect();
-    a.set_cautions(strings(cautions.clone()));
-    a.set_about(
-        format!(
-            "Turnsheet {} · free software under the GNU GPL, version 3 or later · built with Slint {} (used under its GPL-3.0 licence) · real-gas contents by GERG-2008 (the aga8 crate) · Roboto fonts under the Apache License 2.0 · data in {}",
-            env!("CARGO_PKG_VERSION"),
-            "1.18.1",
-            s.store.dir().display()
-        )
-        .into(),
-    );
+    let v = vm::settings(s);
+    a.set_imperial(v.imperial);
+    a.set_rule_options(strings(vm::rule_symbols()));
+    a.set_rule_labels(strings(vm::rule_names()));
+    a.set_rule_index(v.rule_index);
+    a.set_step_options(strings(v.step_options));
+    a.set_step_index(v.step_index);
+    a.set_water_temp(v.water_temp.into());
+    a.set_cautions(strings(vm::cautions()));
+    a.set_about(v.about.into());
     ui.global::<CautionsAdapter>()
-        .set_cautions(strings(cautions));
+        .set_cautions(strings(vm::cautions()));
 }

@@ -6,7 +6,6 @@ use super::super::session::{EntryTarget, Session};
 use super::super::view_models as vm;
 use super::super::{AppWindow, DiverCard, TeamAdapter};
 use super::{Shared, act, handles, model, strings};
-use crate::plan::Rule;
 
 pub fn connect(ui: &AppWindow, s: &Shared) {
     let a = ui.global::<TeamAdapter>();
@@ -54,7 +53,6 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
 
 pub fn refresh(ui: &AppWindow, s: &Session) {
     let a = ui.global::<TeamAdapter>();
-    let input = s.team.input();
     let cards: Vec<DiverCard> = vm::diver_cards(s)
         .into_iter()
         .map(|c| DiverCard {
@@ -72,18 +70,16 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
         })
         .collect();
     a.set_divers(model(cards));
-    a.set_rule_index(Rule::ALL.iter().position(|r| *r == input.rule).unwrap_or(1) as i32);
-    a.set_step_options(strings(vm::step_labels(input.units)));
-    a.set_step_index(vm::step_index(input.units, input.gauge_step));
-    a.set_depth_text(vm::depth_label(s).into());
-    a.set_water_text(
-        match input.water {
-            crate::plan::Water::Fresh => "Fresh",
-            crate::plan::Water::Salt => "Salt",
-        }
-        .into(),
-    );
-    a.set_can_add(s.team.can_add());
-    a.set_can_remove(s.team.can_remove());
-    a.set_summary(vm::team_summary(s).into());
+    let p = vm::team_page(s);
+    a.set_rule_options(strings(vm::rule_symbols()));
+    a.set_rule_labels(strings(vm::rule_names()));
+    a.set_rule_index(p.rule_index);
+    a.set_rule_warning(p.rule_warning.into());
+    a.set_step_options(strings(p.step_options));
+    a.set_step_index(p.step_index);
+    a.set_depth_text(p.depth_text.into());
+    a.set_water_text(p.water_text.into());
+    a.set_can_add(p.can_add);
+    a.set_can_remove(p.can_remove);
+    a.set_summary(p.summary.into());
 }

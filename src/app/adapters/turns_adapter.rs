@@ -26,11 +26,11 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
     ));
     a.set_rule_text(vm::rule_text(s).into());
     a.set_margin_text(vm::margin_text(s).into());
-    a.set_warnings(strings(s.team.plan().warnings.clone()));
+    a.set_warnings(strings(vm::warnings(s)));
     a.set_first_text(vm::first_text(s).into());
     a.set_error("".into());
     let b = ui.global::<BuddyAdapter>();
-    b.set_unit(s.units().pressure_label().into());
+    b.set_unit(vm::pressure_unit(s).into());
     b.set_rows(model(
         rows.iter()
             .map(|r| BuddyRow {

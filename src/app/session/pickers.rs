@@ -1,14 +1,87 @@
-//! Session actions of the cylinder and mix pickers (main gas and stage).
+//! The cylinder and mix pickers (main gas and stage): the open picker with its own
+//! methods, and the session actions that open it and apply the choice.
 
 use crate::plan::Mix;
 use crate::plan::catalogue::presets;
 use crate::plan::team::validate_mix;
 
-use super::{Picker, Session};
+use super::Session;
+
+/// An open picker, for a diver's main gas or stage.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub enum Picker {
+    None,
+    Cylinders {
+        diver: usize,
+        stage: bool,
+    },
+    /// O2 and He in percent.
+    Mix {
+        diver: usize,
+        stage: bool,
+        o2: i32,
+        he: i32,
+    },
+}
+
+/// The quick choices of the mix picker: air, EAN32, EAN50, Tx 21/35, Tx 18/45.
+const QUICK_MIXES: [(i32, i32); 5] = [(21, 0), (32, 0), (50, 0), (21, 35), (18, 45)];
+
+impl Picker {
+    /// The mix picker, starting from `mix`.
+    fn for_mix(diver: usize, stage: bool, mix: Mix) -> Picker {
+        Picker::Mix {
+            diver,
+            stage,
+            o2: (mix.o2 * 100.0).round() as i32,
+            he: (mix.he * 100.0).round() as i32,
+        }
+    }
+
+    /// The mix being picked, if the mix picker is open.
+    pub fn mix(&self) -> Option<Mix> {
+        match *self {
+            Picker::Mix { o2, he, .. } => Some(Mix {
+                o2: f64::from(o2) / 100.0,
+                he: f64::from(he) / 100.0,
+            }),
+            _ => None,
+        }
+    }
+
+    /// Why the mix being picked cannot be used; empty when it can.
+    pub fn mix_reason(&self) -> String {
+        match self.mix() {
+            Some(m) => validate_mix("mix", &m)
+                .err()
+                .map(|e| e.message)
+                .unwrap_or_default(),
+            None => String::new(),
+        }
+    }
+
+    /// Change O2 and He by whole percents, within 5–100 % O2 and 0–95 % He.
+    pub fn nudge_mix(&mut self, o2_delta: i32, he_delta: i32) {
+        if let Picker::Mix { o2, he, .. } = self {
+            *o2 = (*o2 + o2_delta).clamp(5, 100);
+            *he = (*he + he_delta).clamp(0, 95);
+        }
+    }
+
+    /// One of the quick choices (see `QUICK_MIXES`).
+    pub fn quick_mix(&mut self, idx: usize) {
+        if let (Picker::Mix { o2, he, .. }, Some((q_o2, q_he))) = (self, QUICK_MIXES.get(idx)) {
+            *o2 = *q_o2;
+            *he = *q_he;
+        }
+    }
+
+    pub fn close(&mut self) {
+        *self = Picker::None;
+    }
+}
 
 impl Session {
-    // ---- pickers -----------------------------------------------------------------
-
     pub fn open_cylinder_picker(&mut self, i: usize) {
         if i < self.team.len() {
             self.picker = Picker::Cylinders {
@@ -31,7 +104,7 @@ impl Session {
         let Picker::Cylinders { diver, stage } = self.picker else {
             return;
         };
-        let Some(e) = self.locker.file.entries.get(idx).cloned() else {
+        let Some(e) = self.locker.entries().get(idx).cloned() else {
             return;
         };
         match e.cylinders.to_set("locker") {
@@ -88,12 +161,7 @@ impl Session {
 
     pub fn open_mix_picker(&mut self, i: usize) {
         if let Some(d) = self.team.input().divers.get(i) {
-            self.picker = Picker::Mix {
-                diver: i,
-                stage: false,
-                o2: (d.mix.o2 * 100.0).round() as i32,
-                he: (d.mix.he * 100.0).round() as i32,
-            };
+            self.picker = Picker::for_mix(i, false, d.mix);
         }
     }
 
@@ -105,54 +173,13 @@ impl Session {
             .get(i)
             .and_then(|d| d.stage.as_ref())
         {
-            self.picker = Picker::Mix {
-                diver: i,
-                stage: true,
-                o2: (st.mix.o2 * 100.0).round() as i32,
-                he: (st.mix.he * 100.0).round() as i32,
-            };
+            self.picker = Picker::for_mix(i, true, st.mix);
         }
     }
 
-    pub fn picker_mix(&self) -> Option<Mix> {
-        match self.picker {
-            Picker::Mix { o2, he, .. } => Some(Mix {
-                o2: f64::from(o2) / 100.0,
-                he: f64::from(he) / 100.0,
-            }),
-            _ => None,
-        }
-    }
-
-    pub fn mix_reason(&self) -> String {
-        match self.picker_mix() {
-            Some(m) => validate_mix("mix", &m)
-                .err()
-                .map(|e| e.message)
-                .unwrap_or_default(),
-            None => String::new(),
-        }
-    }
-
-    pub fn nudge_mix(&mut self, o2_delta: i32, he_delta: i32) {
-        if let Picker::Mix { o2, he, .. } = &mut self.picker {
-            *o2 = (*o2 + o2_delta).clamp(5, 100);
-            *he = (*he + he_delta).clamp(0, 95);
-        }
-    }
-
-    /// The quick choices of the mix picker: air, EAN32, EAN50, Tx 21/35, Tx 18/45.
-    pub fn quick_mix(&mut self, idx: usize) {
-        const QUICK: [(i32, i32); 5] = [(21, 0), (32, 0), (50, 0), (21, 35), (18, 45)];
-        if let (Picker::Mix { o2, he, .. }, Some((q_o2, q_he))) = (&mut self.picker, QUICK.get(idx))
-        {
-            *o2 = *q_o2;
-            *he = *q_he;
-        }
-    }
-
+    /// Use the mix picked; a mix the team refuses keeps the picker open.
     pub fn mix_done(&mut self) {
-        if let (Picker::Mix { diver, stage, .. }, Some(mix)) = (self.picker, self.picker_mix()) {
+        if let (Picker::Mix { diver, stage, .. }, Some(mix)) = (self.picker, self.picker.mix()) {
             let r = if stage {
                 self.team.set_stage_mix(diver, mix)
             } else {
@@ -167,8 +194,30 @@ impl Session {
             }
         }
     }
+}
 
-    pub fn close_picker(&mut self) {
-        self.picker = Picker::None;
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn the_mix_picker_stays_in_range_and_explains_a_bad_mix() {
+        let mut p = Picker::for_mix(0, false, Mix::AIR);
+        assert_eq!(p.mix_reason(), "");
+        p.nudge_mix(0, 200);
+        assert_eq!(
+            p,
+            Picker::Mix {
+                diver: 0,
+                stage: false,
+                o2: 21,
+                he: 95
+            }
+        );
+        assert_ne!(p.mix_reason(), "", "21 + 95 is more than 100 %");
+        p.quick_mix(2);
+        assert_eq!(p.mix(), Some(Mix { o2: 0.5, he: 0.0 }));
+        p.close();
+        assert_eq!(p.mix(), None);
     }
 }

@@ -1,52 +1,98 @@
-//! Session actions of the fill-to-water check and the wet-notes chart.
+//! The fill-to-water check and the wet-notes chart selection, each with its own
+//! methods, and the session actions that use them.
 
+use crate::plan::chart::{PairChart, pair_chart, starts_around};
+use crate::plan::temperature::{TemperatureChange, pressure_after_temperature_change};
+use crate::plan::{Pressure, TeamInput, Temperature, UnitSystem};
+
+use super::super::view_models::whole_down;
 use super::Session;
 
-impl Session {
-    // ---- fill to water -----------------------------------------------------------
+/// The fill-to-water check: a fill pressure and the temperature at the fill station,
+/// for one diver's gas.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct FillCheck {
+    pub diver: usize,
+    pub pressure: Pressure,
+    pub temperature: Temperature,
+}
 
-    /// Show the check for the next (`dir` > 0) or previous diver.
-    pub fn fill_cycle(&mut self, dir: i32) {
-        let n = self.team.len() as i32;
-        self.fill.diver = ((self.fill.diver as i32 + dir).rem_euclid(n)) as usize;
-    }
-
-    pub fn nudge_fill_temp(&mut self, dir: i32) {
-        let u = self.units();
-        let v = u.temperature_value(self.fill.temperature).round() + f64::from(dir.signum());
-        let t = u.temperature(v);
-        if (-20.0..=60.0).contains(&t.celsius()) {
-            self.fill.temperature = t;
+impl FillCheck {
+    /// The first diver's set at its working pressure, filled 15 degrees above the water.
+    pub fn for_team(input: &TeamInput) -> Self {
+        FillCheck {
+            diver: 0,
+            pressure: input.divers[0].cylinders.working_pressure(),
+            temperature: Temperature::from_celsius(input.water_temp.celsius() + 15.0),
         }
     }
 
-    /// Predicted pressure once the gas has reached the water temperature.
-    pub fn fill_prediction(&self) -> crate::plan::temperature::TemperatureChange {
-        let d = self.fill.diver.min(self.team.len() - 1);
-        crate::plan::temperature::pressure_after_temperature_change(
-            self.team.input().divers[d].mix,
-            self.fill.pressure,
-            self.fill.temperature,
-            self.team.input().water_temp,
+    /// The diver checked, within a team of `n`.
+    pub fn diver(&self, n: usize) -> usize {
+        self.diver.min(n - 1)
+    }
+
+    /// After a diver left the team of now `n`.
+    pub fn keep_within(&mut self, n: usize) {
+        self.diver = self.diver(n);
+    }
+
+    /// The next (`dir` > 0) or previous diver of a team of `n`, round the team.
+    pub fn cycle(&mut self, n: usize, dir: i32) {
+        self.diver = ((self.diver as i32 + dir).rem_euclid(n as i32)) as usize;
+    }
+
+    /// One degree warmer or cooler, in the team's unit, kept within −20 to 60 °C.
+    pub fn nudge_temperature(&mut self, u: UnitSystem, dir: i32) {
+        let v = u.temperature_value(self.temperature).round() + f64::from(dir.signum());
+        let t = u.temperature(v);
+        if (-20.0..=60.0).contains(&t.celsius()) {
+            self.temperature = t;
+        }
+    }
+
+    /// Predicted pressure once the gas has reached the team's water temperature.
+    pub fn prediction(&self, input: &TeamInput) -> TemperatureChange {
+        pressure_after_temperature_change(
+            input.divers[self.diver(input.divers.len())].mix,
+            self.pressure,
+            self.temperature,
+            input.water_temp,
         )
     }
 
-    /// Use the predicted in-water pressure (rounded down) as the diver's start.
-    pub fn fill_use_as_start(&mut self) {
-        let d = self.fill.diver.min(self.team.len() - 1);
-        let u = self.units();
-        let v = (u.pressure_value(self.fill_prediction().real) + 1e-6).floor();
-        let r = self.team.set_start(d, u.pressure(v));
-        self.team_result(r);
+    /// The predicted real-gas pressure as a start: rounded down to a whole unit.
+    pub fn usable_start(&self, input: &TeamInput) -> Pressure {
+        let u = input.units;
+        u.pressure(whole_down(u.pressure_value(self.prediction(input).real)))
+    }
+}
+
+/// The wet-notes chart shown: one diver against one teammate, always two different
+/// divers of the team.
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+pub struct ChartPair {
+    me: usize,
+    other: usize,
+}
+
+impl Default for ChartPair {
+    fn default() -> Self {
+        ChartPair { me: 0, other: 1 }
+    }
+}
+
+impl ChartPair {
+    /// (diver, teammate) within a team of `n`, or None when they coincide.
+    pub fn pair(&self, n: usize) -> Option<(usize, usize)> {
+        let (me, other) = (self.me.min(n - 1), self.other.min(n - 1));
+        (me != other).then_some((me, other))
     }
 
-    // ---- wet-notes chart -----------------------------------------------------------
-
-    /// Step the chart's diver (`teammate` false) or teammate through the team; the two
-    /// are always different divers.
-    pub fn chart_cycle(&mut self, teammate: bool, dir: i32) {
-        let n = self.team.len();
-        let (mut me, mut other) = (self.chart.0.min(n - 1), self.chart.1.min(n - 1));
+    /// Step the diver (`teammate` false) or the teammate through a team of `n`,
+    /// skipping the other one.
+    pub fn cycle(&mut self, n: usize, teammate: bool, dir: i32) {
+        let (mut me, mut other) = (self.me.min(n - 1), self.other.min(n - 1));
         let step = |x: usize| ((x as i32 + dir).rem_euclid(n as i32)) as usize;
         if teammate {
             other = step(other);
@@ -62,26 +108,70 @@ impl Session {
                 }
             }
         }
-        self.chart = (me, other);
+        *self = ChartPair { me, other };
     }
 
-    /// The chart of the selected pair, centred on their planned starts.
-    pub fn current_chart(&self) -> Option<crate::plan::chart::PairChart> {
-        let n = self.team.len();
-        let (me, other) = (self.chart.0.min(n - 1), self.chart.1.min(n - 1));
-        if me == other {
-            return None;
-        }
-        let input = self.team.input();
+    /// The chart of the pair, centred on their planned starts.
+    pub fn chart(&self, input: &TeamInput) -> Option<PairChart> {
+        let (me, other) = self.pair(input.divers.len())?;
         let u = input.units;
         let around = |i: usize| {
-            crate::plan::chart::starts_around(
+            starts_around(
                 u.pressure_value(input.divers[i].start),
                 input.gauge_step,
                 2,
                 7,
             )
         };
-        crate::plan::chart::pair_chart(input, me, other, &around(me), &around(other)).ok()
+        pair_chart(input, me, other, &around(me), &around(other)).ok()
+    }
+}
+
+impl Session {
+    /// Use the predicted in-water pressure (rounded down) as the diver's start.
+    pub fn fill_use_as_start(&mut self) {
+        let d = self.fill.diver(self.team.len());
+        let start = self.fill.usable_start(self.team.input());
+        let r = self.team.set_start(d, start);
+        self.team_result(r);
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn the_chart_pair_is_always_two_divers() {
+        let mut c = ChartPair::default();
+        c.cycle(3, true, 1);
+        assert_eq!(c.pair(3), Some((0, 2)));
+        c.cycle(3, false, 1);
+        c.cycle(3, false, 1);
+        assert_eq!(c.pair(3), Some((2, 0)), "the teammate moves on");
+        c.cycle(2, true, -1);
+        assert_eq!(c.pair(2), Some((1, 0)));
+    }
+
+    #[test]
+    fn the_fill_check_cycles_round_the_team_and_keeps_its_range() {
+        let input = crate::formats::team_file::TeamFile::parse(super::super::DEMO_TEAM)
+            .unwrap()
+            .to_input()
+            .unwrap();
+        let mut f = FillCheck::for_team(&input);
+        f.cycle(3, -1);
+        assert_eq!(f.diver, 2);
+        f.keep_within(2);
+        assert_eq!(f.diver, 1);
+        f.temperature = Temperature::from_celsius(60.0);
+        f.nudge_temperature(UnitSystem::Metric, 1);
+        assert_eq!(f.temperature.celsius(), 60.0);
+        let start = f.usable_start(&input);
+        assert!(
+            start.bar() < f.pressure.bar(),
+            "a warm fill reads lower in the water"
+        );
+        assert_eq!(start.bar().fract(), 0.0);
     }
 }

@@ -1,0 +1,285 @@
+//! Every keypad field, in one place: one match arm per field says what the keypad
+//! opens with, its title and unit, whether the value drives the plan as it is typed,
+//! its step buttons, its check and what it changes. A new field is a new `EntryTarget`
+//! and one arm in `field`.
+
+use crate::app::keypad::KeypadBuffer;
+use crate::app::view_models as vm;
+use crate::plan::error::{InputError, check_range, fmt_num};
+use crate::plan::team::validate_start;
+use crate::plan::{Pressure, Temperature, UnitSystem, Volume};
+
+use super::super::Session;
+use super::{Field, Typed, apply, check, no_check};
+
+/// What the open keypad is entering.
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+pub enum EntryTarget {
+    Start(usize),
+    StageStart(usize),
+    Sac(usize),
+    Depth,
+    WaterTemp,
+    DiverName(usize),
+    LockerName,
+    LockerNote,
+    LockerFirst,
+    LockerSecond,
+    FillPressure,
+    FillTemp,
+}
+
+/// The field behind `target`; None when its diver or draft is gone.
+pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
+    let u = s.units();
+    let input = s.team.input();
+    let draft = s.locker.draft();
+    Some(match target {
+        EntryTarget::Start(i) => {
+            let d = input.divers.get(i)?;
+            Field {
+                buffer: KeypadBuffer::digits(&vm::start_text(u, d.start), false),
+                title: format!(
+                    "Start pressure for {} ({}), read in the water",
+                    d.name,
+                    s.team.labels()[i]
+                ),
+                unit: u.pressure_label().to_string(),
+                live: true,
+                step: Some(input.gauge_step),
+                check: check(move |s, t| {
+                    let v = t.number("start", "enter the pressure read in the water")?;
+                    let working = s.team.input().divers[i].cylinders.working_pressure();
+                    validate_start(u, "start", u.pressure(v), working)
+                }),
+                apply: apply(move |s, t| s.team.set_start(i, pressure(u, t)?)),
+                on_done: None,
+            }
+        }
+        EntryTarget::StageStart(i) => {
+            let d = input.divers.get(i)?;
+            let st = d.stage.as_ref()?;
+            Field {
+                buffer: KeypadBuffer::digits(&vm::start_text(u, st.start), false),
+                title: format!(
+                    "Stage pressure for {} ({}), read in the water",
+                    d.name,
+                    s.team.stage_labels()[i]
+                ),
+                unit: u.pressure_label().to_string(),
+                live: true,
+                step: None,
+                check: check(move |s, t| {
+                    let v =
+                        t.number("stage start", "enter the stage pressure read in the water")?;
+                    let Some(st) = &s.team.input().divers[i].stage else {
+                        return Err(InputError::new("stage", "this diver carries no stage"));
+                    };
+                    let working = st.cylinders.working_pressure();
+                    validate_start(u, "stage start", u.pressure(v), working)
+                }),
+                apply: apply(move |s, t| s.team.set_stage_start(i, pressure(u, t)?)),
+                on_done: None,
+            }
+        }
+        EntryTarget::Sac(i) => {
+            let d = input.divers.get(i)?;
+            let litres = d.sac_l_per_min.map(Volume::from_litres);
+            Field {
+                buffer: KeypadBuffer::digits(
+                    &litres
+                        .map(|l| fmt_num(u.volume_value(l)))
+                        .unwrap_or_default(),
+                    true,
+                ),
+                title: format!(
+                    "Surface breathing rate (SAC) for {}; leave empty for none",
+                    d.name
+                ),
+                unit: format!("{}/min", u.volume_label()),
+                live: true,
+                step: None,
+                check: no_check(),
+                apply: apply(move |s, t| s.team.set_sac(i, t.value.map(|v| u.volume(v).litres()))),
+                on_done: None,
+            }
+        }
+        EntryTarget::Depth => Field {
+            buffer: KeypadBuffer::digits(
+                &input
+                    .depth
+                    .map(|d| vm::depth_value(u, d))
+                    .unwrap_or_default(),
+                false,
+            ),
+            title: "Planned depth for time to turn; leave empty for none".to_string(),
+            unit: u.depth_label().to_string(),
+            live: true,
+            step: None,
+            check: no_check(),
+            apply: apply(move |s, t| s.team.set_depth(t.value.map(|v| u.depth(v)))),
+            on_done: None,
+        },
+        EntryTarget::WaterTemp => Field {
+            buffer: KeypadBuffer::digits(&vm::degrees(u, input.water_temp), false),
+            title: "Water temperature (the gas cools to it)".to_string(),
+            unit: u.temperature_label().to_string(),
+            live: true,
+            step: None,
+            check: check(|_, t| {
+                t.number("water temperature", "enter a temperature")
+                    .map(|_| ())
+            }),
+            apply: apply(move |s, t| s.team.set_water_temp(temperature(u, t)?)),
+            // Also the default for new teams.
+            on_done: Some(apply(move |s, t| {
+                s.remember_water_temp(temperature(u, t)?);
+                Ok(())
+            })),
+        },
+        EntryTarget::DiverName(i) => Field {
+            buffer: KeypadBuffer::letters(&input.divers.get(i)?.name, 24),
+            title: format!("Name for diver {}", i + 1),
+            unit: String::new(),
+            live: true,
+            step: None,
+            check: check(move |s, t| {
+                let taken = s
+                    .team
+                    .input()
+                    .divers
+                    .iter()
+                    .enumerate()
+                    .any(|(j, d)| j != i && d.name == t.text);
+                if t.text.is_empty() {
+                    Err(InputError::new(
+                        "name",
+                        "a name of 1 to 24 characters is needed",
+                    ))
+                } else if taken {
+                    Err(InputError::new(
+                        "name",
+                        "another diver already has this name",
+                    ))
+                } else {
+                    Ok(())
+                }
+            }),
+            apply: apply(move |s, t| s.team.set_name(i, t.text)),
+            on_done: None,
+        },
+        EntryTarget::LockerName => Field {
+            buffer: KeypadBuffer::letters(&draft?.name, 40),
+            title: "Name of the cylinder set".to_string(),
+            unit: String::new(),
+            live: false,
+            step: None,
+            check: check(|_, t| {
+                if t.text.is_empty() {
+                    Err(InputError::new("name", "a name is needed"))
+                } else {
+                    Ok(())
+                }
+            }),
+            apply: apply(|s, t| {
+                s.locker.edit_draft(|d| d.name = t.text.to_string());
+                Ok(())
+            }),
+            on_done: None,
+        },
+        EntryTarget::LockerNote => Field {
+            buffer: KeypadBuffer::letters(&draft?.note, 60),
+            title: "Note (serial, test date, valves…)".to_string(),
+            unit: String::new(),
+            live: false,
+            step: None,
+            check: no_check(),
+            apply: apply(|s, t| {
+                s.locker.edit_draft(|d| d.note = t.text.to_string());
+                Ok(())
+            }),
+            on_done: None,
+        },
+        EntryTarget::LockerFirst | EntryTarget::LockerSecond => {
+            let first = target == EntryTarget::LockerFirst;
+            let which = usize::from(!first);
+            let d = draft?;
+            let (caption, unit, _, _) = d.field_specs()[which];
+            let value = if first { d.first } else { d.second };
+            Field {
+                buffer: KeypadBuffer::digits(
+                    &value.map(fmt_num).unwrap_or_default(),
+                    unit == "L" || unit == "cu ft",
+                ),
+                title: format!("{} ({unit})", vm::capitalised(caption)),
+                unit: unit.to_string(),
+                live: false,
+                step: None,
+                check: check(move |s, t| match s.locker.draft() {
+                    None => Ok(()),
+                    Some(d) => {
+                        let (caption, unit, lo, hi) = d.field_specs()[which];
+                        let name = caption.to_lowercase();
+                        check_range(&name, t.number(&name, "enter a value")?, lo, hi, unit)
+                    }
+                }),
+                apply: apply(move |s, t| {
+                    s.locker.edit_draft(|d| {
+                        if first {
+                            d.first = t.value;
+                        } else {
+                            d.second = t.value;
+                        }
+                    });
+                    Ok(())
+                }),
+                on_done: None,
+            }
+        }
+        EntryTarget::FillPressure => Field {
+            buffer: KeypadBuffer::digits(&vm::start_text(u, s.fill.pressure), false),
+            title: "Pressure at the fill station".to_string(),
+            unit: u.pressure_label().to_string(),
+            live: false,
+            step: None,
+            check: check(move |_, t| {
+                let v = t.number("fill pressure", "enter a pressure")?;
+                let max = u.pressure_value(Pressure::from_bar(400.0)).floor();
+                check_range("fill pressure", v, 1.0, max, u.pressure_label())
+            }),
+            apply: apply(move |s, t| {
+                s.fill.pressure = pressure(u, t)?;
+                Ok(())
+            }),
+            on_done: None,
+        },
+        EntryTarget::FillTemp => Field {
+            buffer: KeypadBuffer::digits(&vm::degrees(u, s.fill.temperature), false),
+            title: "Gas temperature at the fill (a warm cylinder)".to_string(),
+            unit: u.temperature_label().to_string(),
+            live: false,
+            step: None,
+            check: check(move |_, t| {
+                let v = t.number("fill temperature", "enter a temperature")?;
+                let lo = u.temperature_value(Temperature::from_celsius(0.0)).ceil();
+                let hi = u.temperature_value(Temperature::from_celsius(60.0)).floor();
+                check_range("fill temperature", v, lo, hi, u.temperature_label())
+            }),
+            apply: apply(move |s, t| {
+                s.fill.temperature = temperature(u, t)?;
+                Ok(())
+            }),
+            on_done: None,
+        },
+    })
+}
+
+/// The typed pressure, in the team's unit.
+fn pressure(u: UnitSystem, t: Typed) -> Result<Pressure, InputError> {
+    Ok(u.pressure(t.number("pressure", "enter a pressure")?))
+}
+
+/// The typed temperature, in the team's unit.
+fn temperature(u: UnitSystem, t: Typed) -> Result<Temperature, InputError> {
+    Ok(u.temperature(t.number("temperature", "enter a temperature")?))
+}

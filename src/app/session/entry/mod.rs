@@ -1,0 +1,196 @@
+//! Our own keypads, generic over the field: open, key, Done and Cancel. Every key
+//! press is checked; a usable value of a live field is applied at once (the plan
+//! recomputes), an unusable one shows its reason while the plan shows the value the
+//! entry started from. Cancel puts that value back. What each field is lives in
+//! `fields.rs`.
+
+use crate::app::keypad::{KeypadBuffer, parse_value};
+use crate::plan::error::{InputError, fmt_num};
+use crate::plan::rounding::next_step;
+
+use super::Session;
+
+mod fields;
+
+pub use fields::EntryTarget;
+
+/// What was typed: the text without surrounding spaces, and the number if it is one.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct Typed<'a> {
+    pub text: &'a str,
+    pub value: Option<f64>,
+}
+
+impl<'a> Typed<'a> {
+    pub fn new(text: &'a str) -> Self {
+        Typed {
+            text: text.trim(),
+            value: parse_value(text),
+        }
+    }
+
+    /// The number, or the error to show when there is none.
+    pub fn number(&self, field: &str, message: &str) -> Result<f64, InputError> {
+        self.value.ok_or_else(|| InputError::new(field, message))
+    }
+}
+
+/// Why a typed value cannot be used (it changes nothing).
+pub type Check = Box<dyn Fn(&Session, Typed<'_>) -> Result<(), InputError>>;
+/// Use a value that passed its check; the team may still refuse it.
+pub type Apply = Box<dyn Fn(&mut Session, Typed<'_>) -> Result<(), InputError>>;
+
+/// One keypad field.
+pub struct Field {
+    /// The keypad (digits or letters) with the value it opens with.
+    pub buffer: KeypadBuffer,
+    pub title: String,
+    pub unit: String,
+    /// The value drives the plan as it is typed: applied on every usable key, and the
+    /// team is saved on Done. Other fields are applied once, on Done.
+    pub live: bool,
+    /// The step of the ± buttons, if the field has them.
+    pub step: Option<f64>,
+    pub check: Check,
+    pub apply: Apply,
+    /// What Done does besides, once the value is in place.
+    pub on_done: Option<Apply>,
+}
+
+fn check(f: impl Fn(&Session, Typed<'_>) -> Result<(), InputError> + 'static) -> Check {
+    Box::new(f)
+}
+
+fn apply(f: impl Fn(&mut Session, Typed<'_>) -> Result<(), InputError> + 'static) -> Apply {
+    Box::new(f)
+}
+
+/// A field whose every value can be used.
+fn no_check() -> Check {
+    check(|_, _| Ok(()))
+}
+
+/// The open keypad: its field, the text it started from and why the typed text
+/// cannot be used (empty when it can).
+pub struct Entry {
+    target: EntryTarget,
+    field: Field,
+    original: String,
+    reason: String,
+}
+
+impl Entry {
+    pub fn target(&self) -> EntryTarget {
+        self.target
+    }
+    pub fn buffer(&self) -> &KeypadBuffer {
+        &self.field.buffer
+    }
+    pub fn title(&self) -> &str {
+        &self.field.title
+    }
+    pub fn unit(&self) -> &str {
+        &self.field.unit
+    }
+    /// Why the typed text cannot be used; empty when it can.
+    pub fn reason(&self) -> &str {
+        &self.reason
+    }
+    /// The step of the ± buttons, if the field has them.
+    pub fn step(&self) -> Option<f64> {
+        self.field.step
+    }
+}
+
+impl Session {
+    /// Open the keypad for `target`; nothing happens when its diver or draft is gone.
+    pub fn open_entry(&mut self, target: EntryTarget) {
+        let Some(field) = fields::field(self, target) else {
+            return;
+        };
+        let original = field.buffer.text().to_string();
+        let mut entry = Entry {
+            target,
+            field,
+            original,
+            reason: String::new(),
+        };
+        entry.reason = reason((entry.field.check)(self, Typed::new(&entry.original)));
+        self.entry = Some(entry);
+    }
+
+    /// One key on the open keypad: a digit or letter, ".", "del", "clear", " ", or
+    /// "+step" / "-step" on a field with step buttons.
+    pub fn key(&mut self, key: &str) {
+        let Some(entry) = self.entry.as_mut() else {
+            return;
+        };
+        let buffer = &mut entry.field.buffer;
+        match (key, entry.field.step) {
+            ("+step" | "-step", Some(step)) => {
+                let dir = if key == "+step" { 1 } else { -1 };
+                let v = buffer.value().unwrap_or(0.0);
+                buffer.set_text(fmt_num(next_step(v, step, dir).max(0.0)));
+            }
+            ("+step" | "-step", None) => {}
+            _ => buffer.press(key),
+        }
+        self.use_typed(false);
+    }
+
+    /// Done: use the value (only possible when it is usable) and close.
+    pub fn entry_done(&mut self) {
+        if !self.use_typed(true) {
+            return;
+        }
+        let Some(entry) = self.entry.take() else {
+            return;
+        };
+        if let Some(on_done) = &entry.field.on_done {
+            let _ = on_done(self, Typed::new(entry.field.buffer.text()));
+        }
+        if entry.field.live {
+            self.save_team();
+        }
+    }
+
+    /// Cancel: put back the value the entry started from, and close.
+    pub fn cancel_entry(&mut self) {
+        if let Some(entry) = self.entry.take()
+            && entry.field.live
+        {
+            let _ = (entry.field.apply)(self, Typed::new(&entry.original));
+        }
+    }
+
+    /// Check the typed text and apply it where it drives the plan (every field on
+    /// Done). While the text of a live field is unusable, the plan shows the value the
+    /// entry started from. Returns whether the text is usable.
+    fn use_typed(&mut self, done: bool) -> bool {
+        let Some(mut entry) = self.entry.take() else {
+            return false;
+        };
+        let field = &entry.field;
+        let text = field.buffer.text();
+        let typed = Typed::new(text);
+        let mut result = (field.check)(self, typed);
+        if result.is_ok() && (field.live || done) {
+            result = (field.apply)(self, typed);
+        }
+        if result.is_err() && field.live && text != entry.original {
+            let _ = (field.apply)(self, Typed::new(&entry.original));
+        }
+        let usable = result.is_ok();
+        entry.reason = reason(result);
+        self.entry = Some(entry);
+        usable
+    }
+}
+
+/// The message of a failed check, or empty.
+fn reason(r: Result<(), InputError>) -> String {
+    r.err().map(|e| e.message).unwrap_or_default()
+}
+
+#[cfg(test)]
+mod tests;

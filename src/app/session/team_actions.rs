@@ -1,0 +1,199 @@
+//! Session actions on the team being planned (Team page) and on the settings that
+//! give a new team its defaults (Settings page).
+
+use crate::formats::team_file::TeamFile;
+use crate::plan::catalogue::presets;
+use crate::plan::{Rule, Temperature, UnitSystem};
+use crate::storage::settings::Settings;
+use crate::storage::team_state::{TEAM_SCHEMA, TeamState};
+
+use super::super::team_controller::{TeamController, step_options};
+use super::{ChartPair, Session};
+
+/// The demo team of an invented scenario, for the first launch.
+pub const DEMO_TEAM: &str = include_str!("../../../examples/hollowmere-team.json");
+const DEMO_STAGE_LABELS: [&str; 3] = ["Aluminium 40", "", "Single 7 L 232 bar"];
+const DEMO_LABELS: [&str; 3] = [
+    "Twin 12 L 232 bar",
+    "Sidemount 2× aluminium 80",
+    "Twin 8.5 L 300 bar",
+];
+
+/// The demo team with the rule, units and gauge step of the settings.
+pub(super) fn demo_team(settings: &Settings) -> TeamController {
+    let state = TeamState {
+        schema: TEAM_SCHEMA,
+        team: TeamFile::parse(DEMO_TEAM).expect("the bundled demo team is valid"),
+        cylinder_labels: DEMO_LABELS.iter().map(|s| s.to_string()).collect(),
+        stage_labels: DEMO_STAGE_LABELS.iter().map(|s| s.to_string()).collect(),
+    };
+    let mut t = TeamController::from_state(&state).expect("the bundled demo team plans");
+    let _ = t.set_rule(settings.rule);
+    let _ = t.set_units(settings.units);
+    let _ = t.set_gauge_step(settings.gauge_step());
+    t
+}
+
+impl Session {
+    // ---- team page ---------------------------------------------------------------
+
+    pub fn set_rule(&mut self, idx: usize) {
+        if let Some(rule) = Rule::ALL.get(idx).copied() {
+            let r = self.team.set_rule(rule);
+            self.team_result(r);
+        }
+    }
+
+    pub fn set_step(&mut self, idx: usize) {
+        if let Some(step) = step_options(self.units()).get(idx).copied() {
+            let r = self.team.set_gauge_step(step);
+            self.team_result(r);
+        }
+    }
+
+    pub fn toggle_water(&mut self) {
+        let r = self.team.toggle_water();
+        self.team_result(r);
+    }
+
+    /// The − and + beside a start pressure: one gauge step down or up.
+    pub fn nudge_start(&mut self, i: usize, dir: i32) {
+        if i < self.team.len() {
+            let r = self.team.nudge_start(i, dir);
+            self.team_result(r);
+        }
+    }
+
+    /// A new diver carries my set, or else the same as the last diver.
+    pub fn add_diver(&mut self) {
+        let (set, label) = self.locker.mine().unwrap_or_else(|| {
+            let last = self.team.len() - 1;
+            (
+                self.team.input().divers[last].cylinders,
+                self.team.labels()[last].clone(),
+            )
+        });
+        let r = self.team.add_diver(set, &label);
+        self.team_result(r);
+    }
+
+    pub fn remove_diver(&mut self, i: usize) {
+        if i < self.team.len() {
+            let r = self.team.remove_diver(i);
+            self.team_result(r);
+            self.fill.keep_within(self.team.len());
+            self.chart = ChartPair::default();
+        }
+    }
+
+    /// A fresh two-diver team from the settings' defaults; both start with my set.
+    pub fn new_team(&mut self) {
+        let (set, label) = self
+            .locker
+            .mine()
+            .unwrap_or_else(|| (presets()[0].set, presets()[0].name.to_string()));
+        let mut t = demo_team(&self.settings);
+        t.start_afresh(
+            set,
+            &label,
+            Temperature::from_celsius(self.settings.water_temp_c),
+        );
+        self.team = t;
+        self.save_team();
+    }
+
+    // ---- settings ----------------------------------------------------------------
+
+    pub fn set_units(&mut self, units: UnitSystem) {
+        self.settings.units = units;
+        self.save_settings();
+        let r = self.team.set_units(units);
+        self.team_result(r);
+    }
+
+    pub fn set_default_rule(&mut self, idx: usize) {
+        if let Some(rule) = Rule::ALL.get(idx).copied() {
+            self.settings.rule = rule;
+            self.save_settings();
+        }
+    }
+
+    pub fn set_default_step(&mut self, idx: usize) {
+        let opts = step_options(self.settings.units);
+        if let Some(step) = opts.get(idx).copied() {
+            match self.settings.units {
+                UnitSystem::Metric => self.settings.gauge_step_bar = step,
+                UnitSystem::Imperial => self.settings.gauge_step_psi = step,
+            }
+            self.save_settings();
+        }
+    }
+
+    /// One degree colder or warmer, for the team and as the default for new teams.
+    pub fn nudge_water_temp(&mut self, dir: i32) {
+        let u = self.units();
+        let current = u.temperature_value(Temperature::from_celsius(self.settings.water_temp_c));
+        let t = u.temperature(current.round() + f64::from(dir.signum()));
+        match self.team.set_water_temp(t) {
+            Ok(()) => {
+                self.remember_water_temp(t);
+                self.save_team();
+            }
+            Err(e) => self.status.push(e.to_string()),
+        }
+    }
+
+    /// Keep a water temperature as the default for new teams.
+    pub(super) fn remember_water_temp(&mut self, t: Temperature) {
+        self.settings.water_temp_c = t.celsius();
+        self.save_settings();
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::storage::Store;
+
+    fn session() -> (tempfile::TempDir, Session) {
+        let dir = tempfile::tempdir().unwrap();
+        let s = Session::open(Store::new(dir.path()));
+        (dir, s)
+    }
+
+    #[test]
+    fn a_refused_edit_is_reported_and_the_plan_stays() {
+        let (_dir, mut s) = session();
+        // Step Ines's start up until it passes 1.5 × the working pressure.
+        let mut last = s.team.plan().clone();
+        for _ in 0..40 {
+            s.nudge_start(0, 1);
+            if s.status.iter().next().is_some() {
+                break;
+            }
+            last = s.team.plan().clone();
+        }
+        assert!(s.status.text().contains("1.5 ×"), "{:?}", s.status);
+        assert_eq!(s.team.plan(), &last, "the refused step left the plan alone");
+    }
+
+    #[test]
+    fn a_new_team_has_two_full_divers_on_air() {
+        let (_dir, mut s) = session();
+        s.new_team();
+        let input = s.team.input();
+        assert_eq!(input.divers.len(), 2);
+        assert_eq!(input.divers[0].name, "Me");
+        assert!(input.divers.iter().all(|d| d.stage.is_none()));
+        assert!(input.divers.iter().all(|d| d.start.bar() % 10.0 == 0.0));
+    }
+
+    #[test]
+    fn the_water_temperature_nudge_is_remembered_for_new_teams() {
+        let (_dir, mut s) = session();
+        let before = s.settings.water_temp_c;
+        s.nudge_water_temp(-1);
+        assert_eq!(s.settings.water_temp_c, before - 1.0);
+        assert!((s.team.input().water_temp.celsius() - (before - 1.0)).abs() < 1e-9);
+    }
+}

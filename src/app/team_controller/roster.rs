@@ -1,0 +1,153 @@
+//! Who is in the team and what they carry: adding and removing divers, cylinder sets
+//! and stages.
+
+use super::TeamController;
+use crate::plan::error::InputError;
+use crate::plan::rounding::round_down_to_step;
+use crate::plan::team::{MAX_DIVERS, MIN_DIVERS};
+use crate::plan::{CylinderSet, DiverInput, Mix, Temperature};
+
+impl TeamController {
+    /// Give a diver a cylinder set. If the start pressure does not fit the new set, the
+    /// start becomes the set's working pressure; the returned flag says so.
+    pub fn set_cylinders(
+        &mut self,
+        i: usize,
+        set: CylinderSet,
+        label: &str,
+    ) -> Result<bool, InputError> {
+        let first = self.try_update(|t| t.divers[i].cylinders = set);
+        let reset = match first {
+            Ok(()) => false,
+            Err(_) => {
+                let wp = set.working_pressure();
+                self.try_update(|t| {
+                    t.divers[i].cylinders = set;
+                    t.divers[i].start = wp;
+                })?;
+                true
+            }
+        };
+        self.labels[i] = label.to_string();
+        Ok(reset)
+    }
+
+    /// Give a diver a stage set, or take it away. A new stage starts full (its working
+    /// pressure); a changed set keeps the start if it still fits.
+    pub fn set_stage_cylinders(
+        &mut self,
+        i: usize,
+        set: Option<CylinderSet>,
+        label: &str,
+    ) -> Result<(), InputError> {
+        match set {
+            None => {
+                self.try_update(|t| t.divers[i].stage = None)?;
+                self.stage_labels[i].clear();
+            }
+            Some(set) => {
+                let u = self.input.units;
+                let full = u.pressure(round_down_to_step(
+                    u.pressure_value(set.working_pressure()),
+                    self.input.gauge_step,
+                ));
+                let old = self.input.divers[i].stage.clone();
+                let kept = old.as_ref().map(|st| st.start).filter(|p| {
+                    p.bar() <= set.working_pressure().bar() * crate::plan::team::MAX_FILL_RATIO
+                });
+                let mix = old.map(|st| st.mix).unwrap_or(Mix::nitrox(0.5));
+                self.try_update(|t| {
+                    t.divers[i].stage = Some(crate::plan::StageInput {
+                        cylinders: set,
+                        mix,
+                        start: kept.unwrap_or(full),
+                    })
+                })?;
+                self.stage_labels[i] = label.to_string();
+            }
+        }
+        Ok(())
+    }
+
+    pub fn can_add(&self) -> bool {
+        self.len() < MAX_DIVERS
+    }
+    pub fn can_remove(&self) -> bool {
+        self.len() > MIN_DIVERS
+    }
+
+    /// Add a diver with the given set, full to working pressure (on the gauge step).
+    pub fn add_diver(&mut self, set: CylinderSet, label: &str) -> Result<(), InputError> {
+        if !self.can_add() {
+            return Err(InputError::new(
+                "divers",
+                format!("a team has at most {MAX_DIVERS} divers"),
+            ));
+        }
+        let n = self.len() + 1;
+        let mut name = format!("Diver {n}");
+        let mut k = n;
+        while self.input.divers.iter().any(|d| d.name == name) {
+            k += 1;
+            name = format!("Diver {k}");
+        }
+        let u = self.input.units;
+        let start = u.pressure(round_down_to_step(
+            u.pressure_value(set.working_pressure()),
+            self.input.gauge_step,
+        ));
+        let mix = self.input.divers.last().map(|d| d.mix).unwrap_or_default();
+        self.try_update(|t| {
+            t.divers.push(DiverInput {
+                name,
+                cylinders: set,
+                mix,
+                start,
+                sac_l_per_min: None,
+                stage: None,
+            })
+        })?;
+        self.labels.push(label.to_string());
+        self.stage_labels.push(String::new());
+        Ok(())
+    }
+
+    pub fn remove_diver(&mut self, i: usize) -> Result<(), InputError> {
+        if !self.can_remove() {
+            return Err(InputError::new(
+                "divers",
+                format!("a team has at least {MIN_DIVERS} divers"),
+            ));
+        }
+        self.try_update(|t| {
+            t.divers.remove(i);
+        })?;
+        self.labels.remove(i);
+        self.stage_labels.remove(i);
+        Ok(())
+    }
+
+    /// Turn this team into a fresh two-diver team: "Me" and "Buddy", both with `set`
+    /// full to its working pressure (on the gauge step), air, no breathing rate, no
+    /// stage, no depth, at `water_temp`. Rule, units and gauge step are kept.
+    pub fn start_afresh(&mut self, set: CylinderSet, label: &str, water_temp: Temperature) {
+        while self.len() > 2 {
+            let _ = self.remove_diver(self.len() - 1);
+        }
+        for (i, name) in ["Me", "Buddy"].into_iter().enumerate() {
+            let _ = self.set_name(i, name);
+            let _ = self.set_cylinders(i, set, label);
+            let _ = self.set_mix(i, Mix::AIR);
+            let _ = self.set_sac(i, None);
+            let _ = self.set_stage_cylinders(i, None, "");
+            let u = self.input.units;
+            let start = round_down_to_step(
+                u.pressure_value(set.working_pressure()),
+                self.input.gauge_step,
+            );
+            let _ = self.set_start(i, u.pressure(start));
+        }
+        let _ = self.set_depth(None);
+        let _ = self.set_water_temp(water_temp);
+    }
+}

@@ -1,0 +1,53 @@
+//! Unit tests of the team controller: edits are refused whole, nudges land on the step.
+
+use super::*;
+
+fn demo() -> TeamController {
+    let f = TeamFile::parse(include_str!("../../../examples/hollowmere-team.json")).unwrap();
+    TeamController::new(f.to_input().unwrap(), vec![]).unwrap()
+}
+
+#[test]
+fn invalid_edit_keeps_the_plan() {
+    let mut t = demo();
+    let before = t.plan().clone();
+    let e = t.set_start(0, Pressure::from_bar(400.0)).unwrap_err();
+    assert_eq!(e.field, "divers[0].start");
+    assert_eq!(t.plan(), &before);
+}
+
+#[test]
+fn nudges_land_on_the_step() {
+    let mut t = demo();
+    t.nudge_start(0, 1).unwrap();
+    assert!((t.input().divers[0].start.bar() - 220.0).abs() < 1e-9);
+    t.nudge_start(0, -1).unwrap();
+    t.nudge_start(0, -1).unwrap();
+    assert!((t.input().divers[0].start.bar() - 200.0).abs() < 1e-9);
+}
+
+#[test]
+fn units_switch_keeps_physical_pressures() {
+    let mut t = demo();
+    let bar = t.input().divers[1].start.bar();
+    t.set_units(UnitSystem::Imperial).unwrap();
+    assert_eq!(t.input().gauge_step, 100.0);
+    assert!((t.input().divers[1].start.bar() - bar).abs() < 1e-9);
+    assert_eq!(t.plan().units, UnitSystem::Imperial);
+}
+
+#[test]
+fn add_and_remove_respect_team_size() {
+    let mut t = demo();
+    let set = t.input().divers[0].cylinders;
+    for _ in 0..3 {
+        t.add_diver(set, "x").unwrap();
+    }
+    assert!(t.add_diver(set, "x").is_err());
+    assert_eq!(t.len(), 6);
+    assert_eq!(t.labels().len(), 6);
+    for _ in 0..4 {
+        t.remove_diver(0).unwrap();
+    }
+    assert!(t.remove_diver(0).is_err());
+}

@@ -1,0 +1,218 @@
+//! Formatting the session for the views: every number a person reads is rounded and
+//! written here, toward safety: turn pressures up, start pressures and gas down,
+//! times down. Adapters copy these texts into the Slint globals and do no arithmetic.
+//!
+//! `mod.rs` has the number helpers; the pages' view models are in `team.rs`,
+//! `turns.rs`, `tools.rs` (fill check, chart), `locker.rs` (locker, pickers),
+//! `settings.rs` and `keypad.rs`.
+
+use crate::plan::error::fmt_num;
+use crate::plan::{Depth, Pressure, Rule, Temperature, UnitSystem, Volume};
+
+use super::team_controller::step_options;
+
+mod keypad;
+mod locker;
+mod settings;
+mod team;
+mod tools;
+mod turns;
+
+pub use keypad::{KeypadVm, keypad};
+pub use locker::{
+    LockerEditVm, LockerRowVm, locker_edit, locker_pick_rows, locker_rows, picker_title,
+    preset_rows, undo_text,
+};
+pub use settings::{SettingsVm, cautions, settings};
+pub use team::{
+    DiverCardVm, TeamPageVm, depth_label, diver_cards, team_page, team_summary, water_temp_text,
+    water_text,
+};
+pub use tools::{ChartRowVm, ChartVm, FillVm, chart, fill};
+pub use turns::{
+    TurnRowVm, first_text, margin_text, pressure_unit, rule_text, stage_text, turn_rows, warnings,
+};
+
+/// Float noise tolerated when a value is read as whole units.
+const NOISE: f64 = 1e-6;
+
+/// A value rounded down to a whole unit, counting float noise just below a whole
+/// number as that number (a gauge reading of 217.9999999 bar is 218).
+pub fn whole_down(value: f64) -> f64 {
+    (value + NOISE).floor()
+}
+
+/// A value rounded up to a whole unit, counting float noise just above a whole number
+/// as that number.
+pub fn whole_up(value: f64) -> f64 {
+    (value - NOISE).ceil()
+}
+
+/// A shown turn pressure: already on the gauge step; rounded up against float noise.
+pub fn turn_text(value: f64) -> String {
+    format!("{}", whole_up(value) as i64)
+}
+
+/// A start pressure as read: rounded down.
+pub fn start_text(u: UnitSystem, p: Pressure) -> String {
+    format!("{}", whole_down(u.pressure_value(p)) as i64)
+}
+
+/// A pressure rounded down, with its unit: "232 bar".
+pub fn pressure_down_text(u: UnitSystem, p: Pressure) -> String {
+    format!("{} {}", start_text(u, p), u.pressure_label())
+}
+
+/// A temperature to the nearest degree, without its unit.
+pub fn degrees(u: UnitSystem, t: Temperature) -> String {
+    fmt_num(u.temperature_value(t).round())
+}
+
+/// A temperature to the nearest degree, with its unit: "12 °C".
+pub fn temperature_text(u: UnitSystem, t: Temperature) -> String {
+    format!("{} {}", degrees(u, t), u.temperature_label())
+}
+
+/// A volume rounded down to a whole litre or cubic foot, with its unit.
+pub fn volume_down_text(u: UnitSystem, v: Volume) -> String {
+    format!(
+        "{} {}",
+        fmt_num(u.volume_value(v).floor()),
+        u.volume_label()
+    )
+}
+
+/// A breathing rate in the team's unit, to two decimals at most.
+pub fn rate_text(u: UnitSystem, litres_per_min: f64) -> String {
+    fmt_num((u.volume_value(Volume::from_litres(litres_per_min)) * 100.0).round() / 100.0)
+}
+
+/// A depth as typed: metres as they are, feet as they are (the keypad shows both exactly).
+pub fn depth_value(u: UnitSystem, d: Depth) -> String {
+    fmt_num(match u {
+        UnitSystem::Metric => d.metres(),
+        UnitSystem::Imperial => d.feet(),
+    })
+}
+
+/// A depth as shown on the Team page: feet to the nearest foot; no depth is "Depth —".
+pub fn depth_text(d: Option<Depth>, u: UnitSystem) -> String {
+    match d {
+        None => "Depth —".to_string(),
+        Some(d) => format!(
+            "{} {}",
+            fmt_num(match u {
+                UnitSystem::Metric => d.metres(),
+                UnitSystem::Imperial => d.feet().round(),
+            }),
+            u.depth_label()
+        ),
+    }
+}
+
+/// The gauge steps offered, with their unit: "5 bar", "10 bar".
+pub fn step_labels(u: UnitSystem) -> Vec<String> {
+    step_options(u)
+        .iter()
+        .map(|s| format!("{} {}", fmt_num(*s), u.pressure_label()))
+        .collect()
+}
+
+/// The position of `step` among the offered steps, or −1.
+pub fn step_index(u: UnitSystem, step: f64) -> i32 {
+    step_options(u)
+        .iter()
+        .position(|s| (*s - step).abs() < 1e-9)
+        .map(|i| i as i32)
+        .unwrap_or(-1)
+}
+
+/// The rules on their buttons, in `Rule::ALL` order: "½", "⅓", …
+pub fn rule_symbols() -> Vec<String> {
+    Rule::ALL
+        .iter()
+        .map(|r| {
+            match r.denominator() {
+                2 => "½",
+                3 => "⅓",
+                4 => "¼",
+                5 => "⅕",
+                6 => "⅙",
+                _ => "?",
+            }
+            .to_string()
+        })
+        .collect()
+}
+
+/// The rules' names for screen readers, in `Rule::ALL` order: "halves", "thirds", …
+pub fn rule_names() -> Vec<String> {
+    Rule::ALL.iter().map(|r| r.name().to_string()).collect()
+}
+
+/// The position of `rule` in `Rule::ALL`.
+pub fn rule_index(rule: Rule) -> i32 {
+    Rule::ALL.iter().position(|r| *r == rule).unwrap_or(1) as i32
+}
+
+/// A warning under the rule choice for a rule not meant for overhead dives; empty
+/// for the others.
+pub fn rule_warning(rule: Rule) -> String {
+    if rule.fit_for_overhead() {
+        String::new()
+    } else {
+        format!(
+            "{} is an open-water rule, not for overhead dives.",
+            capitalised(rule.name())
+        )
+    }
+}
+
+/// The first letter upper case, the rest lower case.
+pub fn capitalised(s: &str) -> String {
+    let lower = s.to_lowercase();
+    let mut c = lower.chars();
+    match c.next() {
+        Some(f) => f.to_uppercase().collect::<String>() + c.as_str(),
+        None => String::new(),
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn display_rounding_is_conservative() {
+        assert_eq!(turn_text(150.0000001), "150");
+        assert_eq!(turn_text(150.2), "151");
+        assert_eq!(
+            start_text(UnitSystem::Metric, Pressure::from_bar(217.9)),
+            "217"
+        );
+        assert_eq!(
+            start_text(UnitSystem::Imperial, Pressure::from_psi(3000.0)),
+            "3000"
+        );
+    }
+
+    #[test]
+    fn whole_units_tolerate_float_noise() {
+        assert_eq!(whole_down(217.999_999_9), 218.0);
+        assert_eq!(whole_down(217.9), 217.0);
+        assert_eq!(whole_up(150.000_000_1), 150.0);
+        assert_eq!(whole_up(150.2), 151.0);
+    }
+
+    #[test]
+    fn rules_come_from_the_core() {
+        assert_eq!(rule_symbols().len(), Rule::ALL.len());
+        assert_eq!(rule_names()[1], "thirds");
+        assert_eq!(
+            rule_warning(Rule::Halves),
+            "Halves is an open-water rule, not for overhead dives."
+        );
+        assert_eq!(rule_warning(Rule::Thirds), "");
+        assert_eq!(rule_index(Rule::Quarters), 2);
+    }
+}

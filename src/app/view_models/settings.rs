@@ -1,0 +1,37 @@
+//! The Settings and Cautions pages.
+
+use super::super::cautions::CAUTIONS;
+use super::super::session::Session;
+use super::{rule_index, step_index, step_labels, water_temp_text};
+use crate::plan::UnitSystem;
+
+pub struct SettingsVm {
+    pub imperial: bool,
+    pub rule_index: i32,
+    pub step_options: Vec<String>,
+    pub step_index: i32,
+    pub water_temp: String,
+    pub about: String,
+}
+
+pub fn settings(s: &Session) -> SettingsVm {
+    let cfg = &s.settings;
+    SettingsVm {
+        imperial: cfg.units == UnitSystem::Imperial,
+        rule_index: rule_index(cfg.rule),
+        step_options: step_labels(cfg.units),
+        step_index: step_index(cfg.units, cfg.gauge_step()),
+        water_temp: water_temp_text(s),
+        about: format!(
+            "Turnsheet {} · free software under the GNU GPL, version 3 or later · built with Slint {} (used under its GPL-3.0 licence) · real-gas contents by GERG-2008 (the aga8 crate) · Roboto fonts under the Apache License 2.0 · data in {}",
+            env!("CARGO_PKG_VERSION"),
+            "1.18.1",
+            s.data_dir().display()
+        ),
+    }
+}
+
+/// The cautions, one paragraph each.
+pub fn cautions() -> Vec<String> {
+    CAUTIONS.iter().map(|c| c.to_string()).collect()
+}

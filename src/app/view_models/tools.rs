@@ -1,0 +1,135 @@
+//! The fill-to-water check and the wet-notes chart.
+
+use super::super::session::Session;
+use super::{pressure_down_text, temperature_text, whole_down};
+use crate::plan::error::fmt_num;
+
+pub struct FillVm {
+    pub diver: String,
+    pub mix: String,
+    pub fill_pressure: String,
+    pub fill_temp: String,
+    pub water_temp: String,
+    /// The predicted in-water pressure, rounded down (the start "Use as start" sets).
+    pub result: String,
+    pub unit: String,
+    pub detail: String,
+    pub use_text: String,
+}
+
+pub fn fill(s: &Session) -> FillVm {
+    let u = s.units();
+    let input = s.team.input();
+    let d = &input.divers[s.fill.diver(input.divers.len())];
+    let pu = u.pressure_label();
+    let tu = u.temperature_label();
+    let change = s.fill.prediction(input);
+    let real = whole_down(u.pressure_value(change.real));
+    let ideal = whole_down(u.pressure_value(change.ideal));
+    let fill = u.pressure_value(s.fill.pressure);
+    let dt = u.temperature_value(s.fill.temperature) - u.temperature_value(input.water_temp);
+    FillVm {
+        diver: d.name.clone(),
+        mix: d.mix.label(),
+        fill_pressure: pressure_down_text(u, s.fill.pressure),
+        fill_temp: temperature_text(u, s.fill.temperature),
+        water_temp: temperature_text(u, input.water_temp),
+        result: fmt_num(real),
+        unit: pu.to_string(),
+        detail: if dt.abs() < 0.5 {
+            "Filled at water temperature: no change expected.".to_string()
+        } else {
+            format!(
+                "Real gas: {} {pu} per {} of temperature change; the ideal gas law would say {} {pu}.",
+                fmt_num(((fill - real) / dt * 10.0).round() / 10.0),
+                tu,
+                fmt_num(ideal)
+            )
+        },
+        use_text: format!("Use {} {pu} as {}'s start", fmt_num(real), d.name),
+    }
+}
+
+pub struct ChartRowVm {
+    pub start: String,
+    pub cells: Vec<String>,
+    /// The row of the diver's planned start.
+    pub planned: bool,
+}
+
+pub struct ChartVm {
+    pub diver: String,
+    pub teammate: String,
+    pub unit: String,
+    pub columns: Vec<String>,
+    /// The column of the teammate's planned start, or −1.
+    pub planned_column: i32,
+    pub rows: Vec<ChartRowVm>,
+    pub note: String,
+}
+
+/// The chart of the selected pair (about a hundred plans: build it only when shown).
+pub fn chart(s: &Session) -> Option<ChartVm> {
+    let input = s.team.input();
+    let chart = s.chart.chart(input)?;
+    let u = input.units;
+    // Conservative reading: own start rounded UP to a row, the teammate's DOWN to a column
+    // (a higher own start or a lower teammate start never lowers the turn).
+    let mine = u.pressure_value(input.divers[chart.me].start);
+    let theirs = u.pressure_value(input.divers[chart.buddy].start);
+    let my_row = chart.my_starts.iter().rposition(|x| *x >= mine - 1e-9);
+    let their_col = chart.buddy_starts.iter().position(|x| *x <= theirs + 1e-9);
+    Some(ChartVm {
+        diver: input.divers[chart.me].name.clone(),
+        teammate: input.divers[chart.buddy].name.clone(),
+        unit: u.pressure_label().to_string(),
+        columns: chart.buddy_starts.iter().map(|v| fmt_num(*v)).collect(),
+        planned_column: their_col.map(|c| c as i32).unwrap_or(-1),
+        rows: chart
+            .my_starts
+            .iter()
+            .enumerate()
+            .map(|(r, v)| ChartRowVm {
+                start: fmt_num(*v),
+                cells: chart.turns[r]
+                    .iter()
+                    .map(|c| c.map(fmt_num).unwrap_or_else(|| "–".into()))
+                    .collect(),
+                planned: Some(r) == my_row,
+            })
+            .collect(),
+        note: if input.divers.len() > 2 {
+            "With more than one teammate, read your chart against each and keep the HIGHEST turn. Between rows, read the higher start; between columns, the lower teammate start."
+        } else {
+            "Between two rows, read the higher start; between two columns, the lower teammate start."
+        }
+        .to_string(),
+    })
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::storage::Store;
+
+    #[test]
+    fn the_fill_result_shown_is_the_start_used() {
+        let dir = tempfile::tempdir().unwrap();
+        let mut s = Session::open(Store::new(dir.path()));
+        let shown = fill(&s);
+        s.fill_use_as_start();
+        let start = s.team.input().divers[0].start;
+        assert_eq!(shown.result, super::super::start_text(s.units(), start));
+        assert_eq!(shown.unit, "bar");
+    }
+
+    #[test]
+    fn the_chart_marks_the_planned_starts() {
+        let dir = tempfile::tempdir().unwrap();
+        let s = Session::open(Store::new(dir.path()));
+        let c = chart(&s).unwrap();
+        assert_eq!(c.rows.iter().filter(|r| r.planned).count(), 1);
+        assert!(c.planned_column >= 0);
+        assert_eq!(c.rows[0].cells.len(), c.columns.len());
+    }
+}
