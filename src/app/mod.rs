@@ -6,6 +6,7 @@ pub mod cautions;
 pub mod keypad;
 pub mod locker_controller;
 pub mod nav;
+pub mod readings;
 pub mod session;
 pub mod team_controller;
 pub mod view_models;

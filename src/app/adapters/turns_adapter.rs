@@ -26,7 +26,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
     ));
     a.set_rule_text(vm::rule_text(s).into());
     a.set_margin_text(vm::margin_text(s).into());
-    a.set_warnings(strings(s.team.plan().warnings.clone()));
+    a.set_warnings(strings(s.team.plan().warning_texts()));
     a.set_first_text(vm::first_text(s).into());
     a.set_error("".into());
     let b = ui.global::<BuddyAdapter>();

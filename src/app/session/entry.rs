@@ -188,9 +188,10 @@ impl Session {
                     "enter the pressure read in the water",
                 )),
                 Some(v) => {
-                    let p = u.pressure(v);
+                    let g = self.team.input().gauge_of(i);
+                    let p = g.pressure(v);
                     let d = &self.team.input().divers[i];
-                    validate_start(u, "start", p, d.cylinders.working_pressure()).and_then(|_| {
+                    validate_start(g, "start", p, d.cylinders.working_pressure()).and_then(|_| {
                         if apply {
                             self.team.set_start(i, p)
                         } else {
@@ -206,8 +207,9 @@ impl Session {
                 )),
                 (_, None) => Err(InputError::new("stage", "this diver carries no stage")),
                 (Some(v), Some(st)) => {
-                    let p = u.pressure(v);
-                    validate_start(u, "stage start", p, st.cylinders.working_pressure()).and_then(
+                    let g = self.team.input().gauge_of(i);
+                    let p = g.pressure(v);
+                    validate_start(g, "stage start", p, st.cylinders.working_pressure()).and_then(
                         |_| {
                             if apply {
                                 self.team.set_stage_start(i, p)
