@@ -111,3 +111,45 @@ fn reading_between_grid_lines_toward_safety_never_gives_a_lower_turn() {
         assert!(c.turns[r][col].unwrap() >= exact);
     }
 }
+
+#[test]
+fn mixed_gauge_cells_are_the_core_plan_of_the_pair() {
+    // Bram reads psi on 50 psi, Ines bar on 5 bar (invented team): rows, columns and
+    // cells are each on their own diver's gauge, and every cell is plan_team of that pair.
+    use turnsheet::plan::{Gauge, PressureUnit};
+    let mut team = demo();
+    team.divers[0].gauge = Some(Gauge {
+        unit: PressureUnit::Bar,
+        step: 5.0,
+    });
+    team.divers[1].gauge = Some(Gauge {
+        unit: PressureUnit::Psi,
+        step: 50.0,
+    });
+    for (me, buddy) in [(0, 1), (1, 0)] {
+        let (gm, gb) = (team.gauge_of(me), team.gauge_of(buddy));
+        let mine = starts_around(gm.value(team.divers[me].start), gm.step, 3, 30);
+        let theirs = starts_around(gb.value(team.divers[buddy].start), gb.step, 3, 30);
+        let chart = pair_chart(&team, me, buddy, &mine, &theirs).unwrap();
+        assert_eq!((chart.my_gauge, chart.buddy_gauge), (gm, gb));
+        let mut some = 0;
+        for (r, m) in mine.iter().enumerate() {
+            for (c, b) in theirs.iter().enumerate() {
+                let mut pair = team.clone();
+                pair.divers = vec![team.divers[me].clone(), team.divers[buddy].clone()];
+                pair.divers[0].start = gm.pressure(*m);
+                pair.divers[1].start = gb.pressure(*b);
+                for d in &mut pair.divers {
+                    d.stage = None;
+                }
+                let expected = plan_team(&pair).ok().map(|p| p.divers[0].turn_shown_value);
+                assert_eq!(chart.turns[r][c], expected, "{me}: row {m} column {b}");
+                if let Some(t) = expected {
+                    assert!(t == *m || (t / gm.step - (t / gm.step).round()).abs() < 1e-9);
+                    some += 1;
+                }
+            }
+        }
+        assert!(some > 100, "{some} cells planned");
+    }
+}

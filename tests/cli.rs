@@ -192,7 +192,7 @@ fn unreadable_and_malformed_files_exit_2() {
 
 #[test]
 fn gas_command_reports_both_models_and_cooling() {
-    // Domain notes (CoolProp 8.0.0): air at 232 bar, 20 °C holds about 219 L per litre.
+    // CoolProp 8.0.0 (HEOS reference equation): air at 232 bar, 20 °C holds about 219 L per litre.
     let out = bin()
         .args(["gas", "--litres", "1", "--pressure", "232", "--json"])
         .output()
@@ -201,7 +201,8 @@ fn gas_command_reports_both_models_and_cooling() {
     let v: serde_json::Value = serde_json::from_slice(&out.stdout).unwrap();
     let real = v["content_l"].as_f64().unwrap();
     assert!((real - 218.0).abs() < 1.0, "{real}");
-    assert!((v["content_hand_l"].as_f64().unwrap() - 232.0 / 1.01325).abs() < 0.01);
+    // Pencil arithmetic (common practice): 1 L × 232 bar = 232 L.
+    assert_eq!(v["content_hand_l"].as_f64().unwrap(), 232.0);
     assert!(v["pressure_after"].is_null());
     // Same reference: 232 bar at 35 °C cooled to 12 °C → 207.2 bar.
     let out = bin()
@@ -297,4 +298,50 @@ fn chart_command_prints_every_pair() {
     );
     let out = bin().args(["chart", "/nonexistent.json"]).output().unwrap();
     assert_eq!(out.status.code(), Some(2));
+}
+
+#[test]
+fn hand_content_is_the_pencil_sum() {
+    // Common practice: 12 L of water at 232 bar holds 12 × 232 = 2784 L by hand.
+    let out = bin()
+        .args(["gas", "--litres", "12", "--pressure", "232", "--json"])
+        .output()
+        .unwrap();
+    assert_eq!(out.status.code(), Some(0));
+    let v: serde_json::Value = serde_json::from_slice(&out.stdout).unwrap();
+    assert_eq!(v["content_hand_l"].as_f64(), Some(2784.0));
+    let out = bin()
+        .args(["gas", "--litres", "12", "--pressure", "232"])
+        .output()
+        .unwrap();
+    assert!(String::from_utf8_lossy(&out.stdout).contains("2784"));
+}
+
+#[test]
+fn each_diver_is_planned_on_their_own_gauge() {
+    // Invented team: Bram reads a psi gauge on 50 psi in a metric team.
+    let mut t = demo();
+    t["divers"][1]["start"] = 2950.into();
+    t["divers"][1]["gauge"] = serde_json::json!({"unit": "psi", "step": 50});
+    let (code, out, err) = plan_json(&t);
+    assert_eq!(code, 0, "{err}");
+    let v: serde_json::Value = serde_json::from_str(&out).unwrap();
+    let bram = &v["divers"][1];
+    assert_eq!(bram["unit"], "psi");
+    assert_eq!(bram["step"].as_f64(), Some(50.0));
+    let turn = bram["turn"].as_f64().unwrap();
+    assert_eq!(turn % 50.0, 0.0);
+    assert!(turn > 1000.0 && turn <= 2950.0, "{turn}");
+    assert!(turn >= bram["turn_hand"].as_f64().unwrap());
+    assert_eq!(v["divers"][0]["unit"], "bar");
+    assert!(bram["hand_turn_working"].as_str().unwrap().contains("psi"));
+    // The text table prints each diver's unit beside their turn.
+    let dir = tempfile::tempdir().unwrap();
+    let path = dir.path().join("team.json");
+    std::fs::write(&path, t.to_string()).unwrap();
+    let out = bin().arg("plan").arg(&path).output().unwrap();
+    assert_eq!(out.status.code(), Some(0));
+    let text = String::from_utf8_lossy(&out.stdout);
+    let line = text.lines().find(|l| l.contains("Bram")).unwrap();
+    assert!(line.contains(&format!(" {} psi", turn)), "{line}");
 }

@@ -35,6 +35,7 @@ fn diver(name: &str, cylinders: CylinderSet, start: Pressure) -> DiverInput {
         start,
         sac_l_per_min: None,
         stage: None,
+        gauge: None,
     }
 }
 
@@ -106,39 +107,98 @@ fn metric_worked_case_by_hand() {
 }
 
 #[test]
-fn imperial_worked_case_with_published_tank_factors() {
-    // Tank factors (common practice, cu ft per 100 psi): AL80 77.4 cu ft @ 3000 psi = 2.58;
-    // LP85 85 cu ft @ 2640 psi = 3.22.
-    //   A: twin AL80 at 3000 psi → 154.8 cu ft; a third = 51.6 cu ft → A controls
-    //   B: twin LP85 at 2640 psi → 170 cu ft; a third = 56.7 cu ft
-    //   A turns at 2000 psi; B drops 51.6 / 6.439 = 801.3 psi → 1838.7 → shown 1900 psi.
+fn published_tank_factors_are_reproduced() {
+    // Tank factors in cu ft per 100 psi (common practice, trade tables): aluminium
+    // 77.4 cu ft @ 3000 psi = 2.58; steel 85 cu ft @ 2640 psi = 3.22.
+    use turnsheet::plan::{ContentModel, HandModel};
+    let per_100_psi = |set: CylinderSet| {
+        HandModel
+            .content(set.water(ModelKind::Hand), Pressure::from_psi(100.0))
+            .cuft()
+    };
+    assert!((per_100_psi(rated(1, 77.4, 3000.0)) - 2.58).abs() < 1e-9);
+    assert!((per_100_psi(rated(1, 85.0, 2640.0)) - 3.22).abs() < 0.005);
+    // And 12 L at 232 bar is 12 × 232 = 2784 L by pencil.
+    let c = HandModel.content(
+        stamped(1, 12.0, 232.0).water(ModelKind::Hand),
+        Pressure::from_bar(232.0),
+    );
+    assert_eq!(c.litres(), 2784.0);
+}
+
+#[test]
+fn imperial_worked_case_by_hand() {
+    // Worked by hand with tank factors (rated cu ft ÷ rated psi), an invented pairing:
+    //   A: twin 63 cu ft @ 3000 psi = 4.2 cu ft per 100 psi; at 2900 psi 121.8 cu ft,
+    //      a third 40.6 cu ft → A controls
+    //   B: twin 120 cu ft @ 3442 psi = 6.9727 cu ft per 100 psi; at 3300 psi 230.1 cu ft
+    //   A drops 40.6 / 4.2 × 100 = 966.7 psi → 1933.3 → shown 2000 psi
+    //   B drops 40.6 / 6.9727 × 100 = 582.3 psi → 2717.7 → shown 2800 psi
     let t = team(
         UnitSystem::Imperial,
         Rule::Thirds,
         100.0,
         vec![
-            diver("A", rated(2, 77.4, 3000.0), Pressure::from_psi(3000.0)),
-            diver("B", rated(2, 85.0, 2640.0), Pressure::from_psi(2640.0)),
+            diver("A", rated(2, 63.0, 3000.0), Pressure::from_psi(2900.0)),
+            diver("B", rated(2, 120.0, 3442.0), Pressure::from_psi(3300.0)),
         ],
     );
     let plan = plan_team(&t).unwrap();
-    let tf_a: f64 = 2.0 * 77.4 / 30.0; // cu ft per 100 psi
-    let tf_b: f64 = 2.0 * 85.0 / 26.4;
-    assert!((tf_a - 5.16).abs() < 1e-9 && (tf_b - 6.4394).abs() < 1e-3);
-    let allowance = tf_a * 30.0 / 3.0;
-    let b_turn = 2640.0 - allowance / tf_b * 100.0;
+    let tf_a: f64 = 2.0 * 63.0 / 3000.0; // cu ft per psi
+    let tf_b: f64 = 2.0 * 120.0 / 3442.0;
+    let allowance = tf_a * 2900.0 / 3.0;
+    assert!((allowance - 40.6).abs() < 1e-9);
+    let a_turn = 2900.0 - allowance / tf_a;
+    let b_turn = 3300.0 - allowance / tf_b;
     assert_eq!(plan.controlling, 0);
-    assert!((plan.divers[0].turn_hand.psi() - 2000.0).abs() < 1e-6);
-    assert!(
-        (plan.divers[1].turn_hand.psi() - b_turn).abs() < 1e-6,
-        "{}",
-        plan.divers[1].turn_hand.psi()
-    );
-    assert_eq!(plan.divers[0].turn_shown_value, 2000.0);
-    assert_eq!(plan.divers[1].turn_shown_value, 1900.0);
-    // The ratings are taken to include compressibility: the rated volume at rated pressure
-    // is the same under both models at 70 °F.
-    assert!((plan.team_allowance_hand.cuft() - 51.6).abs() < 1e-6);
+    assert!((plan.divers[0].turn_hand.psi() - a_turn).abs() < 1e-6);
+    assert!((plan.divers[1].turn_hand.psi() - b_turn).abs() < 1e-6);
+    assert!((b_turn - 2717.7).abs() < 0.05, "{b_turn}");
+    assert!((plan.team_allowance_hand.cuft() - 40.6).abs() < 1e-6);
+    // Shown turns: never below the hand turn rounded up to 100 psi.
+    assert!(plan.divers[0].turn_shown_value >= 2000.0);
+    assert!(plan.divers[1].turn_shown_value >= 2800.0);
+}
+
+/// The same physical team, a bar diver and a psi diver, planned as a metric team and as
+/// an imperial team. Worked by hand (common practice tank factors):
+///   A: twin 12 L at 220 bar (bar gauge, 10 bar) = 24 × 220 = 5280 L
+///   B: twin 63 cu ft @ 3000 psi at 3000 psi (psi gauge, 100 psi) = 126 cu ft = 3567.9 L
+///   B controls; a third = 42 cu ft = 1189.3 L
+///   A drops 1189.3 / 24 = 49.55 bar → 170.45 → 180 bar; B drops 1000 psi → 2000 psi.
+#[test]
+fn mixed_bar_and_psi_team_by_hand_both_ways() {
+    use turnsheet::plan::{Gauge, PressureUnit};
+    let bar = Gauge {
+        unit: PressureUnit::Bar,
+        step: 10.0,
+    };
+    let psi = Gauge {
+        unit: PressureUnit::Psi,
+        step: 100.0,
+    };
+    for units in [UnitSystem::Metric, UnitSystem::Imperial] {
+        let mut a = diver("A", stamped(2, 12.0, 232.0), Pressure::from_bar(220.0));
+        a.gauge = Some(bar);
+        let mut b = diver("B", rated(2, 63.0, 3000.0), Pressure::from_psi(3000.0));
+        b.gauge = Some(psi);
+        let t = team(units, Rule::Thirds, units.default_gauge_step(), vec![a, b]);
+        let plan = plan_team(&t).unwrap();
+        let b_litres = 126.0 * 28.316_846_592;
+        assert!((plan.divers[0].content_hand.litres() - 5280.0).abs() < 1e-9);
+        assert!((plan.divers[1].content_hand.litres() - b_litres).abs() < 1e-9);
+        assert_eq!(plan.controlling, 1, "{units:?}");
+        let allowance = b_litres / 3.0;
+        assert!((plan.divers[0].turn_hand.bar() - (220.0 - allowance / 24.0)).abs() < 1e-9);
+        assert!((plan.divers[1].turn_hand.psi() - 2000.0).abs() < 1e-6);
+        // Each turn on its own gauge: A in bar on 10 bar, B in psi on 100 psi.
+        assert_eq!(plan.divers[0].gauge, bar);
+        assert_eq!(plan.divers[1].gauge, psi);
+        assert!(plan.divers[0].turn_shown_value >= 180.0);
+        assert_eq!(plan.divers[0].turn_shown_value % 10.0, 0.0);
+        assert!(plan.divers[1].turn_shown_value >= 2000.0);
+        assert_eq!(plan.divers[1].turn_shown_value % 100.0, 0.0);
+    }
 }
 
 #[test]
@@ -170,7 +230,7 @@ fn stricter_rules_turn_earlier() {
 
 #[test]
 fn high_fill_real_gas_is_lower_than_hand_and_hand_is_kept() {
-    // Domain notes: at high fills exact real-gas thirds turn lower than the hand method;
+    // Common practice: at high fills exact real-gas thirds turn lower than the hand method;
     // the shown turn keeps the hand method's margin.
     let t = team(
         UnitSystem::Metric,
@@ -237,7 +297,7 @@ fn stages_are_matched_on_volume_like_the_main_gas() {
 
 #[test]
 fn slower_breathers_have_used_less_when_the_team_turns() {
-    // Domain notes (common practice): the diver with the higher breathing rate reaches the
+    // Common practice: the diver with the higher breathing rate reaches the
     // allowance first; at that moment the others have used less. Identical twins, SAC 20
     // and 10 L/min at one depth: when A turns, B has used half of A's gas.
     let mut t = team(

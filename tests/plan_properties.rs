@@ -2,9 +2,28 @@
 
 use proptest::prelude::*;
 use turnsheet::plan::{
-    CylinderSet, CylinderSpec, Depth, DiverInput, Mix, Pressure, Rule, StageInput, TeamInput,
-    Temperature, UnitSystem, Water, plan_team,
+    CylinderSet, CylinderSpec, Depth, DiverInput, Gauge, Mix, Pressure, PressureUnit, Rule,
+    StageInput, TeamInput, Temperature, UnitSystem, Water, plan_team,
 };
+
+/// A diver's own gauge, or none (the team's): bar on 1, 5 or 10 bar; psi on 10, 50 or 100.
+fn gauge() -> impl Strategy<Value = Option<Gauge>> {
+    prop::option::of(
+        (prop::bool::ANY, prop::sample::select(vec![1.0, 5.0, 10.0])).prop_map(|(psi, k)| {
+            if psi {
+                Gauge {
+                    unit: PressureUnit::Psi,
+                    step: k * 10.0,
+                }
+            } else {
+                Gauge {
+                    unit: PressureUnit::Bar,
+                    step: k,
+                }
+            }
+        }),
+    )
+}
 
 fn cylinders() -> impl Strategy<Value = CylinderSet> {
     let stamped = (
@@ -65,8 +84,9 @@ fn diver(i: usize) -> impl Strategy<Value = DiverInput> {
         0.3f64..=1.4,
         prop::option::of(10.0f64..=30.0),
         prop::option::weighted(0.4, stage()),
+        gauge(),
     )
-        .prop_map(move |(cylinders, mix, fill, sac, stage)| {
+        .prop_map(move |(cylinders, mix, fill, sac, stage, gauge)| {
             let wp = cylinders.working_pressure().bar();
             let start = (wp * fill).min(399.0);
             DiverInput {
@@ -76,6 +96,7 @@ fn diver(i: usize) -> impl Strategy<Value = DiverInput> {
                 start: Pressure::from_bar(start),
                 sac_l_per_min: sac,
                 stage,
+                gauge,
             }
         })
 }
@@ -120,30 +141,32 @@ proptest! {
     #[test]
     fn plan_invariants(t in team()) {
         let plan = plan_team(&t).expect("valid team must plan");
-        let u = t.units;
         for (i, d) in plan.divers.iter().enumerate() {
-            let start = u.pressure_value(t.divers[i].start);
+            // Every figure on the diver's own gauge: its unit and graduation.
+            let g = t.gauge_of(i);
+            prop_assert_eq!(d.gauge, g);
+            let start = g.value(t.divers[i].start);
             let shown = d.turn_shown_value;
             prop_assert!(shown <= start + 1e-9, "turn {shown} above start {start}");
             prop_assert!(shown >= 0.0);
             if shown < start - 1e-9 {
-                let k = shown / t.gauge_step;
-                prop_assert!((k - k.round()).abs() < 1e-9, "turn {shown} off the step {}", t.gauge_step);
-                prop_assert!(shown >= u.pressure_value(d.turn_real) - 1e-9);
-                prop_assert!(shown >= u.pressure_value(d.turn_hand) - 1e-9);
+                let k = shown / g.step;
+                prop_assert!((k - k.round()).abs() < 1e-9, "turn {shown} off the step {}", g.step);
+                prop_assert!(shown >= g.value(d.turn_real) - 1e-9);
+                prop_assert!(shown >= g.value(d.turn_hand) - 1e-9);
             }
             prop_assert!(d.used_real.litres() <= plan.team_allowance_real.litres() + 1e-6);
             match (&t.divers[i].stage, &d.stage) {
                 (None, None) => {}
                 (Some(input), Some(st)) => {
-                    let start = u.pressure_value(input.start);
+                    let start = g.value(input.start);
                     let drop = st.drop_shown_value;
                     prop_assert!(drop <= start + 1e-9);
                     if drop < start - 1e-9 {
-                        let k = drop / t.gauge_step;
+                        let k = drop / g.step;
                         prop_assert!((k - k.round()).abs() < 1e-9);
-                        prop_assert!(drop >= u.pressure_value(st.drop_real) - 1e-9);
-                        prop_assert!(drop >= u.pressure_value(st.drop_hand) - 1e-9);
+                        prop_assert!(drop >= g.value(st.drop_real) - 1e-9);
+                        prop_assert!(drop >= g.value(st.drop_hand) - 1e-9);
                     }
                 }
                 _ => prop_assert!(false, "stage plan must exist exactly when a stage is carried"),
@@ -177,5 +200,31 @@ proptest! {
         let c2 = plan2.controlling_diver();
         // With exact ties either diver may control; their allowances are the same.
         prop_assert!((c1.content_real.litres() - c2.content_real.litres()).abs() < 1e-9);
+    }
+
+    #[test]
+    fn bar_or_psi_entry_plans_the_same_team(t in team()) {
+        // The same physical team read on bar gauges (10 bar) or on psi gauges (100 psi):
+        // the same controlling diver, and turns within one graduation (10 bar = 145 psi).
+        let with = |unit: PressureUnit| {
+            let mut x = t.clone();
+            for d in &mut x.divers {
+                d.gauge = Some(Gauge::usual(unit));
+            }
+            x
+        };
+        let (in_bar, in_psi) = (with(PressureUnit::Bar), with(PressureUnit::Psi));
+        // Starts below one graduation are refused on a gauge that coarse; skip those teams.
+        prop_assume!(in_bar.validate().is_ok() && in_psi.validate().is_ok());
+        let (pb, pp) = (plan_team(&in_bar).unwrap(), plan_team(&in_psi).unwrap());
+        prop_assert!(
+            (pb.controlling_diver().content_real.litres() - pp.controlling_diver().content_real.litres()).abs() < 1e-9
+        );
+        for (b, p) in pb.divers.iter().zip(&pp.divers) {
+            let diff = (b.turn_shown.psi() - p.turn_shown.psi()).abs();
+            prop_assert!(diff <= 10.0 / 0.068_947_572_9 + 1e-6, "{} bar vs {} psi", b.turn_shown_value, p.turn_shown_value);
+            prop_assert_eq!(b.gauge.label(), "bar");
+            prop_assert_eq!(p.gauge.label(), "psi");
+        }
     }
 }

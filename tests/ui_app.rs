@@ -560,7 +560,7 @@ fn the_set_marked_mine_starts_a_new_team() {
     let dir = tempfile::tempdir().unwrap();
     let app = open_acknowledged(dir.path());
     press(&app, "Locker");
-    press(&app, "copy Twin LP 85");
+    press(&app, "copy Twin steel 85 cu ft 2640 psi");
     press(&app, "Save");
     press(&app, "copy Twin 10 L 300 bar");
     press(&app, "Save");

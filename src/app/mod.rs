@@ -7,6 +7,7 @@ pub mod keypad;
 pub mod locker_controller;
 pub mod locker_draft;
 pub mod nav;
+pub mod readings;
 pub mod session;
 pub mod team_controller;
 pub mod view_models;

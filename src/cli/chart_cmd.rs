@@ -13,7 +13,10 @@ use super::plan_cmd::read_team;
 struct JsonChart {
     diver: String,
     teammate: String,
+    /// The diver's gauge unit: rows and cells.
     unit: String,
+    /// The teammate's gauge unit: columns.
+    teammate_unit: String,
     diver_starts: Vec<f64>,
     teammate_starts: Vec<f64>,
     /// turns[row][column]: the diver's turn for diver_starts[row] and teammate_starts[column].
@@ -21,16 +24,15 @@ struct JsonChart {
 }
 
 pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String, InputError> {
-    if above + below > 30 {
+    if above + below > 40 {
         return Err(InputError::new(
             "--above/--below",
-            "at most 30 rows and columns in all",
+            "at most 41 rows and columns (above + below ≤ 40)",
         ));
     }
     let team = read_team(path)?;
     let charts = team_charts(&team, above, below)?;
     let u = team.units;
-    let pu = u.pressure_label();
     let name = |i: usize| team.divers[i].name.clone();
     if json {
         let out: Vec<JsonChart> = charts
@@ -38,7 +40,8 @@ pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String
             .map(|c| JsonChart {
                 diver: name(c.me),
                 teammate: name(c.buddy),
-                unit: pu.to_string(),
+                unit: c.my_gauge.label().to_string(),
+                teammate_unit: c.buddy_gauge.label().to_string(),
                 diver_starts: c.my_starts.clone(),
                 teammate_starts: c.buddy_starts.clone(),
                 turns: c.turns.clone(),
@@ -47,12 +50,11 @@ pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String
         return Ok(serde_json::to_string_pretty(&out).unwrap_or_default() + "\n");
     }
     let mut s = format!(
-        "Wet-notes charts: rule of {}, gauge step {} {pu}, water {:.0} {}.\n\
-         Each chart gives the first diver's turn ({pu}) for their start (rows) and the teammate's start (columns).\n\
-         With more than one teammate, read every chart of yours and keep the HIGHEST turn.\n\
-         Between two rows read the higher own start; between two columns the lower teammate start.\n",
+        "Wet-notes charts: rule of {}, water {:.0} {}.\n\
+         Each chart gives the first diver's turn for their start (rows) and the teammate's start (columns),\n\
+         each on their own gauge. With more than one teammate, keep the HIGHEST turn of your charts.\n\
+         Between lines, read the next higher own start and the next lower teammate start.\n",
         team.rule.name(),
-        fmt_num(team.gauge_step),
         u.temperature_value(team.water_temp),
         u.temperature_label()
     );
@@ -76,11 +78,15 @@ pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String
             buddy.cylinders.describe(),
             buddy.mix.label()
         ));
+        let (mu, bu) = (c.my_gauge.label(), c.buddy_gauge.label());
         s.push_str(&format!(
-            "rows: {}'s start; columns: {}'s start; cells: {}'s turn\n",
-            me.name, buddy.name, me.name
+            "rows: {}'s start ({mu}); columns: {}'s start ({bu}); cells: {}'s turn ({mu}, on {} {mu})\n",
+            me.name,
+            buddy.name,
+            me.name,
+            fmt_num(c.my_gauge.step)
         ));
-        s.push_str(&format!("{:>w$} │", pu, w = width + 2));
+        s.push_str(&format!("{:>w$} │", format!("{mu}\\{bu}"), w = width + 2));
         for b in &c.buddy_starts {
             s.push_str(&format!("{:>width$}", fmt_num(*b)));
         }

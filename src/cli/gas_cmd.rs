@@ -2,7 +2,7 @@
 
 use serde::Serialize;
 
-use crate::plan::error::{InputError, check_range};
+use crate::plan::error::{InputError, check_range, fmt_num};
 use crate::plan::temperature::pressure_after_temperature_change;
 use crate::plan::{ContentModel, HandModel, Mix, Pressure, RealGasModel, Temperature, Volume};
 
@@ -101,14 +101,16 @@ pub fn run(a: &GasArgs) -> Result<String, InputError> {
         return Ok(serde_json::to_string_pretty(&out).unwrap_or_default() + "\n");
     }
     let mut s = format!(
-        "{} L of {} at {} {unit}, {} °C:\n  real gas (GERG-2008): {:.0} L free gas ({:.1} cu ft)\n  tank factor:          {:.0} L free gas ({:.1} cu ft)\n",
+        "{} L of {} at {} {unit}, {} °C:\n  real gas (GERG-2008): {:.0} L free gas ({:.1} cu ft)\n  tank factor (by hand): {} L × {} bar = {} L free gas ({:.1} cu ft)\n",
         a.litres,
         out.mix,
         a.pressure,
         a.temp,
         real.litres().floor(),
         real.cuft(),
-        hand.litres().floor(),
+        fmt_num(a.litres),
+        fmt_num((p.bar() * 10.0 + 1e-6).floor() / 10.0),
+        fmt_num((hand.litres() * 10.0 + 1e-6).floor() / 10.0),
         hand.cuft()
     );
     if let (Some(c), Some(t2)) = (after, a.to_temp) {

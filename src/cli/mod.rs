@@ -1,6 +1,7 @@
 //! The command line: `plan` prints a team's turn pressures, `gas` a cylinder's contents.
 //! Exit codes: 0 ok, 2 bad input (the message names the field).
 
+pub mod card_cmd;
 pub mod chart_cmd;
 pub mod gas_cmd;
 pub mod plan_cmd;
@@ -18,7 +19,7 @@ pub const EXIT_BAD_INPUT: i32 = 2;
     about = "Team turn pressures for overhead dives with dissimilar cylinders, matched on gas volume.",
     long_about = "Team turn pressures for overhead dives with dissimilar cylinders, matched on gas volume.\n\n\
 Without a command, opens the app. Every turn pressure shown is the higher (more conservative) of a \
-real-gas (GERG-2008) and a tank-factor calculation, rounded up to the team's gauge step.\n\n\
+real-gas (GERG-2008) and a tank-factor calculation, rounded up to each diver's own gauge graduation, in that diver's unit.\n\n\
 A planning aid for trained divers: team protocol, training standards and local rules come first. \
 Check the numbers by hand. No warranty."
 )]
@@ -37,6 +38,9 @@ pub enum Command {
     ///  "divers": [{"name": "…", "cylinders": {"count": 2, "water_l": 12, "working_bar": 232},
     ///              "mix": {"o2": 0.32, "he": 0.0}, "start": 220, "sac": 18}]}
     /// Cylinders may instead be {"count": 2, "rated_cuft": 80, "rated_psi": 3000}.
+    /// A diver who reads another gauge adds "gauge": {"unit": "bar"|"psi", "step": 5};
+    /// their start (and stage start) is then in that unit, and so are their turns.
+    /// Without "step", a gauge in the other unit reads 10 bar or 100 psi.
     /// A diver may carry a stage: "stage": {"cylinders": {...}, "mix": {...}, "start": 200};
     /// stages are matched on volume among the divers who carry one and get a drop pressure.
     /// water_temp is °C (metric) or °F (imperial); mix defaults to air; unknown keys are errors.
@@ -47,6 +51,9 @@ pub enum Command {
         #[arg(long)]
         json: bool,
     },
+    /// A printable team card (SVG, 100 × 150 mm, black on white) for wet notes, with
+    /// each diver's pairing charts on following pages if asked.
+    Card(card_cmd::CardArgs),
     /// Gas content of a cylinder (both models), and its pressure after a temperature change.
     Gas(gas_cmd::GasArgs),
     /// Print wet-notes charts: each diver's turn for a range of own and teammate start
@@ -80,6 +87,7 @@ pub fn run(command: Command) -> i32 {
     let result = match command {
         Command::Plan { team, json } => plan_cmd::run(&team, json),
         Command::Gas(args) => gas_cmd::run(&args),
+        Command::Card(args) => card_cmd::run(&args),
         Command::Chart {
             team,
             above,

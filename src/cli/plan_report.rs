@@ -2,19 +2,23 @@
 
 use serde::Serialize;
 
+use crate::plan::error::fmt_num;
+use crate::plan::hand_check::{allowance_sentence, hand_working, turn_sentence};
 use crate::plan::out_of_gas::margin_for_display;
-use crate::plan::{TeamInput, TeamPlan, UnitSystem};
+use crate::plan::{PressureUnit, TeamInput, TeamPlan, UnitSystem};
 
 #[derive(Serialize, Debug)]
 pub struct JsonPlan {
     pub units: UnitSystem,
     pub rule: String,
+    /// The team's default gauge unit and step (each diver has their own `unit` and `step`).
     pub pressure_unit: String,
     pub gauge_step: f64,
     pub controlling: String,
     /// Team allowance, real gas, free litres at 1 atm and water temperature.
     pub team_allowance_l: f64,
     pub team_allowance_hand_l: f64,
+    pub team_allowance_hand_working: String,
     /// Minimum over diver pairs; null when no gas is spent.
     pub stress_margin: Option<f64>,
     pub stress_text: String,
@@ -28,8 +32,12 @@ pub struct JsonPlan {
 #[derive(Serialize, Debug)]
 pub struct JsonDiver {
     pub name: String,
+    /// The diver's gauge unit: `start`, `turn*` and `stage_*` pressures are in it.
+    pub unit: PressureUnit,
+    /// The diver's graduation, in `unit`.
+    pub step: f64,
     pub start: f64,
-    /// Shown turn, on the gauge step (or the start), in the team's unit.
+    /// Shown turn, on the diver's graduation (or the start), in `unit`.
     pub turn: f64,
     pub turn_real: f64,
     pub turn_hand: f64,
@@ -37,6 +45,11 @@ pub struct JsonDiver {
     pub content_l: f64,
     pub content_hand_l: f64,
     pub used_l: f64,
+    /// The pencil sums behind `turn_hand` (common practice tank-factor arithmetic).
+    pub hand_content_working: String,
+    pub hand_turn_working: String,
+    /// How the shown turn follows from the two exact turns.
+    pub turn_reason: String,
     pub controlling: bool,
     pub minutes_to_turn: Option<f64>,
     /// Stage drop pressure (shown, on the gauge step), or null without a stage.
@@ -62,6 +75,7 @@ pub fn json_report(input: &TeamInput, plan: &TeamPlan) -> JsonPlan {
         controlling: plan.controlling_diver().name.clone(),
         team_allowance_l: r3(plan.team_allowance_real.litres()),
         team_allowance_hand_l: r3(plan.team_allowance_hand.litres()),
+        team_allowance_hand_working: allowance_sentence(input, plan),
         stress_margin: plan
             .stress
             .margin
@@ -74,36 +88,40 @@ pub fn json_report(input: &TeamInput, plan: &TeamPlan) -> JsonPlan {
             .filter(|c| c.margin.is_finite())
             .map(|c| r3(c.margin)),
         first_to_turn: plan.first_to_turn.map(|i| names[i].clone()),
-        warnings: plan.warnings.clone(),
+        warnings: plan.warning_texts(),
         divers: plan
             .divers
             .iter()
-            .map(|d| JsonDiver {
-                name: d.name.clone(),
-                start: r3(u.pressure_value(d.start)),
-                turn: r3(d.turn_shown_value),
-                turn_real: r3(u.pressure_value(d.turn_real)),
-                turn_hand: r3(u.pressure_value(d.turn_hand)),
-                turn_set_by: format!("{:?}", d.set_by).to_lowercase(),
-                content_l: r3(d.content_real.litres()),
-                content_hand_l: r3(d.content_hand.litres()),
-                used_l: r3(d.used_real.litres()),
-                controlling: d.controlling,
-                minutes_to_turn: d.minutes_to_turn.map(r3),
-                stage_drop: d.stage.as_ref().map(|st| r3(st.drop_shown_value)),
-                stage_drop_real: d
-                    .stage
-                    .as_ref()
-                    .map(|st| r3(u.pressure_value(st.drop_real))),
-                stage_drop_hand: d
-                    .stage
-                    .as_ref()
-                    .map(|st| r3(u.pressure_value(st.drop_hand))),
-                stage_set_by: d
-                    .stage
-                    .as_ref()
-                    .map(|st| format!("{:?}", st.set_by).to_lowercase()),
-                stage_controlling: d.stage.as_ref().map(|st| st.controlling),
+            .enumerate()
+            .map(|(i, d)| {
+                let g = d.gauge;
+                let hand = hand_working(input, plan, i);
+                JsonDiver {
+                    name: d.name.clone(),
+                    unit: g.unit,
+                    step: g.step,
+                    start: r3(g.value(d.start)),
+                    turn: r3(d.turn_shown_value),
+                    turn_real: r3(g.value(d.turn_real)),
+                    turn_hand: r3(g.value(d.turn_hand)),
+                    turn_set_by: format!("{:?}", d.set_by).to_lowercase(),
+                    content_l: r3(d.content_real.litres()),
+                    content_hand_l: r3(d.content_hand.litres()),
+                    used_l: r3(d.used_real.litres()),
+                    hand_content_working: hand.content,
+                    hand_turn_working: hand.turn,
+                    turn_reason: turn_sentence(plan, i),
+                    controlling: d.controlling,
+                    minutes_to_turn: d.minutes_to_turn.map(r3),
+                    stage_drop: d.stage.as_ref().map(|st| r3(st.drop_shown_value)),
+                    stage_drop_real: d.stage.as_ref().map(|st| r3(g.value(st.drop_real))),
+                    stage_drop_hand: d.stage.as_ref().map(|st| r3(g.value(st.drop_hand))),
+                    stage_set_by: d
+                        .stage
+                        .as_ref()
+                        .map(|st| format!("{:?}", st.set_by).to_lowercase()),
+                    stage_controlling: d.stage.as_ref().map(|st| st.controlling),
+                }
             })
             .collect(),
     }
@@ -111,41 +129,44 @@ pub fn json_report(input: &TeamInput, plan: &TeamPlan) -> JsonPlan {
 
 pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
     let u = input.units;
-    let pu = u.pressure_label();
     let vu = u.volume_label();
     let mut s = String::new();
     s.push_str(&format!(
-        "Turn pressures, rule of {}, gauge step {} {pu}, water {:.0} {}\n\n",
+        "Turn pressures, rule of {}, water {:.0} {}; each diver's pressures on their own gauge\n\n",
         input.rule.name(),
-        crate::plan::error::fmt_num(input.gauge_step),
         u.temperature_value(input.water_temp),
         u.temperature_label()
     ));
     s.push_str(&format!(
-        "  {:<16} {:<26} {:<10} {:>7} {:>7}  {:<12} {:>9} {:>8}\n",
+        "  {:<16} {:<26} {:<10} {:>7} {:>7} {:<4} {:<9} {:<12} {:>9} {:>8}\n",
         "diver",
         "cylinders",
         "mix",
         "start",
         "TURN",
+        "unit",
+        "gauge",
         "set by",
         format!("gas {vu}"),
         "min"
     ));
     for (i, d) in plan.divers.iter().enumerate() {
         let inp = &input.divers[i];
-        let mark = if d.controlling { "▶" } else { " " };
+        let g = d.gauge;
+        let mark = if d.controlling { "*" } else { " " };
         let minutes = d
             .minutes_to_turn
             .map(|m| format!("{}", m.floor() as i64))
             .unwrap_or_else(|| "-".into());
         s.push_str(&format!(
-            "{mark} {:<16} {:<26} {:<10} {:>7} {:>7}  {:<12} {:>9} {:>8}\n",
+            "{mark} {:<16} {:<26} {:<10} {:>7} {:>7} {:<4} {:<9} {:<12} {:>9} {:>8}\n",
             d.name,
             inp.cylinders.describe(),
             inp.mix.label(),
-            format!("{:.0}", u.pressure_value(d.start)),
-            format!("{:.0}", d.turn_shown_value),
+            fmt_num((g.value(d.start) + 1e-9).floor()),
+            fmt_num(d.turn_shown_value),
+            g.label(),
+            format!("{} {}", fmt_num(g.step), g.label()),
             d.set_by.describe(),
             format!("{:.0}", u.volume_value(d.content_real).floor()),
             minutes
@@ -153,9 +174,13 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
     }
     let c = plan.controlling_diver();
     s.push_str(&format!(
-        "\n▶ controlling diver: {} (smallest allowance, {:.0} {vu} real gas)\n",
+        "\n* controlling diver: {}. {} has the least usable gas, so {} allowance sets everyone's: \
+each diver may use {:.0} {vu} going in (real gas; {:.0} {vu} by hand).\n",
         c.name,
-        u.volume_value(plan.team_allowance_real).floor()
+        c.name,
+        possessive(&c.name),
+        u.volume_value(plan.team_allowance_real).floor(),
+        u.volume_value(plan.team_allowance_hand).floor()
     ));
     s.push_str(
         "Turn the dive when the FIRST diver reaches their turn pressure, or at any other limit.\n",
@@ -165,8 +190,9 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
     s.push('\n');
     if plan.stress.margin.is_finite() {
         s.push_str(&format!(
-            "Stress margin {:.2} (the rule guarantees at least {:.2}).\n",
+            "Stress margin {:.2} (the rule of {} gives at least {:.2}).\n",
             margin_for_display(plan.stress.margin),
+            input.rule.name(),
             input.rule.guaranteed_margin()
         ));
     }
@@ -182,15 +208,17 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
         ));
         for (i, d) in plan.divers.iter().enumerate() {
             if let (Some(st), Some(si)) = (&d.stage, &input.divers[i].stage) {
+                let g = d.gauge;
                 s.push_str(&format!(
-                    "{} {:<16} {:<26} {:<10} {:>7} → drop {:>5} {pu}  ({})\n",
-                    if st.controlling { "▶" } else { " " },
+                    "{} {:<16} drop stage at {} {u} ({}, {}, start {} {u}; {})\n",
+                    if st.controlling { "*" } else { " " },
                     d.name,
+                    fmt_num(st.drop_shown_value),
                     si.cylinders.describe(),
                     si.mix.label(),
-                    format!("{:.0}", u.pressure_value(st.start)),
-                    format!("{:.0}", st.drop_shown_value),
-                    st.set_by.describe()
+                    fmt_num((g.value(st.start) + 1e-9).floor()),
+                    st.set_by.describe(),
+                    u = g.label(),
                 ));
             }
         }
@@ -202,9 +230,31 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
             plan.divers[i].minutes_to_turn.unwrap_or(0.0).floor() as i64
         ));
     }
-    for w in &plan.warnings {
+    s.push_str("\nCheck by hand (tank factors; bar taken as atmospheres):\n");
+    for (i, d) in plan.divers.iter().enumerate() {
+        s.push_str(&format!(
+            "  {}: {}\n",
+            d.name,
+            hand_working(input, plan, i).content
+        ));
+    }
+    s.push_str(&format!("  {}\n", allowance_sentence(input, plan)));
+    for (i, d) in plan.divers.iter().enumerate() {
+        let w = hand_working(input, plan, i);
+        s.push_str(&format!("  {}: {}\n", d.name, w.turn));
+        s.push_str(&format!("    turn {}\n", turn_sentence(plan, i)));
+    }
+    for w in plan.warning_texts() {
         s.push_str(&format!("warning: {w}\n"));
     }
     s.push_str("\nPlanning aid for trained divers; team protocol, training standards and local rules come first. Check by hand.\n");
     s
+}
+
+fn possessive(name: &str) -> String {
+    if name.ends_with('s') {
+        format!("{name}'")
+    } else {
+        format!("{name}'s")
+    }
 }

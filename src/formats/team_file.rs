@@ -5,7 +5,8 @@ use serde::{Deserialize, Serialize};
 
 use crate::plan::error::InputError;
 use crate::plan::{
-    CylinderSet, CylinderSpec, DiverInput, Mix, Rule, StageInput, TeamInput, UnitSystem, Water,
+    CylinderSet, CylinderSpec, DiverInput, Gauge, Mix, PressureUnit, Rule, StageInput, TeamInput,
+    UnitSystem, Water,
 };
 
 #[derive(Clone, Debug, PartialEq, Serialize, Deserialize)]
@@ -39,7 +40,7 @@ pub struct DiverFile {
     pub cylinders: CylindersFile,
     #[serde(default)]
     pub mix: Mix,
-    /// Start pressure read in the water, in the team's pressure unit.
+    /// Start pressure read in the water, in the diver's gauge unit.
     pub start: f64,
     /// Surface breathing rate in L/min (metric) or cu ft/min (imperial).
     #[serde(default, skip_serializing_if = "Option::is_none")]
@@ -47,6 +48,21 @@ pub struct DiverFile {
     /// An optional stage, dropped on the way in.
     #[serde(default, skip_serializing_if = "Option::is_none")]
     pub stage: Option<StageFile>,
+    /// The gauge this diver reads. Their `start` and stage `start` are in its unit.
+    /// Without it the team's unit and `gauge_step` apply.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub gauge: Option<GaugeFile>,
+}
+
+/// A diver's own gauge: `{"unit": "bar"|"psi", "step": N}`. Without `step`, a gauge in
+/// the team's unit reads the team's `gauge_step`; one in the other unit reads
+/// 10 bar or 100 psi.
+#[derive(Clone, Debug, PartialEq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct GaugeFile {
+    pub unit: PressureUnit,
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub step: Option<f64>,
 }
 
 #[derive(Clone, Debug, PartialEq, Serialize, Deserialize)]
@@ -55,7 +71,7 @@ pub struct StageFile {
     pub cylinders: CylindersFile,
     #[serde(default)]
     pub mix: Mix,
-    /// Stage pressure read in the water, in the team's pressure unit.
+    /// Stage pressure read in the water, in the diver's gauge unit.
     pub start: f64,
 }
 
@@ -162,16 +178,27 @@ impl TeamFile {
                 ),
             )
         })?;
+        let team_step = self.gauge_step.unwrap_or(u.default_gauge_step());
         let divers = self
             .divers
             .iter()
             .enumerate()
             .map(|(i, d)| {
+                let gauge = d.gauge.as_ref().map(|g| Gauge {
+                    unit: g.unit,
+                    step: g.step.unwrap_or(if g.unit == u.pressure_unit() {
+                        team_step
+                    } else {
+                        g.unit.default_step()
+                    }),
+                });
+                let unit = gauge.map_or(u.pressure_unit(), |g| g.unit);
                 Ok(DiverInput {
                     name: d.name.clone(),
                     cylinders: d.cylinders.to_set(&format!("divers[{i}].cylinders"))?,
                     mix: d.mix,
-                    start: u.pressure(d.start),
+                    start: unit.pressure(d.start),
+                    gauge,
                     sac_l_per_min: d.sac.map(|s| u.volume(s).litres()),
                     stage: match &d.stage {
                         None => None,
@@ -180,7 +207,7 @@ impl TeamFile {
                                 .cylinders
                                 .to_set(&format!("divers[{i}].stage.cylinders"))?,
                             mix: st.mix,
-                            start: u.pressure(st.start),
+                            start: unit.pressure(st.start),
                         }),
                     },
                 })
@@ -189,7 +216,7 @@ impl TeamFile {
         Ok(TeamInput {
             units: u,
             rule,
-            gauge_step: self.gauge_step.unwrap_or(u.default_gauge_step()),
+            gauge_step: team_step,
             water_temp: u.temperature(self.water_temp.unwrap_or(match u {
                 UnitSystem::Metric => 20.0,
                 UnitSystem::Imperial => 68.0,
@@ -218,19 +245,27 @@ impl TeamFile {
             divers: t
                 .divers
                 .iter()
-                .map(|d| DiverFile {
-                    name: d.name.clone(),
-                    cylinders: CylindersFile::from_set(&d.cylinders),
-                    mix: d.mix,
-                    start: round6(u.pressure_value(d.start)),
-                    sac: d
-                        .sac_l_per_min
-                        .map(|s| round6(u.volume_value(crate::plan::Volume::from_litres(s)))),
-                    stage: d.stage.as_ref().map(|st| StageFile {
-                        cylinders: CylindersFile::from_set(&st.cylinders),
-                        mix: st.mix,
-                        start: round6(u.pressure_value(st.start)),
-                    }),
+                .enumerate()
+                .map(|(i, d)| {
+                    let g = t.gauge_of(i);
+                    DiverFile {
+                        name: d.name.clone(),
+                        cylinders: CylindersFile::from_set(&d.cylinders),
+                        mix: d.mix,
+                        start: round6(g.value(d.start)),
+                        gauge: d.gauge.map(|g| GaugeFile {
+                            unit: g.unit,
+                            step: Some(g.step),
+                        }),
+                        sac: d
+                            .sac_l_per_min
+                            .map(|s| round6(u.volume_value(crate::plan::Volume::from_litres(s)))),
+                        stage: d.stage.as_ref().map(|st| StageFile {
+                            cylinders: CylindersFile::from_set(&st.cylinders),
+                            mix: st.mix,
+                            start: round6(g.value(st.start)),
+                        }),
+                    }
                 })
                 .collect(),
         }
@@ -258,6 +293,35 @@ mod tests {
         let back = TeamFile::from_input(&input);
         assert_eq!(back.to_input().unwrap(), input);
         assert_eq!(back.divers[0].sac, Some(0.6));
+    }
+
+    #[test]
+    fn a_diver_may_read_another_unit() {
+        // Diver B reads a bar gauge in an imperial team: start 232 is bar, step 5 bar.
+        let t = TEXT.replace(
+            "\"start\":3300,",
+            "\"start\":232,\"gauge\":{\"unit\":\"bar\",\"step\":5},",
+        );
+        let input = TeamFile::parse(&t).unwrap().to_input().unwrap();
+        let b = &input.divers[1];
+        assert!((b.start.bar() - 232.0).abs() < 1e-9);
+        assert_eq!(
+            input.gauge_of(1),
+            Gauge {
+                unit: PressureUnit::Bar,
+                step: 5.0
+            }
+        );
+        // Diver A has no gauge: the team's psi and step.
+        assert_eq!(input.gauge_of(0).unit, PressureUnit::Psi);
+        assert_eq!(input.gauge_of(0).step, 100.0);
+        let back = TeamFile::from_input(&input);
+        assert_eq!(back.divers[1].start, 232.0);
+        assert_eq!(back.to_input().unwrap(), input);
+        // No step, other unit: the usual 10 bar.
+        let t = t.replace(",\"step\":5", "");
+        let input = TeamFile::parse(&t).unwrap().to_input().unwrap();
+        assert_eq!(input.gauge_of(1).step, 10.0);
     }
 
     #[test]

@@ -97,12 +97,12 @@ pub fn presets() -> Vec<Preset> {
             material: Steel,
         },
         Preset {
-            name: "Sidemount 2× aluminium 11.1 L 207 bar",
+            name: "Sidemount 2 × aluminium 11.1 L 207 bar",
             set: stamped(2, 11.1, 207.0),
             material: Aluminium,
         },
         Preset {
-            name: "Sidemount 2× aluminium 80",
+            name: "Sidemount 2 × aluminium 80",
             set: rated(2, 77.4, 3000.0),
             material: Aluminium,
         },
@@ -117,37 +117,37 @@ pub fn presets() -> Vec<Preset> {
             material: Aluminium,
         },
         Preset {
-            name: "Twin LP 85",
+            name: "Twin steel 85 cu ft 2640 psi",
             set: rated(2, 85.0, 2640.0),
             material: Steel,
         },
         Preset {
-            name: "Twin LP 95",
+            name: "Twin steel 95 cu ft 2640 psi",
             set: rated(2, 95.0, 2640.0),
             material: Steel,
         },
         Preset {
-            name: "Twin LP 104",
+            name: "Twin steel 104 cu ft 2640 psi",
             set: rated(2, 104.0, 2640.0),
             material: Steel,
         },
         Preset {
-            name: "Twin HP 100",
+            name: "Twin steel 100 cu ft 3442 psi",
             set: rated(2, 100.0, 3442.0),
             material: Steel,
         },
         Preset {
-            name: "Twin HP 120",
+            name: "Twin steel 120 cu ft 3442 psi",
             set: rated(2, 120.0, 3442.0),
             material: Steel,
         },
         Preset {
-            name: "Twin HP 130",
+            name: "Twin steel 130 cu ft 3442 psi",
             set: rated(2, 130.0, 3442.0),
             material: Steel,
         },
         Preset {
-            name: "Single HP 100",
+            name: "Single steel 100 cu ft 3442 psi",
             set: rated(1, 100.0, 3442.0),
             material: Steel,
         },
@@ -161,13 +161,13 @@ mod tests {
 
     #[test]
     fn presets_are_valid_and_water_matches_trade_tables() {
-        // Domain notes (trade facts, from memory): LP85 ~13.4 L, LP104 ~16.5 L, HP100 ~12.9 L,
-        // HP130 ~16.7 L of water per cylinder.
+        // Trade facts, from memory: low-pressure steel 85 / 104 cu ft ~13.4 / 16.5 L,
+        // high-pressure steel 100 / 130 cu ft ~12.9 / 16.7 L of water per cylinder.
         let expect = [
-            ("Twin LP 85", 13.4),
-            ("Twin LP 104", 16.5),
-            ("Twin HP 100", 12.9),
-            ("Twin HP 130", 16.7),
+            ("Twin steel 85 cu ft 2640 psi", 13.4),
+            ("Twin steel 104 cu ft 2640 psi", 16.5),
+            ("Twin steel 100 cu ft 3442 psi", 12.9),
+            ("Twin steel 130 cu ft 3442 psi", 16.7),
         ];
         let all = presets();
         for (name, litres) in expect {

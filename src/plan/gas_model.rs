@@ -4,7 +4,7 @@
 //! Content is expressed as free gas at one standard atmosphere and the gas
 //! temperature the model was built for.
 
-use super::units::{ATM_BAR, Pressure, Volume};
+use super::units::{Pressure, Volume};
 
 /// Highest pressure any model is asked to invert to.
 pub const MAX_MODEL_PRESSURE_BAR: f64 = 400.0;
@@ -70,7 +70,9 @@ pub fn bracketed_pressure(f: impl Fn(Pressure) -> f64, target: f64) -> Pressure 
     Pressure::from_bar(0.5 * (lo + hi))
 }
 
-/// The hand ("tank factor") model: content = W × p / 1 atm, linear in gauge pressure.
+/// The hand ("tank factor") model, the trade's pencil arithmetic (common practice):
+/// free litres = water litres × gauge bar, the bar taken as one atmosphere
+/// (12 L at 232 bar = 2784 L). Linear in gauge pressure.
 #[derive(Clone, Copy, Debug, Default)]
 pub struct HandModel;
 
@@ -79,13 +81,13 @@ impl ContentModel for HandModel {
         ModelKind::Hand
     }
     fn litres_per_litre(&self, p: Pressure) -> f64 {
-        p.bar() / ATM_BAR
+        p.bar()
     }
     fn pressure_for(&self, water: Volume, content: Volume) -> Pressure {
         if water.litres() <= 0.0 {
             return Pressure::ZERO;
         }
-        Pressure::from_bar(content.litres() * ATM_BAR / water.litres())
+        Pressure::from_bar(content.litres() / water.litres())
     }
 }
 
@@ -95,10 +97,10 @@ mod tests {
 
     #[test]
     fn hand_model_is_tank_factor_arithmetic() {
-        // Common practice: a 12 L cylinder holds 12 L of free gas per bar (at 1 bar);
-        // per standard atmosphere that is 12 / 1.01325 per bar.
+        // Common practice, by pencil: 12 L of water at 232 bar holds 12 × 232 = 2784 L.
+        let c = HandModel.content(Volume::from_litres(12.0), Pressure::from_bar(232.0));
+        assert_eq!(c.litres(), 2784.0);
         let c = HandModel.content(Volume::from_litres(12.0), Pressure::from_bar(200.0));
-        assert!((c.litres() - 12.0 * 200.0 / 1.01325).abs() < 1e-9);
         let p = HandModel.pressure_for(Volume::from_litres(12.0), c);
         assert!((p.bar() - 200.0).abs() < 1e-9);
     }

@@ -2,12 +2,13 @@
 
 use super::cylinders::CylinderSet;
 use super::error::InputError;
-use super::gas_model::{ContentModel, HandModel, ModelKind};
+use super::gas_model::ModelKind;
 use super::mix::Mix;
 use super::out_of_gas::{StressCheck, stress_check};
-use super::real_gas::RealGasModel;
+use super::supply::SupplyModels;
 use super::team::TeamInput;
-use super::units::{Pressure, UnitSystem, Volume};
+use super::units::{Gauge, Pressure, UnitSystem, Volume};
+use super::warning::Warning;
 
 /// Per-diver results.
 #[derive(Clone, Debug, PartialEq)]
@@ -20,11 +21,14 @@ pub struct DiverPlan {
     /// Exact turn pressures of each model.
     pub turn_real: Pressure,
     pub turn_hand: Pressure,
-    /// Turn shown to the diver: the higher exact turn rounded UP to the gauge step,
-    /// never above start.
+    /// Turn shown to the diver: the higher exact turn rounded UP to the diver's
+    /// graduation, never above start.
     pub turn_shown: Pressure,
-    /// The shown turn as a number in the team's unit (exactly on the gauge step, or the start).
+    /// The shown turn as a number on the diver's gauge (exactly on its graduation, or
+    /// the start).
     pub turn_shown_value: f64,
+    /// The gauge the diver reads: every shown pressure of theirs is in its unit.
+    pub gauge: Gauge,
     /// Which model's exact turn was higher and so set the shown turn.
     pub set_by: ModelKind,
     /// Real gas used from start to the shown turn.
@@ -45,7 +49,7 @@ pub struct StagePlan {
     pub drop_real: Pressure,
     pub drop_hand: Pressure,
     pub drop_shown: Pressure,
-    /// In the team's unit, on the gauge step (or the start).
+    /// On the diver's gauge, on its graduation (or the start).
     pub drop_shown_value: f64,
     pub set_by: ModelKind,
     /// This stage holds the smallest allowance among the team's stages.
@@ -69,7 +73,8 @@ pub struct TeamPlan {
     pub stress_at_first_turn: Option<StressCheck>,
     /// Index of the diver who reaches turn first, where times are known for all.
     pub first_to_turn: Option<usize>,
-    pub warnings: Vec<String>,
+    /// Observations that do not stop the plan.
+    pub warnings: Vec<Warning>,
 }
 
 impl TeamPlan {
@@ -79,6 +84,12 @@ impl TeamPlan {
 
     pub fn names(&self) -> Vec<String> {
         self.divers.iter().map(|d| d.name.clone()).collect()
+    }
+
+    /// Every warning in words, each led by its diver's name where it has one.
+    pub fn warning_texts(&self) -> Vec<String> {
+        let names = self.names();
+        self.warnings.iter().map(|w| w.describe(&names)).collect()
     }
 
     /// The out-of-gas check in words (all allowances used).
@@ -106,6 +117,7 @@ struct Supply<'a> {
     cylinders: &'a CylinderSet,
     mix: Mix,
     start: Pressure,
+    gauge: Gauge,
 }
 
 /// Matching results for one supply.
@@ -121,62 +133,40 @@ struct Matched {
 }
 
 /// Match a group of supplies on volume under both models: the smallest allowance
-/// governs; each supply's turn is the higher exact turn, rounded up to the step,
-/// never above its start. Returns the results and the controlling index.
+/// governs; each supply's turn is the higher exact turn, rounded up to its own gauge's
+/// graduation in its own unit, never above its start. Returns the results and the
+/// controlling index.
 fn match_group(team: &TeamInput, supplies: &[Supply<'_>]) -> (Vec<Matched>, usize, Volume, Volume) {
-    let u = team.units;
     let f = team.rule.fraction();
-    let hand = HandModel;
-    let reals: Vec<RealGasModel> = supplies
+    let models: Vec<SupplyModels> = supplies
         .iter()
-        .map(|s| RealGasModel::new(s.mix, team.water_temp))
+        .map(|s| SupplyModels::new(s.cylinders, s.mix, team.water_temp, s.gauge))
         .collect();
-    let water_real: Vec<Volume> = supplies
+    let contents: Vec<(Volume, Volume)> = supplies
         .iter()
-        .map(|s| s.cylinders.water(ModelKind::Real))
+        .zip(&models)
+        .map(|(s, m)| m.contents(s.start))
         .collect();
-    let water_hand: Vec<Volume> = supplies
-        .iter()
-        .map(|s| s.cylinders.water(ModelKind::Hand))
-        .collect();
-    let content_real: Vec<Volume> = supplies
-        .iter()
-        .enumerate()
-        .map(|(i, s)| reals[i].content(water_real[i], s.start))
-        .collect();
-    let content_hand: Vec<Volume> = supplies
-        .iter()
-        .enumerate()
-        .map(|(i, s)| hand.content(water_hand[i], s.start))
-        .collect();
+    let content_real: Vec<Volume> = contents.iter().map(|c| c.0).collect();
+    let content_hand: Vec<Volume> = contents.iter().map(|c| c.1).collect();
     let (controlling, allowance_real) = smallest(&content_real, f);
     let (_, allowance_hand) = smallest(&content_hand, f);
 
     let matched = supplies
         .iter()
-        .enumerate()
-        .map(|(i, s)| {
-            let turn_real = reals[i].pressure_for(water_real[i], content_real[i] - allowance_real);
-            let turn_hand = hand.pressure_for(water_hand[i], content_hand[i] - allowance_hand);
-            let (higher, set_by) = if turn_hand.bar() > turn_real.bar() {
-                (turn_hand, ModelKind::Hand)
-            } else {
-                (turn_real, ModelKind::Real)
-            };
-            let start_value = u.pressure_value(s.start);
-            let rounded = round_up_to_step(u.pressure_value(higher), team.gauge_step);
-            let shown_value = rounded.min(start_value);
-            let turn_shown = u.pressure(shown_value);
-            let used_real =
-                (content_real[i] - reals[i].content(water_real[i], turn_shown)).max_zero();
+        .zip(&models)
+        .zip(&contents)
+        .map(|((s, m), &c)| {
+            let t = m.turn(s.start, c, (allowance_real, allowance_hand));
+            let used_real = (c.0 - m.real_content(t.shown)).max_zero();
             Matched {
-                content_real: content_real[i],
-                content_hand: content_hand[i],
-                turn_real,
-                turn_hand,
-                turn_shown,
-                turn_shown_value: shown_value,
-                set_by,
+                content_real: c.0,
+                content_hand: c.1,
+                turn_real: t.real,
+                turn_hand: t.hand,
+                turn_shown: t.shown,
+                turn_shown_value: t.shown_value,
+                set_by: t.set_by,
                 used_real,
             }
         })
@@ -187,14 +177,15 @@ fn match_group(team: &TeamInput, supplies: &[Supply<'_>]) -> (Vec<Matched>, usiz
 /// Plan the team: validate, then match on volume under both models.
 pub fn plan_team(team: &TeamInput) -> Result<TeamPlan, InputError> {
     team.validate()?;
-    let u = team.units;
     let supplies: Vec<Supply<'_>> = team
         .divers
         .iter()
-        .map(|d| Supply {
+        .enumerate()
+        .map(|(i, d)| Supply {
             cylinders: &d.cylinders,
             mix: d.mix,
             start: d.start,
+            gauge: team.gauge_of(i),
         })
         .collect();
     let (matched, controlling, allowance_real, allowance_hand) = match_group(team, &supplies);
@@ -213,6 +204,7 @@ pub fn plan_team(team: &TeamInput) -> Result<TeamPlan, InputError> {
             turn_hand: m.turn_hand,
             turn_shown: m.turn_shown,
             turn_shown_value: m.turn_shown_value,
+            gauge: team.gauge_of(i),
             set_by: m.set_by,
             used_real: m.used_real,
             controlling: i == controlling,
@@ -228,11 +220,12 @@ pub fn plan_team(team: &TeamInput) -> Result<TeamPlan, InputError> {
         .collect();
     let stage_supplies: Vec<Supply<'_>> = with_stage
         .iter()
-        .filter_map(|&i| team.divers[i].stage.as_ref())
-        .map(|st| Supply {
+        .filter_map(|&i| team.divers[i].stage.as_ref().map(|st| (i, st)))
+        .map(|(i, st)| Supply {
             cylinders: &st.cylinders,
             mix: st.mix,
             start: st.start,
+            gauge: team.gauge_of(i),
         })
         .collect();
     if !stage_supplies.is_empty() {
@@ -291,23 +284,17 @@ pub fn plan_team(team: &TeamInput) -> Result<TeamPlan, InputError> {
     });
 
     let mut warnings = team.warnings();
-    for d in &divers {
-        if d.turn_shown_value >= u.pressure_value(d.start) - 1e-9 {
-            warnings.push(format!(
-                "{}: the turn equals the start pressure; at this gauge step there is no gas to spend.",
-                d.name
-            ));
+    for (i, d) in divers.iter().enumerate() {
+        if d.turn_shown_value >= d.gauge.value(d.start) - 1e-9 {
+            warnings.push(Warning::TurnEqualsStart { diver: i });
         }
     }
     if stress.margin.is_infinite() {
-        warnings.push(
-            "No gas is spent before the turn; the out-of-gas check has nothing to test."
-                .to_string(),
-        );
+        warnings.push(Warning::NoGasSpent);
     }
 
     Ok(TeamPlan {
-        units: u,
+        units: team.units,
         divers,
         controlling,
         team_allowance_real: allowance_real,
@@ -320,7 +307,7 @@ pub fn plan_team(team: &TeamInput) -> Result<TeamPlan, InputError> {
 }
 
 /// The index and allowance of the diver with the smallest allowance (first on ties).
-fn smallest(contents: &[Volume], fraction: f64) -> (usize, Volume) {
+pub(crate) fn smallest(contents: &[Volume], fraction: f64) -> (usize, Volume) {
     let mut best = 0;
     for (i, c) in contents.iter().enumerate() {
         if c.litres() < contents[best].litres() {

@@ -63,15 +63,15 @@ impl Mix {
         }
     }
 
-    /// A short trade label: "air", "EAN32", "Tx 21/35", "Heliox 21/79".
+    /// A short trade label, capitalised like a set name: "Air", "EAN32", "Tx 21/35", "Heliox 21/79".
     pub fn label(&self) -> String {
         let o2 = (self.o2 * 100.0).round() as i64;
         let he = (self.he * 100.0).round() as i64;
         if self.is_air() {
-            "air".to_string()
+            "Air".to_string()
         } else if he == 0 {
             if o2 == 100 {
-                "oxygen".to_string()
+                "Oxygen".to_string()
             } else {
                 format!("EAN{o2}")
             }
@@ -103,7 +103,7 @@ mod tests {
 
     #[test]
     fn labels() {
-        assert_eq!(Mix::AIR.label(), "air");
+        assert_eq!(Mix::AIR.label(), "Air");
         assert_eq!(Mix::nitrox(0.32).label(), "EAN32");
         assert_eq!(Mix::trimix(0.21, 0.35).label(), "Tx 21/35");
         assert_eq!(Mix::trimix(0.21, 0.79).label(), "Heliox 21/79");

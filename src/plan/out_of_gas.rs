@@ -86,7 +86,7 @@ mod tests {
 
     #[test]
     fn identical_divers_on_thirds_have_margin_one() {
-        // Domain notes: used = content/3 for both gives (C − C/3)/(2C/3) = 1.
+        // Worked by hand (common practice): used = content/3 for both gives (C − C/3)/(2C/3) = 1.
         let c = vec![Volume::from_litres(3000.0); 2];
         let u = vec![Volume::from_litres(1000.0); 2];
         let s = stress_check(&c, &u);

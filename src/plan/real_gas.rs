@@ -112,7 +112,7 @@ mod tests {
 
     #[test]
     fn air_at_232_bar_holds_less_than_ideal() {
-        // Domain notes (CoolProp 8.0.0): air at 232 bar, 20 °C, about 219 L per litre.
+        // CoolProp 8.0.0 (HEOS reference equation): air at 232 bar, 20 °C, about 219 L per litre.
         let m = RealGasModel::new(Mix::AIR, Temperature::from_celsius(20.0));
         let l = m.litres_per_litre(Pressure::from_bar(232.0));
         assert!((l - 219.0).abs() < 1.5, "{l}");

@@ -73,7 +73,7 @@ mod tests {
 
     #[test]
     fn margins_follow_the_fraction() {
-        // Domain notes: thirds 1.0, quarters 1.5, sixths 2.5.
+        // Worked by hand from the margin formula (common practice): thirds 1.0, quarters 1.5, sixths 2.5.
         assert!((Rule::Thirds.guaranteed_margin() - 1.0).abs() < 1e-12);
         assert!((Rule::Quarters.guaranteed_margin() - 1.5).abs() < 1e-12);
         assert!((Rule::Sixths.guaranteed_margin() - 2.5).abs() < 1e-12);

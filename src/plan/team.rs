@@ -5,7 +5,8 @@ use super::error::{InputError, check_range, fmt_num};
 use super::gas_model::ModelKind;
 use super::mix::Mix;
 use super::rule::Rule;
-use super::units::{Depth, Pressure, Temperature, UnitSystem, Water};
+use super::units::{Depth, Gauge, Pressure, PressureUnit, Temperature, UnitSystem, Water};
+use super::warning::{OVERFILL_SHARE, Supply, Warning};
 
 pub const MIN_DIVERS: usize = 2;
 pub const MAX_DIVERS: usize = 6;
@@ -42,6 +43,9 @@ pub struct DiverInput {
     pub sac_l_per_min: Option<f64>,
     /// An optional stage.
     pub stage: Option<StageInput>,
+    /// The gauge this diver reads (unit and graduation); `None` follows the team's
+    /// units and gauge step.
+    pub gauge: Option<Gauge>,
 }
 
 /// A team's inputs.
@@ -49,7 +53,7 @@ pub struct DiverInput {
 pub struct TeamInput {
     pub units: UnitSystem,
     pub rule: Rule,
-    /// Gauge step the team reads, in the team's pressure unit.
+    /// Gauge step in the team's pressure unit, for divers without a gauge of their own.
     pub gauge_step: f64,
     pub water_temp: Temperature,
     pub depth: Option<Depth>,
@@ -61,7 +65,6 @@ impl TeamInput {
     /// Reject every out-of-range value with an error naming the field.
     pub fn validate(&self) -> Result<(), InputError> {
         let u = self.units;
-        let punit = u.pressure_label();
         if self.divers.len() < MIN_DIVERS || self.divers.len() > MAX_DIVERS {
             return Err(InputError::new(
                 "divers",
@@ -71,17 +74,7 @@ impl TeamInput {
                 ),
             ));
         }
-        let max_step = match u {
-            UnitSystem::Metric => 50.0,
-            UnitSystem::Imperial => 500.0,
-        };
-        if !(self.gauge_step.is_finite() && self.gauge_step > 0.0) {
-            return Err(InputError::new(
-                "gauge_step",
-                format!("must be above 0 {punit}; allowed up to {max_step} {punit}"),
-            ));
-        }
-        check_range("gauge_step", self.gauge_step, 0.0, max_step, punit)?;
+        validate_step("gauge_step", u.pressure_unit(), self.gauge_step)?;
         let (tlo, thi) = (
             u.temperature_value(Temperature::from_celsius(-2.0)),
             u.temperature_value(Temperature::from_celsius(40.0)),
@@ -105,7 +98,10 @@ impl TeamInput {
             check_range("depth", v, 0.0, hi, u.depth_label())?;
         }
         for (i, d) in self.divers.iter().enumerate() {
-            validate_diver(u, i, d)?;
+            if let Some(g) = d.gauge {
+                validate_step(&format!("divers[{i}].gauge.step"), g.unit, g.step)?;
+            }
+            validate_diver(u, self.gauge_of(i), i, d)?;
             if self.divers[..i]
                 .iter()
                 .any(|o| o.name.trim() == d.name.trim())
@@ -122,57 +118,102 @@ impl TeamInput {
         Ok(())
     }
 
-    /// Non-fatal observations about the inputs.
-    pub fn warnings(&self) -> Vec<String> {
+    /// The team's default gauge: its unit system's pressure unit and `gauge_step`.
+    pub fn default_gauge(&self) -> Gauge {
+        Gauge {
+            unit: self.units.pressure_unit(),
+            step: self.gauge_step,
+        }
+    }
+
+    /// The gauge diver `i` reads: their own, or the team's default.
+    pub fn gauge_of(&self, i: usize) -> Gauge {
+        self.divers
+            .get(i)
+            .and_then(|d| d.gauge)
+            .unwrap_or_else(|| self.default_gauge())
+    }
+
+    /// Non-fatal observations about the inputs, in each diver's own gauge unit.
+    pub fn warnings(&self) -> Vec<Warning> {
         let mut w = Vec::new();
         if !self.rule.fit_for_overhead() {
-            w.push(
-                "Halves is an open-water rule; it leaves no reserve for a teammate in an overhead environment."
-                    .to_string(),
-            );
+            w.push(Warning::HalvesInOverhead);
         }
-        if self.divers.iter().filter(|d| d.stage.is_some()).count() == 1 {
-            w.push(
-                "Only one diver carries a stage: it is planned on its own, with no teammate's stage to match."
-                    .to_string(),
-            );
+        let with_stage: Vec<usize> = (0..self.divers.len())
+            .filter(|&i| self.divers[i].stage.is_some())
+            .collect();
+        if let [only] = with_stage[..] {
+            w.push(Warning::LoneStage { diver: only });
         }
-        for d in &self.divers {
+        for (i, d) in self.divers.iter().enumerate() {
+            let g = self.gauge_of(i);
+            fill_warning(
+                &mut w,
+                i,
+                Supply::Main,
+                g,
+                d.start,
+                d.cylinders.working_pressure(),
+            );
             if let Some(st) = &d.stage {
-                let swp = st.cylinders.working_pressure();
-                if st.start.bar() > swp.bar() * 1.000_001 {
-                    w.push(format!(
-                        "{}: stage start {} {} is above its working pressure {} {}.",
-                        d.name,
-                        fmt_num(self.units.pressure_value(st.start).round()),
-                        self.units.pressure_label(),
-                        fmt_num(self.units.pressure_value(swp).round()),
-                        self.units.pressure_label()
-                    ));
-                }
-            }
-            let wp = d.cylinders.working_pressure();
-            let u = self.units;
-            if d.start.bar() > wp.bar() * 1.000_001 {
-                w.push(format!(
-                    "{}: start {} {} is above the working pressure {} {}; check the fill and the cylinder's rating.",
-                    d.name,
-                    fmt_num(u.pressure_value(d.start).round()),
-                    u.pressure_label(),
-                    fmt_num(u.pressure_value(wp).round()),
-                    u.pressure_label()
-                ));
-            } else if d.start.bar() < wp.bar() * LOW_FILL_RATIO {
-                w.push(format!(
-                    "{}: start {} {} is under half the working pressure; a low fill leaves little to share.",
-                    d.name,
-                    fmt_num(u.pressure_value(d.start).round()),
-                    u.pressure_label()
-                ));
+                fill_warning(
+                    &mut w,
+                    i,
+                    Supply::Stage,
+                    g,
+                    st.start,
+                    st.cylinders.working_pressure(),
+                );
             }
         }
         w
     }
+}
+
+/// A start compared with the working pressure on the diver's own gauge: above it by more
+/// than half a graduation, an overfill of more than 10 %, or under half of it.
+fn fill_warning(
+    out: &mut Vec<Warning>,
+    diver: usize,
+    supply: Supply,
+    g: Gauge,
+    start: Pressure,
+    working: Pressure,
+) {
+    let (s, wp) = (g.value(start), g.value(working));
+    // Shown figures: the start rounded down, the working pressure to the nearest unit.
+    let (start, working, unit) = ((s + 1e-9).floor(), wp.round(), g.unit);
+    if s > wp * (1.0 + OVERFILL_SHARE) + 1e-9 {
+        out.push(Warning::Overfill {
+            diver,
+            supply,
+            start,
+            working,
+            unit,
+        });
+    } else if s > wp + g.step / 2.0 + 1e-9 {
+        out.push(Warning::AboveWorking {
+            diver,
+            supply,
+            start,
+            working,
+            unit,
+        });
+    } else if s < wp * LOW_FILL_RATIO {
+        out.push(Warning::LowFill {
+            diver,
+            supply,
+            start,
+            unit,
+        });
+    }
+}
+
+/// A graduation within its unit's range (1 to 50 bar, 10 to 500 psi).
+pub fn validate_step(field: &str, unit: PressureUnit, step: f64) -> Result<(), InputError> {
+    let (lo, hi) = unit.step_range();
+    check_range(field, step, lo, hi, unit.label())
 }
 
 pub(crate) fn validate_cylinders(
@@ -265,6 +306,7 @@ pub(crate) fn validate_mix(field: &str, mix: &Mix) -> Result<(), InputError> {
 /// with fields named under `prefix`.
 fn validate_supply(
     u: UnitSystem,
+    g: Gauge,
     prefix: &str,
     cylinders: &CylinderSet,
     mix: &Mix,
@@ -273,14 +315,14 @@ fn validate_supply(
     validate_cylinders(u, &format!("{prefix}.cylinders"), cylinders)?;
     validate_mix(&format!("{prefix}.mix"), mix)?;
     validate_start(
-        u,
+        g,
         &format!("{prefix}.start"),
         start,
         cylinders.working_pressure(),
     )
 }
 
-fn validate_diver(u: UnitSystem, i: usize, d: &DiverInput) -> Result<(), InputError> {
+fn validate_diver(u: UnitSystem, g: Gauge, i: usize, d: &DiverInput) -> Result<(), InputError> {
     let f = format!("divers[{i}]");
     let name = d.name.trim();
     if name.is_empty() || name.chars().count() > 24 {
@@ -289,9 +331,16 @@ fn validate_diver(u: UnitSystem, i: usize, d: &DiverInput) -> Result<(), InputEr
             "a name of 1 to 24 characters is needed",
         ));
     }
-    validate_supply(u, &f, &d.cylinders, &d.mix, d.start)?;
+    validate_supply(u, g, &f, &d.cylinders, &d.mix, d.start)?;
     if let Some(st) = &d.stage {
-        validate_supply(u, &format!("{f}.stage"), &st.cylinders, &st.mix, st.start)?;
+        validate_supply(
+            u,
+            g,
+            &format!("{f}.stage"),
+            &st.cylinders,
+            &st.mix,
+            st.start,
+        )?;
     }
     if let Some(sac) = d.sac_l_per_min {
         let (v, lo, hi) = match u {
@@ -309,24 +358,26 @@ fn validate_diver(u: UnitSystem, i: usize, d: &DiverInput) -> Result<(), InputEr
     Ok(())
 }
 
-/// Check a start pressure against zero, 400 bar and 1.5× the working pressure.
+/// Check a start pressure, read on gauge `g`: at least one graduation, at most 400 bar
+/// and 1.5 × the working pressure.
 pub fn validate_start(
-    u: UnitSystem,
+    g: Gauge,
     field: &str,
     start: Pressure,
     working: Pressure,
 ) -> Result<(), InputError> {
-    let unit = u.pressure_label();
-    let v = u.pressure_value(start);
+    let unit = g.label();
+    let v = g.value(start);
     if !v.is_finite() {
         return Err(InputError::new(field, "must be a number"));
     }
-    if start.bar() <= 0.0 {
+    if v < g.step - 1e-9 {
         return Err(InputError::new(
             field,
             format!(
-                "{} {unit} is not a fill; the start pressure must be above 0",
-                fmt_num(v)
+                "{} {unit} is not a fill; a start pressure is at least one graduation ({} {unit})",
+                fmt_num((v * 100.0).floor() / 100.0),
+                fmt_num(g.step)
             ),
         ));
     }
@@ -337,7 +388,7 @@ pub fn validate_start(
             format!(
                 "{} {unit} is above 1.5 × the working pressure ({} {unit})",
                 fmt_num(v.round()),
-                fmt_num(u.pressure_value(Pressure::from_bar(cap)).floor())
+                fmt_num(g.value(Pressure::from_bar(cap)).floor())
             ),
         ));
     }
@@ -347,7 +398,7 @@ pub fn validate_start(
             format!(
                 "{} {unit} is above the highest pressure planned for ({} {unit})",
                 fmt_num(v.round()),
-                fmt_num(u.pressure_value(Pressure::from_bar(MAX_START_BAR)).floor())
+                fmt_num(g.value(Pressure::from_bar(MAX_START_BAR)).floor())
             ),
         ));
     }

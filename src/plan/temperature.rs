@@ -36,7 +36,7 @@ mod tests {
 
     #[test]
     fn warm_fill_cools_in_the_water() {
-        // Domain notes (CoolProp): air filled to 232 bar at 35 °C, cooled to 12 °C → about 207 bar;
+        // CoolProp 8.0.0 (HEOS): air filled to 232 bar at 35 °C, cooled to 12 °C → about 207 bar;
         // ideal says about 215.
         let c = pressure_after_temperature_change(
             Mix::AIR,

@@ -105,6 +105,7 @@ impl TeamController {
                 start,
                 sac_l_per_min: None,
                 stage: None,
+                gauge: None,
             })
         })?;
         self.labels.push(label.to_string());

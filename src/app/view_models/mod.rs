@@ -7,7 +7,7 @@
 //! `settings.rs` and `keypad.rs`.
 
 use crate::plan::error::fmt_num;
-use crate::plan::{Depth, Pressure, Rule, Temperature, UnitSystem, Volume};
+use crate::plan::{Depth, Gauge, Pressure, Rule, Temperature, UnitSystem, Volume};
 
 use super::team_controller::step_options;
 
@@ -56,6 +56,11 @@ pub fn turn_text(value: f64) -> String {
 /// A start pressure as read: rounded down.
 pub fn start_text(u: UnitSystem, p: Pressure) -> String {
     format!("{}", whole_down(u.pressure_value(p)) as i64)
+}
+
+/// A pressure as read on a diver's gauge: rounded down, in the gauge's unit.
+pub fn reading(g: Gauge, p: Pressure) -> String {
+    format!("{}", whole_down(g.value(p)) as i64)
 }
 
 /// A pressure rounded down, with its unit: "232 bar".

@@ -53,7 +53,7 @@ pub struct DiverCardVm {
 pub fn diver_cards(s: &Session) -> Vec<DiverCardVm> {
     let input = s.team.input();
     let u = input.units;
-    let warnings = s.team.plan().warnings.clone();
+    let warnings = &s.team.plan().warnings;
     input
         .divers
         .iter()
@@ -70,8 +70,8 @@ pub fn diver_cards(s: &Session) -> Vec<DiverCardVm> {
             },
             error: warnings
                 .iter()
-                .filter(|w| w.starts_with(&format!("{}:", d.name)))
-                .map(|w| w[d.name.len() + 1..].trim().to_string())
+                .filter(|w| w.diver() == Some(i))
+                .map(|w| w.detail())
                 .collect::<Vec<_>>()
                 .join(" "),
             has_stage: d.stage.is_some(),

@@ -139,7 +139,7 @@ pub fn first_text(s: &Session) -> String {
 
 /// The plan's warnings, one sentence each.
 pub fn warnings(s: &Session) -> Vec<String> {
-    s.team.plan().warnings.clone()
+    s.team.plan().warning_texts()
 }
 
 /// The team's pressure unit: "bar" or "psi".

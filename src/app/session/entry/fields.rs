@@ -7,7 +7,7 @@ use crate::app::keypad::KeypadBuffer;
 use crate::app::view_models as vm;
 use crate::plan::error::{InputError, check_range, fmt_num};
 use crate::plan::team::validate_start;
-use crate::plan::{Pressure, Temperature, UnitSystem, Volume};
+use crate::plan::{Pressure, PressureUnit, Temperature, UnitSystem, Volume};
 
 use super::super::Session;
 use super::{Field, Typed, apply, check, no_check};
@@ -37,36 +37,38 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
     Some(match target {
         EntryTarget::Start(i) => {
             let d = input.divers.get(i)?;
+            let g = input.gauge_of(i);
             Field {
-                buffer: KeypadBuffer::digits(&vm::start_text(u, d.start), false),
+                buffer: KeypadBuffer::digits(&vm::reading(g, d.start), false),
                 title: format!(
                     "Start pressure for {} ({}), read in the water",
                     d.name,
                     s.team.labels()[i]
                 ),
-                unit: u.pressure_label().to_string(),
+                unit: g.label().to_string(),
                 live: true,
-                step: Some(input.gauge_step),
+                step: Some(g.step),
                 check: check(move |s, t| {
                     let v = t.number("start", "enter the pressure read in the water")?;
                     let working = s.team.input().divers[i].cylinders.working_pressure();
-                    validate_start(u, "start", u.pressure(v), working)
+                    validate_start(g, "start", g.pressure(v), working)
                 }),
-                apply: apply(move |s, t| s.team.set_start(i, pressure(u, t)?)),
+                apply: apply(move |s, t| s.team.set_start(i, pressure(g.unit, t)?)),
                 on_done: None,
             }
         }
         EntryTarget::StageStart(i) => {
             let d = input.divers.get(i)?;
             let st = d.stage.as_ref()?;
+            let g = input.gauge_of(i);
             Field {
-                buffer: KeypadBuffer::digits(&vm::start_text(u, st.start), false),
+                buffer: KeypadBuffer::digits(&vm::reading(g, st.start), false),
                 title: format!(
                     "Stage pressure for {} ({}), read in the water",
                     d.name,
                     s.team.stage_labels()[i]
                 ),
-                unit: u.pressure_label().to_string(),
+                unit: g.label().to_string(),
                 live: true,
                 step: None,
                 check: check(move |s, t| {
@@ -76,9 +78,9 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                         return Err(InputError::new("stage", "this diver carries no stage"));
                     };
                     let working = st.cylinders.working_pressure();
-                    validate_start(u, "stage start", u.pressure(v), working)
+                    validate_start(g, "stage start", g.pressure(v), working)
                 }),
-                apply: apply(move |s, t| s.team.set_stage_start(i, pressure(u, t)?)),
+                apply: apply(move |s, t| s.team.set_stage_start(i, pressure(g.unit, t)?)),
                 on_done: None,
             }
         }
@@ -248,7 +250,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                 check_range("fill pressure", v, 1.0, max, u.pressure_label())
             }),
             apply: apply(move |s, t| {
-                s.fill.pressure = pressure(u, t)?;
+                s.fill.pressure = pressure(u.pressure_unit(), t)?;
                 Ok(())
             }),
             on_done: None,
@@ -274,9 +276,9 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
     })
 }
 
-/// The typed pressure, in the team's unit.
-fn pressure(u: UnitSystem, t: Typed) -> Result<Pressure, InputError> {
-    Ok(u.pressure(t.number("pressure", "enter a pressure")?))
+/// The typed pressure, read in `unit`.
+fn pressure(unit: PressureUnit, t: Typed) -> Result<Pressure, InputError> {
+    Ok(unit.pressure(t.number("pressure", "enter a pressure")?))
 }
 
 /// The typed temperature, in the team's unit.

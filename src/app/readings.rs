@@ -1,0 +1,247 @@
+//! Whether each diver's start pressure is a reading taken in the water today.
+//!
+//! A turn pressure is only as good as its start. A start nobody read, one typed on an
+//! earlier day or more than three hours ago, or one taken from a fill prediction must
+//! never look like a fresh gauge reading. The team's plan still needs a number for every
+//! start, so the team keeps one; this record says what that number is worth, and the
+//! views show turns only when every start is fresh (a prediction is shown, marked).
+
+use chrono::{DateTime, Local, TimeZone};
+use serde::{Deserialize, Serialize};
+
+/// Where a start came from.
+#[derive(Clone, Copy, Debug, PartialEq, Eq, Serialize, Deserialize)]
+#[serde(rename_all = "lowercase")]
+pub enum Source {
+    /// Read on the diver's gauge (typed, or confirmed as still reading that).
+    Gauge,
+    /// Predicted from a warm fill on the fill-to-water page.
+    Prediction,
+}
+
+/// One diver's start: when it was entered and from where.
+#[derive(Clone, Copy, Debug, PartialEq, Eq, Serialize, Deserialize)]
+pub struct StartReading {
+    /// Unix time, seconds.
+    pub at: i64,
+    /// Gauge or prediction.
+    pub source: Source,
+}
+
+/// What a start is worth right now.
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+pub enum StartStatus {
+    /// Nobody has entered a start for this diver.
+    Missing,
+    /// Read on the gauge today, within the last three hours.
+    Fresh,
+    /// Predicted from a fill, today, within the last three hours: usable, marked.
+    Predicted,
+    /// Entered at `at`, on an earlier day or more than three hours ago: check it.
+    Old {
+        /// Unix time, seconds.
+        at: i64,
+    },
+}
+
+impl StartStatus {
+    /// Whether turns may be computed from this start.
+    pub fn usable(self) -> bool {
+        matches!(self, StartStatus::Fresh | StartStatus::Predicted)
+    }
+}
+
+/// How long a start stays fresh on the same day (seconds).
+pub const FRESH_FOR_S: i64 = 3 * 3600;
+
+/// The starts of a team, one entry per diver in team order.
+#[derive(Clone, Debug, Default, PartialEq)]
+pub struct Readings {
+    starts: Vec<Option<StartReading>>,
+}
+
+impl Readings {
+    /// `n` divers, none read.
+    pub fn unread(n: usize) -> Self {
+        Readings {
+            starts: vec![None; n],
+        }
+    }
+
+    /// From what was saved, fitted to `n` divers (missing entries are unread).
+    pub fn from_saved(saved: &[Option<StartReading>], n: usize) -> Self {
+        let mut starts = saved.to_vec();
+        starts.resize(n, None);
+        Readings { starts }
+    }
+
+    /// What to save.
+    pub fn saved(&self) -> &[Option<StartReading>] {
+        &self.starts
+    }
+
+    /// Diver `i`'s start was just entered (or confirmed) from `source`.
+    pub fn mark(&mut self, i: usize, now: i64, source: Source) {
+        if let Some(s) = self.starts.get_mut(i) {
+            *s = Some(StartReading { at: now, source });
+        }
+    }
+
+    /// Diver `i`'s start is no longer a reading (for example: the gauge changed unit).
+    pub fn clear(&mut self, i: usize) {
+        if let Some(s) = self.starts.get_mut(i) {
+            *s = None;
+        }
+    }
+
+    /// A diver was added at the end, unread.
+    pub fn push_unread(&mut self) {
+        self.starts.push(None);
+    }
+
+    /// Diver `i` was removed.
+    pub fn remove(&mut self, i: usize) {
+        if i < self.starts.len() {
+            self.starts.remove(i);
+        }
+    }
+
+    /// Put a removed diver's record back at `i` (undo).
+    pub fn insert(&mut self, i: usize, r: Option<StartReading>) {
+        let i = i.min(self.starts.len());
+        self.starts.insert(i, r);
+    }
+
+    /// Diver `i`'s record.
+    pub fn get(&self, i: usize) -> Option<StartReading> {
+        self.starts.get(i).copied().flatten()
+    }
+
+    /// Diver `i`'s status at `now` (unix seconds), judged on the local calendar.
+    pub fn status(&self, i: usize, now: i64) -> StartStatus {
+        status_in(&Local, self.get(i), now)
+    }
+
+    /// Whether every start may make turns at `now`.
+    pub fn all_usable(&self, now: i64) -> bool {
+        (0..self.starts.len()).all(|i| self.status(i, now).usable())
+    }
+
+    /// The divers whose start stops the turns at `now`, in team order.
+    pub fn blocking(&self, now: i64) -> Vec<usize> {
+        (0..self.starts.len())
+            .filter(|&i| !self.status(i, now).usable())
+            .collect()
+    }
+}
+
+/// The status of one record at `now` in time zone `tz`: fresh only on the same local
+/// calendar day and within three hours.
+pub fn status_in<Tz: TimeZone>(tz: &Tz, r: Option<StartReading>, now: i64) -> StartStatus {
+    let Some(r) = r else {
+        return StartStatus::Missing;
+    };
+    let day = |t: i64| {
+        tz.timestamp_opt(t, 0)
+            .single()
+            .map(|d: DateTime<Tz>| d.date_naive())
+    };
+    let same_day = matches!((day(r.at), day(now)), (Some(a), Some(b)) if a == b);
+    let age = now - r.at;
+    if !same_day || !(0..=FRESH_FOR_S).contains(&age) {
+        return StartStatus::Old { at: r.at };
+    }
+    match r.source {
+        Source::Gauge => StartStatus::Fresh,
+        Source::Prediction => StartStatus::Predicted,
+    }
+}
+
+/// "today 09:40", "yesterday 18:05" or "3 Dec 18:05": when an old start was entered.
+pub fn when_text(at: i64, now: i64) -> String {
+    let (Some(t), Some(n)) = (
+        Local.timestamp_opt(at, 0).single(),
+        Local.timestamp_opt(now, 0).single(),
+    ) else {
+        return "at an unknown time".to_string();
+    };
+    let days = (n.date_naive() - t.date_naive()).num_days();
+    match days {
+        0 => format!("today {}", t.format("%H:%M")),
+        1 => format!("yesterday {}", t.format("%H:%M")),
+        _ => t.format("%-d %b %H:%M").to_string(),
+    }
+}
+
+/// Now, unix seconds.
+pub fn now() -> i64 {
+    std::time::SystemTime::now()
+        .duration_since(std::time::UNIX_EPOCH)
+        .map(|d| d.as_secs() as i64)
+        .unwrap_or(0)
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use chrono::FixedOffset;
+
+    fn at(h: u32, m: u32, day: u32) -> i64 {
+        FixedOffset::east_opt(3600)
+            .unwrap()
+            .with_ymd_and_hms(2026, 12, day, h, m, 0)
+            .unwrap()
+            .timestamp()
+    }
+
+    #[test]
+    fn fresh_only_the_same_day_and_within_three_hours() {
+        let tz = FixedOffset::east_opt(3600).unwrap();
+        let r = |t, source| Some(StartReading { at: t, source });
+        assert_eq!(status_in(&tz, None, at(9, 0, 2)), StartStatus::Missing);
+        let read = r(at(9, 0, 2), Source::Gauge);
+        assert_eq!(status_in(&tz, read, at(11, 59, 2)), StartStatus::Fresh);
+        assert_eq!(
+            status_in(&tz, read, at(12, 1, 2)),
+            StartStatus::Old { at: at(9, 0, 2) }
+        );
+        // Late evening, read again after midnight: a new day.
+        let late = r(at(23, 30, 2), Source::Gauge);
+        assert!(matches!(
+            status_in(&tz, late, at(0, 15, 3)),
+            StartStatus::Old { .. }
+        ));
+        let predicted = r(at(9, 0, 2), Source::Prediction);
+        assert_eq!(
+            status_in(&tz, predicted, at(9, 30, 2)),
+            StartStatus::Predicted
+        );
+        assert!(StartStatus::Predicted.usable() && !StartStatus::Missing.usable());
+        // A clock set back before the entry is not fresh either.
+        assert!(matches!(
+            status_in(&tz, read, at(8, 0, 2)),
+            StartStatus::Old { .. }
+        ));
+    }
+
+    #[test]
+    fn records_follow_the_divers() {
+        let mut r = Readings::unread(2);
+        let now = super::now();
+        assert_eq!(r.blocking(now), vec![0, 1]);
+        r.mark(0, now, Source::Gauge);
+        r.mark(1, now, Source::Prediction);
+        assert!(r.all_usable(now));
+        r.push_unread();
+        assert_eq!(r.blocking(now), vec![2]);
+        let removed = r.get(0);
+        r.remove(0);
+        assert_eq!(r.status(0, now), StartStatus::Predicted);
+        r.insert(0, removed);
+        assert_eq!(r.status(0, now), StartStatus::Fresh);
+        r.clear(0);
+        assert_eq!(r.status(0, now), StartStatus::Missing);
+        let back = Readings::from_saved(r.saved(), 4);
+        assert_eq!(back.blocking(now), vec![0, 2, 3]);
+    }
+}

@@ -1,0 +1,67 @@
+//! `turnsheet card TEAM.json [-o card.svg] [--charts]`: the printable team card.
+
+use std::path::{Path, PathBuf};
+
+use crate::formats::card_svg::{CardHeading, card_svg};
+use crate::plan::chart::team_charts;
+use crate::plan::error::InputError;
+use crate::plan::plan_team;
+
+use super::plan_cmd::read_team;
+
+/// Arguments of `card`.
+#[derive(clap::Args, Debug)]
+pub struct CardArgs {
+    /// The team file (JSON), as for `plan`.
+    pub team: PathBuf,
+    /// Write the SVG here instead of standard output.
+    #[arg(short = 'o', long = "output")]
+    pub output: Option<PathBuf>,
+    /// Add each diver's pairing charts against every teammate, one page each.
+    #[arg(long)]
+    pub charts: bool,
+    /// The dive's name, printed on top.
+    #[arg(long)]
+    pub dive: Option<String>,
+    /// The date, printed on top as written.
+    #[arg(long)]
+    pub date: Option<String>,
+}
+
+/// The card's SVG text for a team file.
+pub fn card_text(args: &CardArgs) -> Result<String, InputError> {
+    let team = read_team(&args.team)?;
+    let plan = plan_team(&team)?;
+    let charts = if args.charts {
+        team_charts(&team, 2, 7)?
+    } else {
+        Vec::new()
+    };
+    for (flag, v) in [("--dive", &args.dive), ("--date", &args.date)] {
+        if v.as_ref().is_some_and(|s| s.chars().count() > 40) {
+            return Err(InputError::new(flag, "at most 40 characters"));
+        }
+    }
+    let heading = CardHeading {
+        dive: args.dive.clone(),
+        date: args.date.clone(),
+    };
+    Ok(card_svg(&heading, &team, &plan, &charts))
+}
+
+/// Run `card`: the SVG to standard output, or to the file with a line saying where.
+pub fn run(args: &CardArgs) -> Result<String, InputError> {
+    let svg = card_text(args)?;
+    match &args.output {
+        None => Ok(svg),
+        Some(path) => {
+            write(path, &svg)?;
+            Ok(format!("card written to {}\n", path.display()))
+        }
+    }
+}
+
+fn write(path: &Path, text: &str) -> Result<(), InputError> {
+    std::fs::write(path, text)
+        .map_err(|e| InputError::new("--output", format!("cannot write {}: {e}", path.display())))
+}

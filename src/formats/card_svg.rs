@@ -1,0 +1,384 @@
+//! The team card: one page for wet notes (100 × 150 mm), as SVG text. Black on white,
+//! large turn figures, no colour needed to read it. Optional following pages carry each
+//! diver's pairing charts. No I/O here: the caller writes the text.
+
+use crate::plan::chart::PairChart;
+use crate::plan::error::fmt_num;
+use crate::plan::out_of_gas::margin_for_display;
+use crate::plan::{TeamInput, TeamPlan};
+
+/// Page size in millimetres.
+pub const PAGE_W: f64 = 100.0;
+/// Page height in millimetres.
+pub const PAGE_H: f64 = 150.0;
+/// Font families, with fallbacks, so a browser and a print tool pick the same kind of face.
+pub const FONT: &str = "Roboto, 'Liberation Sans', Arial, Helvetica, sans-serif";
+const MARGIN: f64 = 5.0;
+
+/// What goes on top of the card besides the plan.
+#[derive(Clone, Debug, Default)]
+pub struct CardHeading {
+    /// The dive's name, if given.
+    pub dive: Option<String>,
+    /// The date, as the user wrote it, if given.
+    pub date: Option<String>,
+}
+
+/// Escape text for XML.
+pub fn xml_escape(s: &str) -> String {
+    let mut out = String::with_capacity(s.len());
+    for c in s.chars() {
+        match c {
+            '&' => out.push_str("&amp;"),
+            '<' => out.push_str("&lt;"),
+            '>' => out.push_str("&gt;"),
+            '"' => out.push_str("&quot;"),
+            '\'' => out.push_str("&apos;"),
+            c if (c as u32) < 0x20 && c != '\n' && c != '\t' => {}
+            c => out.push(c),
+        }
+    }
+    out
+}
+
+/// Split text into lines of at most `width` characters at spaces.
+pub fn wrap(text: &str, width: usize) -> Vec<String> {
+    let mut lines = Vec::new();
+    let mut line = String::new();
+    for word in text.split_whitespace() {
+        if !line.is_empty() && line.chars().count() + 1 + word.chars().count() > width {
+            lines.push(std::mem::take(&mut line));
+        }
+        if !line.is_empty() {
+            line.push(' ');
+        }
+        line.push_str(word);
+    }
+    if !line.is_empty() {
+        lines.push(line);
+    }
+    lines
+}
+
+struct Page {
+    body: String,
+}
+
+impl Page {
+    fn new() -> Self {
+        Page {
+            body: String::new(),
+        }
+    }
+    /// Text at (x, y) mm, size in mm; `anchor` start/middle/end.
+    fn text(&mut self, x: f64, y: f64, size: f64, bold: bool, anchor: &str, s: &str) {
+        self.body.push_str(&format!(
+            "<text x=\"{x:.2}\" y=\"{y:.2}\" font-size=\"{size:.2}\"{}{} >{}</text>\n",
+            if bold { " font-weight=\"bold\"" } else { "" },
+            if anchor == "start" {
+                String::new()
+            } else {
+                format!(" text-anchor=\"{anchor}\"")
+            },
+            xml_escape(s)
+        ));
+    }
+    fn line(&mut self, x1: f64, y1: f64, x2: f64, y2: f64, width: f64) {
+        self.body.push_str(&format!(
+            "<line x1=\"{x1:.2}\" y1=\"{y1:.2}\" x2=\"{x2:.2}\" y2=\"{y2:.2}\" stroke=\"#000\" stroke-width=\"{width:.2}\"/>\n"
+        ));
+    }
+    fn rect(&mut self, x: f64, y: f64, w: f64, h: f64, width: f64) {
+        self.body.push_str(&format!(
+            "<rect x=\"{x:.2}\" y=\"{y:.2}\" width=\"{w:.2}\" height=\"{h:.2}\" fill=\"none\" stroke=\"#000\" stroke-width=\"{width:.2}\"/>\n"
+        ));
+    }
+}
+
+/// The card page for a planned team.
+fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
+    let u = team.units;
+    let mut p = Page::new();
+    let right = PAGE_W - MARGIN;
+    let mut y = MARGIN + 5.0;
+    let title = heading
+        .dive
+        .clone()
+        .unwrap_or_else(|| "Team turn pressures".to_string());
+    let title: String = if title.chars().count() > 34 {
+        title.chars().take(33).collect::<String>() + "…"
+    } else {
+        title
+    };
+    p.text(MARGIN, y, 5.0, true, "start", &title);
+    y += 5.0;
+    if let Some(date) = &heading.date {
+        p.text(right, y, 3.2, true, "end", date);
+    }
+    let depth = team
+        .depth
+        .map(|d| {
+            format!(
+                ", {} {}",
+                fmt_num(match u {
+                    crate::plan::UnitSystem::Metric => d.metres().floor(),
+                    crate::plan::UnitSystem::Imperial => d.feet().floor(),
+                }),
+                u.depth_label()
+            )
+        })
+        .unwrap_or_default();
+    p.text(
+        MARGIN,
+        y,
+        3.2,
+        false,
+        "start",
+        &format!(
+            "Rule of {} · {} water {} {}{depth}",
+            team.rule.name(),
+            match team.water {
+                crate::plan::Water::Fresh => "fresh",
+                crate::plan::Water::Salt => "salt",
+            },
+            fmt_num(u.temperature_value(team.water_temp).floor()),
+            u.temperature_label()
+        ),
+    );
+    y += 2.5;
+    p.line(MARGIN, y, right, y, 0.4);
+
+    let n = plan.divers.len().max(1) as f64;
+    let block = ((PAGE_H - y - 38.0) / n).clamp(15.0, 24.0);
+    for (i, d) in plan.divers.iter().enumerate() {
+        let inp = &team.divers[i];
+        let g = d.gauge;
+        let top = y + block * i as f64;
+        let mut name = d.name.clone();
+        if d.controlling {
+            name.push_str(" (controls)");
+        }
+        p.text(MARGIN, top + 4.5, 3.8, true, "start", &name);
+        p.text(
+            MARGIN,
+            top + 8.3,
+            2.8,
+            false,
+            "start",
+            &format!("{} · {}", inp.cylinders.describe(), inp.mix.label()),
+        );
+        p.text(
+            MARGIN,
+            top + 11.8,
+            2.8,
+            false,
+            "start",
+            &format!(
+                "start {} {}",
+                fmt_num((g.value(d.start) + 1e-9).floor()),
+                g.label()
+            ),
+        );
+        p.text(right - 38.0, top + 4.3, 2.6, false, "end", "TURN");
+        p.text(
+            right,
+            top + 10.5,
+            8.5,
+            true,
+            "end",
+            &format!("{} {}", fmt_num(d.turn_shown_value), g.label()),
+        );
+        if let (Some(st), Some(si)) = (&d.stage, &inp.stage) {
+            p.text(
+                MARGIN,
+                top + 15.3,
+                2.8,
+                true,
+                "start",
+                &format!(
+                    "drop stage at {} {u} ({}, {}, start {} {u})",
+                    fmt_num(st.drop_shown_value),
+                    si.cylinders.describe(),
+                    si.mix.label(),
+                    fmt_num((g.value(st.start) + 1e-9).floor()),
+                    u = g.label()
+                ),
+            );
+        }
+        p.line(MARGIN, top + block, right, top + block, 0.2);
+    }
+    let mut y = y + block * n + 4.0;
+    let c = plan.controlling_diver();
+    let mut notes = vec![format!(
+        "{} controls: least usable gas, so {} allowance sets everyone's turn. Each diver may use {} {vu} going in (real gas; {} {vu} by hand).",
+        c.name,
+        if c.name.ends_with('s') {
+            format!("{}'", c.name)
+        } else {
+            format!("{}'s", c.name)
+        },
+        fmt_num(u.volume_value(plan.team_allowance_real).floor()),
+        fmt_num(u.volume_value(plan.team_allowance_hand).floor()),
+        vu = u.volume_label()
+    )];
+    if plan.stress.margin.is_finite() {
+        notes.push(format!(
+            "Out of gas at the turn: the worst pair's reserve covers both exits at up to {}× normal breathing.",
+            fmt_num(margin_for_display(plan.stress.margin))
+        ));
+    }
+    notes.push("Turn when the FIRST diver reaches their turn, or at any other limit.".to_string());
+    for note in notes {
+        for line in wrap(&note, 68) {
+            p.text(MARGIN, y, 2.6, false, "start", &line);
+            y += 3.3;
+        }
+        y += 0.8;
+    }
+    let caution = "Planning aid for trained divers. Team protocol, training and site rules come first. Check by hand.";
+    let mut cy = PAGE_H - MARGIN - 3.3 * wrap(caution, 72).len() as f64 + 2.5;
+    p.line(MARGIN, cy - 3.2, right, cy - 3.2, 0.3);
+    for line in wrap(caution, 72) {
+        p.text(MARGIN, cy, 2.4, false, "start", &line);
+        cy += 3.3;
+    }
+    p
+}
+
+/// One pairing chart page: rows my start, columns the buddy's, cells my turn, each on its
+/// own gauge; the planned cell boxed.
+fn chart_page(team: &TeamInput, chart: &PairChart) -> Page {
+    let mut p = Page::new();
+    let me = &team.divers[chart.me];
+    let buddy = &team.divers[chart.buddy];
+    let (mu, bu) = (chart.my_gauge.label(), chart.buddy_gauge.label());
+    let mut y = MARGIN + 5.0;
+    p.text(
+        MARGIN,
+        y,
+        4.2,
+        true,
+        "start",
+        &format!("{}: turn against {}", me.name, buddy.name),
+    );
+    y += 4.5;
+    for line in wrap(
+        &format!(
+            "Rows: {}'s start ({mu}). Columns: {}'s start ({bu}). Cells: {}'s turn ({mu}). \
+             Between lines, read the next higher own start and the next lower teammate start; \
+             with more teammates keep the highest turn.",
+            me.name, buddy.name, me.name
+        ),
+        64,
+    ) {
+        p.text(MARGIN, y, 2.5, false, "start", &line);
+        y += 3.1;
+    }
+    y += 1.5;
+    let cols = chart.buddy_starts.len().max(1);
+    let rows = chart.my_starts.len().max(1);
+    let label_w = 11.0;
+    let cell_w = ((PAGE_W - 2.0 * MARGIN - label_w) / cols as f64).min(9.0);
+    let cell_h = ((PAGE_H - y - MARGIN - 6.0) / (rows as f64 + 1.0)).min(6.5);
+    let size = (cell_w * 0.36).min(cell_h * 0.62).min(3.2);
+    let x0 = MARGIN + label_w;
+    p.text(
+        MARGIN,
+        y + cell_h * 0.7,
+        size * 0.9,
+        false,
+        "start",
+        &format!("{mu}\\{bu}"),
+    );
+    for (c, b) in chart.buddy_starts.iter().enumerate() {
+        p.text(
+            x0 + cell_w * (c as f64 + 0.5),
+            y + cell_h * 0.7,
+            size,
+            true,
+            "middle",
+            &fmt_num(*b),
+        );
+    }
+    p.line(
+        MARGIN,
+        y + cell_h,
+        x0 + cell_w * cols as f64,
+        y + cell_h,
+        0.3,
+    );
+    let planned_me = chart.my_gauge.value(me.start);
+    let planned_buddy = chart.buddy_gauge.value(buddy.start);
+    for (r, m) in chart.my_starts.iter().enumerate() {
+        let ry = y + cell_h * (r as f64 + 1.0);
+        p.text(MARGIN, ry + cell_h * 0.7, size, true, "start", &fmt_num(*m));
+        for (c, b) in chart.buddy_starts.iter().enumerate() {
+            let text = chart.turns[r][c].map(fmt_num).unwrap_or_else(|| "-".into());
+            let cx = x0 + cell_w * c as f64;
+            p.text(
+                cx + cell_w * 0.5,
+                ry + cell_h * 0.7,
+                size,
+                false,
+                "middle",
+                &text,
+            );
+            if (m - planned_me).abs() < 1e-6 && (b - planned_buddy).abs() < 1e-6 {
+                p.rect(cx + 0.3, ry + 0.3, cell_w - 0.6, cell_h - 0.6, 0.4);
+            }
+        }
+    }
+    p.line(x0, y, x0, y + cell_h * (rows as f64 + 1.0), 0.3);
+    p.text(
+        MARGIN,
+        PAGE_H - MARGIN,
+        2.3,
+        false,
+        "start",
+        "Boxed: the planned starts. '-': a start the cylinders cannot take. Check by hand.",
+    );
+    p
+}
+
+/// The card as SVG text: the card page, then one page per pairing chart, stacked top to
+/// bottom (each 100 × 150 mm, separated by a cut line).
+pub fn card_svg(
+    heading: &CardHeading,
+    team: &TeamInput,
+    plan: &TeamPlan,
+    charts: &[PairChart],
+) -> String {
+    let mut pages = vec![card_page(heading, team, plan)];
+    pages.extend(charts.iter().map(|c| chart_page(team, c)));
+    let total_h = PAGE_H * pages.len() as f64;
+    let mut s = format!(
+        "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n\
+         <svg xmlns=\"http://www.w3.org/2000/svg\" width=\"{PAGE_W}mm\" height=\"{total_h}mm\" viewBox=\"0 0 {PAGE_W} {total_h}\" font-family=\"{FONT}\" fill=\"#000\">\n\
+         <title>{}</title>\n<rect x=\"0\" y=\"0\" width=\"{PAGE_W}\" height=\"{total_h}\" fill=\"#fff\"/>\n",
+        xml_escape(&format!("Team card: {}", plan.names().join(", ")))
+    );
+    for (k, page) in pages.iter().enumerate() {
+        let dy = PAGE_H * k as f64;
+        if k > 0 {
+            s.push_str(&format!(
+                "<line x1=\"0\" y1=\"{dy}\" x2=\"{PAGE_W}\" y2=\"{dy}\" stroke=\"#000\" stroke-width=\"0.2\" stroke-dasharray=\"2 2\"/>\n"
+            ));
+        }
+        s.push_str(&format!("<g transform=\"translate(0 {dy})\">\n"));
+        s.push_str(&page.body);
+        s.push_str("</g>\n");
+    }
+    s.push_str("</svg>\n");
+    s
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn wraps_at_spaces_and_escapes() {
+        assert_eq!(wrap("aa bb cc dd", 5), vec!["aa bb", "cc dd"]);
+        assert_eq!(xml_escape("A<B & 'C'"), "A&lt;B &amp; &apos;C&apos;");
+    }
+}

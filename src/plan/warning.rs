@@ -1,0 +1,199 @@
+//! Observations about a plan that do not stop it: typed values (which diver, which
+//! kind, the figures), put into words only where they are shown.
+
+use super::error::fmt_num;
+use super::units::PressureUnit;
+
+/// Which of a diver's gas supplies a warning is about.
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+pub enum Supply {
+    /// The main cylinders (back gas).
+    Main,
+    /// The stage.
+    Stage,
+}
+
+impl Supply {
+    fn noun(self) -> &'static str {
+        match self {
+            Supply::Main => "start",
+            Supply::Stage => "stage start",
+        }
+    }
+}
+
+/// One warning, with its figures in the diver's own gauge unit.
+#[derive(Clone, Debug, PartialEq)]
+pub enum Warning {
+    /// The rule of halves was chosen: it keeps no reserve for a teammate.
+    HalvesInOverhead,
+    /// Only one diver carries a stage, so it is matched against nobody.
+    LoneStage {
+        /// The diver with the stage.
+        diver: usize,
+    },
+    /// A start above the working pressure by more than half a graduation, up to 10 %.
+    AboveWorking {
+        /// The diver.
+        diver: usize,
+        /// Main gas or stage.
+        supply: Supply,
+        /// The start, in `unit`.
+        start: f64,
+        /// The working pressure, in `unit`.
+        working: f64,
+        /// The diver's gauge unit.
+        unit: PressureUnit,
+    },
+    /// A start more than 10 % above the working pressure: an overfill.
+    Overfill {
+        /// The diver.
+        diver: usize,
+        /// Main gas or stage.
+        supply: Supply,
+        /// The start, in `unit`.
+        start: f64,
+        /// The working pressure, in `unit`.
+        working: f64,
+        /// The diver's gauge unit.
+        unit: PressureUnit,
+    },
+    /// A start under half the working pressure.
+    LowFill {
+        /// The diver.
+        diver: usize,
+        /// Main gas or stage.
+        supply: Supply,
+        /// The start, in `unit`.
+        start: f64,
+        /// The diver's gauge unit.
+        unit: PressureUnit,
+    },
+    /// The turn, rounded up to the graduation, reaches the start: nothing to spend.
+    TurnEqualsStart {
+        /// The diver.
+        diver: usize,
+    },
+    /// Nobody spends gas before the turn, so the out-of-gas check tests nothing.
+    NoGasSpent,
+}
+
+/// Share over the working pressure beyond which a fill is called an overfill
+/// (common practice: a 10 % overfill mark is stamped on some low-pressure steel).
+pub const OVERFILL_SHARE: f64 = 0.10;
+
+impl Warning {
+    /// The diver the warning is about, if it is about one.
+    pub fn diver(&self) -> Option<usize> {
+        match *self {
+            Warning::HalvesInOverhead | Warning::NoGasSpent => None,
+            Warning::LoneStage { diver }
+            | Warning::AboveWorking { diver, .. }
+            | Warning::Overfill { diver, .. }
+            | Warning::LowFill { diver, .. }
+            | Warning::TurnEqualsStart { diver } => Some(diver),
+        }
+    }
+
+    /// The warning in words, without the diver's name (for a line on that diver's card).
+    pub fn detail(&self) -> String {
+        match *self {
+            Warning::HalvesInOverhead => {
+                "Halves is an open-water rule; it leaves no reserve for a teammate in an overhead environment."
+                    .to_string()
+            }
+            Warning::LoneStage { .. } => {
+                "Only one diver carries a stage: it is planned on its own, with no teammate's stage to match."
+                    .to_string()
+            }
+            Warning::AboveWorking {
+                supply,
+                start,
+                working,
+                unit,
+                ..
+            } => format!(
+                "{} {} {u} is above the working pressure {} {u}; check the fill and the cylinder's rating.",
+                capital(supply.noun()),
+                fmt_num(start),
+                fmt_num(working),
+                u = unit.label()
+            ),
+            Warning::Overfill {
+                supply,
+                start,
+                working,
+                unit,
+                ..
+            } => format!(
+                "Overfill: {} {} {u} is more than 10 % above the working pressure {} {u}. Check the cylinder is rated for it, or do not use it.",
+                supply.noun(),
+                fmt_num(start),
+                fmt_num(working),
+                u = unit.label()
+            ),
+            Warning::LowFill {
+                supply,
+                start,
+                unit,
+                ..
+            } => format!(
+                "{} {} {} is under half the working pressure; a low fill leaves little to share.",
+                capital(supply.noun()),
+                fmt_num(start),
+                unit.label()
+            ),
+            Warning::TurnEqualsStart { .. } => {
+                "The turn equals the start pressure; at this graduation there is no gas to spend."
+                    .to_string()
+            }
+            Warning::NoGasSpent => {
+                "No gas is spent before the turn; the out-of-gas check has nothing to test."
+                    .to_string()
+            }
+        }
+    }
+
+    /// The warning in words, led by the diver's name where it is about one diver.
+    pub fn describe(&self, names: &[String]) -> String {
+        match self.diver().and_then(|i| names.get(i)) {
+            Some(name) => format!("{name}: {}", self.detail()),
+            None => self.detail(),
+        }
+    }
+}
+
+fn capital(s: &str) -> String {
+    let mut c = s.chars();
+    match c.next() {
+        Some(f) => f.to_uppercase().collect::<String>() + c.as_str(),
+        None => String::new(),
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn words_name_the_diver_and_the_unit() {
+        let w = Warning::Overfill {
+            diver: 1,
+            supply: Supply::Stage,
+            start: 3400.0,
+            working: 3000.0,
+            unit: PressureUnit::Psi,
+        };
+        let names = vec!["Ines".to_string(), "Tomas".to_string()];
+        let text = w.describe(&names);
+        assert!(
+            text.starts_with("Tomas: Overfill: stage start 3400 psi"),
+            "{text}"
+        );
+        assert_eq!(w.diver(), Some(1));
+        assert_eq!(
+            Warning::NoGasSpent.describe(&names),
+            Warning::NoGasSpent.detail()
+        );
+    }
+}

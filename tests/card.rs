@@ -1,0 +1,152 @@
+//! The printable team card: valid SVG (parsed as XML), every diver's name and shown turn
+//! in their own unit on it, and a golden rendering (rasterised with resvg using the
+//! app's own Roboto fonts) so layout regressions show.
+//!
+//! To refresh the golden image after an intended layout change:
+//! `TURNSHEET_UPDATE_GOLDEN=1 cargo test --test card`, then look at tests/data/card-demo.png.
+
+use std::path::PathBuf;
+
+use turnsheet::formats::card_svg::{CardHeading, card_svg};
+use turnsheet::formats::team_file::TeamFile;
+use turnsheet::plan::chart::team_charts;
+use turnsheet::plan::error::fmt_num;
+use turnsheet::plan::plan_team;
+
+fn demo() -> turnsheet::plan::TeamInput {
+    TeamFile::parse(include_str!("../examples/hollowmere-team.json"))
+        .unwrap()
+        .to_input()
+        .unwrap()
+}
+
+fn heading() -> CardHeading {
+    CardHeading {
+        dive: Some("Hollowmere spring, upstream".into()),
+        date: Some("2026-12-05".into()),
+    }
+}
+
+fn render(svg: &str, scale: f32) -> resvg::tiny_skia::Pixmap {
+    let mut db = resvg::usvg::fontdb::Database::new();
+    for f in [
+        &include_bytes!("../ui/fonts/Roboto-Regular.ttf")[..],
+        &include_bytes!("../ui/fonts/Roboto-Bold.ttf")[..],
+    ] {
+        db.load_font_data(f.to_vec());
+    }
+    let opt = resvg::usvg::Options {
+        fontdb: std::sync::Arc::new(db),
+        ..Default::default()
+    };
+    let tree = resvg::usvg::Tree::from_str(svg, &opt).expect("card parses as SVG");
+    let size = tree.size();
+    let (w, h) = (
+        (size.width() * scale).ceil() as u32,
+        (size.height() * scale).ceil() as u32,
+    );
+    let mut pixmap = resvg::tiny_skia::Pixmap::new(w, h).unwrap();
+    resvg::render(
+        &tree,
+        resvg::tiny_skia::Transform::from_scale(scale, scale),
+        &mut pixmap.as_mut(),
+    );
+    pixmap
+}
+
+#[test]
+fn card_is_xml_with_every_name_and_turn() {
+    let team = demo();
+    let plan = plan_team(&team).unwrap();
+    let svg = card_svg(&heading(), &team, &plan, &[]);
+    let doc = roxmltree::Document::parse(&svg).expect("well-formed XML");
+    let text: String = doc
+        .descendants()
+        .filter(|n| n.is_text())
+        .filter_map(|n| n.text())
+        .collect::<Vec<_>>()
+        .join("\n");
+    for d in &plan.divers {
+        assert!(text.contains(&d.name), "{} missing", d.name);
+        let turn = format!("{} {}", fmt_num(d.turn_shown_value), d.gauge.label());
+        assert!(text.contains(&turn), "{turn} missing");
+        if let Some(st) = &d.stage {
+            assert!(text.contains(&format!(
+                "drop stage at {} {}",
+                fmt_num(st.drop_shown_value),
+                d.gauge.label()
+            )));
+        }
+    }
+    let c = plan.controlling_diver();
+    assert!(text.contains(&format!("{} controls", c.name)));
+    assert!(text.contains("Check by hand"));
+    assert!(text.contains("Hollowmere spring, upstream"));
+    // 100 × 150 mm page.
+    let root = doc.root_element();
+    assert_eq!(root.attribute("width"), Some("100mm"));
+    assert_eq!(root.attribute("height"), Some("150mm"));
+}
+
+#[test]
+fn charts_add_one_page_per_pairing() {
+    let team = demo();
+    let plan = plan_team(&team).unwrap();
+    let charts = team_charts(&team, 2, 7).unwrap();
+    let svg = card_svg(&heading(), &team, &plan, &charts);
+    let doc = roxmltree::Document::parse(&svg).unwrap();
+    let pages = 1 + charts.len();
+    assert_eq!(
+        doc.root_element().attribute("height"),
+        Some(format!("{}mm", 150 * pages).as_str())
+    );
+    // Every chart cell's turn is printed.
+    let texts: Vec<&str> = doc.descendants().filter_map(|n| n.text()).collect();
+    for c in &charts {
+        for row in &c.turns {
+            for cell in row.iter().flatten() {
+                assert!(texts.contains(&fmt_num(*cell).as_str()));
+            }
+        }
+    }
+    render(&svg, 2.0);
+}
+
+#[test]
+fn demo_card_matches_its_golden_rendering() {
+    let team = demo();
+    let plan = plan_team(&team).unwrap();
+    let svg = card_svg(&heading(), &team, &plan, &[]);
+    // 100 × 150 mm at 96 dpi × 1.5: 567 × 851 px.
+    let pixmap = render(&svg, 1.5);
+    let golden = PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("tests/data/card-demo.png");
+    if std::env::var_os("TURNSHEET_UPDATE_GOLDEN").is_some() {
+        std::fs::create_dir_all(golden.parent().unwrap()).unwrap();
+        pixmap.save_png(&golden).unwrap();
+    }
+    let decoder = png::Decoder::new(std::io::BufReader::new(
+        std::fs::File::open(&golden).expect("golden image exists; see the file's header"),
+    ));
+    let mut reader = decoder.read_info().unwrap();
+    let mut buf = vec![0; reader.output_buffer_size()];
+    let info = reader.next_frame(&mut buf).unwrap();
+    assert_eq!((info.width, info.height), (pixmap.width(), pixmap.height()));
+    let (w, h) = (info.width as usize, info.height as usize);
+    assert_eq!(info.color_type, png::ColorType::Rgba);
+    let ours = pixmap.data();
+    let mut differ = 0usize;
+    let mut ink = 0usize;
+    for px in 0..w * h {
+        let a = &ours[px * 4..px * 4 + 4];
+        let b = &buf[px * 4..px * 4 + 4];
+        if a.iter().zip(b).any(|(x, y)| x.abs_diff(*y) > 64) {
+            differ += 1;
+        }
+        if a[0] < 128 {
+            ink += 1;
+        }
+    }
+    // Black on white with real content, and at most 0.5 % of pixels changed.
+    assert!(ink > w * h / 50, "too little ink: {ink}");
+    assert!(differ * 200 <= w * h, "{differ} of {} pixels differ", w * h);
+}
