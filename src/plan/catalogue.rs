@@ -7,14 +7,19 @@ use super::cylinders::{CylinderSet, CylinderSpec};
 #[derive(Clone, Copy, Debug, PartialEq, Eq, serde::Serialize, serde::Deserialize, Default)]
 #[serde(rename_all = "lowercase")]
 pub enum Material {
+    /// Steel (the default).
     #[default]
     Steel,
+    /// Aluminium.
     Aluminium,
+    /// Composite.
     Composite,
 }
 
 impl Material {
+    /// Every material: steel, aluminium, composite.
     pub const ALL: [Material; 3] = [Material::Steel, Material::Aluminium, Material::Composite];
+    /// The lowercase name: "steel", "aluminium" or "composite".
     pub fn name(self) -> &'static str {
         match self {
             Material::Steel => "steel",
@@ -27,8 +32,11 @@ impl Material {
 /// One generic preset.
 #[derive(Clone, Debug, PartialEq)]
 pub struct Preset {
+    /// Display name, e.g. "Twin 12 L 232 bar".
     pub name: &'static str,
+    /// The cylinders: count and each one's stamp or rating.
     pub set: CylinderSet,
+    /// What the cylinders are made of.
     pub material: Material,
 }
 

@@ -17,10 +17,16 @@ use super::units::{Gauge, Pressure, Volume};
 /// cylinders.
 #[derive(Clone, Debug, PartialEq)]
 pub struct PairChart {
+    /// Index of the diver the chart is for.
     pub me: usize,
+    /// Index of the teammate it is read against.
     pub buddy: usize,
+    /// Row headings: `me`'s start pressures on `my_gauge`, as asked for.
     pub my_starts: Vec<f64>,
+    /// Column headings: the buddy's start pressures on `buddy_gauge`, as asked for.
     pub buddy_starts: Vec<f64>,
+    /// One row per entry of `my_starts`, one cell per entry of `buddy_starts`: `me`'s
+    /// shown turn on `my_gauge`, or `None` where either start would be refused.
     pub turns: Vec<Vec<Option<f64>>>,
     /// The gauge `me` reads: rows and cells are in its unit.
     pub my_gauge: Gauge,

@@ -14,9 +14,20 @@ use super::units::{Pressure, Temperature, Volume};
 #[serde(untagged, deny_unknown_fields)]
 pub enum CylinderSpec {
     /// Metric stamp: water capacity in litres, working pressure in bar.
-    Stamped { water_l: f64, working_bar: f64 },
+    Stamped {
+        /// Water capacity of one cylinder, litres.
+        water_l: f64,
+        /// Working pressure, bar (gauge).
+        working_bar: f64,
+    },
     /// Imperial rating: free gas in cubic feet at the rated pressure in psi.
-    Rated { rated_cuft: f64, rated_psi: f64 },
+    Rated {
+        /// Free gas one cylinder holds at `rated_psi`, cubic feet; the real-gas model
+        /// reads it as air at 70 °F (see [`rating_temperature`]).
+        rated_cuft: f64,
+        /// Rated pressure, psi (gauge).
+        rated_psi: f64,
+    },
 }
 
 /// The temperature at which imperial ratings are taken to hold their rated volume (70 °F).
@@ -25,6 +36,7 @@ pub fn rating_temperature() -> Temperature {
 }
 
 impl CylinderSpec {
+    /// Working pressure of one cylinder (gauge): the stamped bar or the rated psi.
     pub fn working_pressure(&self) -> Pressure {
         match *self {
             CylinderSpec::Stamped { working_bar, .. } => Pressure::from_bar(working_bar),
@@ -88,15 +100,21 @@ fn trim(x: f64) -> String {
 /// (manifolded twins and independent sidemount sum the same way).
 #[derive(Clone, Copy, Debug, PartialEq, Serialize, Deserialize)]
 pub struct CylinderSet {
+    /// How many identical cylinders: 1 to
+    /// [`MAX_CYLINDERS`](crate::plan::team::MAX_CYLINDERS), checked when a team is
+    /// validated.
     pub count: u8,
+    /// What each cylinder is; in a file its fields sit beside `count`.
     #[serde(flatten)]
     pub spec: CylinderSpec,
 }
 
 impl CylinderSet {
+    /// One cylinder of `spec`.
     pub fn single(spec: CylinderSpec) -> Self {
         CylinderSet { count: 1, spec }
     }
+    /// Two cylinders of `spec` (a manifolded twin set or a sidemount pair).
     pub fn twins(spec: CylinderSpec) -> Self {
         CylinderSet { count: 2, spec }
     }
@@ -106,9 +124,11 @@ impl CylinderSet {
             .water_per_cylinder(kind)
             .scaled(f64::from(self.count))
     }
+    /// Working pressure of the set (gauge): that of each of its cylinders.
     pub fn working_pressure(&self) -> Pressure {
         self.spec.working_pressure()
     }
+    /// Short description, e.g. "2 × 12 L 232 bar"; a single cylinder has no count.
     pub fn describe(&self) -> String {
         // "2 ×" for any pair: the set does not say whether it is manifolded.
         let prefix = match self.count {

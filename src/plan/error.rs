@@ -10,6 +10,8 @@ pub struct InputError {
 }
 
 impl InputError {
+    /// An error on `field` (e.g. `divers[1].start`), with a message saying what is wrong
+    /// and what is allowed.
     pub fn new(field: impl Into<String>, message: impl Into<String>) -> Self {
         InputError {
             field: field.into(),

@@ -20,6 +20,7 @@ pub enum ModelKind {
 }
 
 impl ModelKind {
+    /// The model's name in words: "real gas" or "tank factor".
     pub fn describe(self) -> &'static str {
         match self {
             ModelKind::Real => "real gas",
@@ -30,6 +31,7 @@ impl ModelKind {
 
 /// A content model: free gas delivered per litre of water capacity.
 pub trait ContentModel {
+    /// Which model this is.
     fn kind(&self) -> ModelKind;
 
     /// Free litres (at 1 atm) delivered per litre of water capacity from `p` down to 0 gauge.

@@ -13,13 +13,15 @@ use super::warning::Warning;
 /// Per-diver results.
 #[derive(Clone, Debug, PartialEq)]
 pub struct DiverPlan {
+    /// The diver's name, as entered.
     pub name: String,
     /// Gas at start, real-gas model (free litres at 1 atm, water temperature).
     pub content_real: Volume,
     /// Gas at start, tank-factor model.
     pub content_hand: Volume,
-    /// Exact turn pressures of each model.
+    /// Exact real-gas turn pressure (gauge), before rounding.
     pub turn_real: Pressure,
+    /// Exact tank-factor turn pressure (gauge), before rounding.
     pub turn_hand: Pressure,
     /// Turn shown to the diver: the higher exact turn rounded UP to the diver's
     /// graduation, never above start.
@@ -33,9 +35,12 @@ pub struct DiverPlan {
     pub set_by: ModelKind,
     /// Real gas used from start to the shown turn.
     pub used_real: Volume,
+    /// Whether this diver holds the team's smallest real-gas content and so sets the
+    /// real-gas allowance (the first such diver on a tie).
     pub controlling: bool,
     /// Minutes from start to the shown turn at the given SAC and depth, if known.
     pub minutes_to_turn: Option<f64>,
+    /// Start pressure (gauge), as entered.
     pub start: Pressure,
     /// The stage plan, for a diver who carries a stage.
     pub stage: Option<StagePlan>,
@@ -45,27 +50,43 @@ pub struct DiverPlan {
 /// pressure, then left for the way out.
 #[derive(Clone, Debug, PartialEq)]
 pub struct StagePlan {
+    /// Gas in the stage at its start, real-gas model (free litres at 1 atm, water
+    /// temperature).
     pub content_real: Volume,
+    /// Exact real-gas drop pressure (gauge), before rounding.
     pub drop_real: Pressure,
+    /// Exact tank-factor drop pressure (gauge), before rounding.
     pub drop_hand: Pressure,
+    /// Drop shown to the diver: the higher exact drop rounded UP to the diver's
+    /// graduation, never above the stage's start.
     pub drop_shown: Pressure,
     /// On the diver's gauge, on its graduation (or the start).
     pub drop_shown_value: f64,
+    /// Which model's exact drop was higher and so set the shown drop.
     pub set_by: ModelKind,
     /// This stage holds the smallest allowance among the team's stages.
     pub controlling: bool,
+    /// The stage's start pressure (gauge), as entered.
     pub start: Pressure,
 }
 
 /// A team's plan.
 #[derive(Clone, Debug, PartialEq)]
 pub struct TeamPlan {
+    /// The team's unit system, as in the input.
     pub units: UnitSystem,
+    /// Per-diver results, in input order.
     pub divers: Vec<DiverPlan>,
     /// Index of the controlling diver (smallest real-gas allowance).
     pub controlling: usize,
+    /// Gas each diver may spend before turning, real-gas model: the rule's fraction of
+    /// the smallest real-gas content in the team.
     pub team_allowance_real: Volume,
+    /// The same under the tank-factor model: the rule's fraction of the smallest
+    /// tank-factor content, which may belong to a different diver.
     pub team_allowance_hand: Volume,
+    /// The out-of-gas check with every diver at their own shown turn, each having used
+    /// their `used_real`.
     pub stress: StressCheck,
     /// The same check at the moment the team actually turns (the first diver reaches
     /// their turn) when every breathing rate and the depth are known: the others have
@@ -78,10 +99,12 @@ pub struct TeamPlan {
 }
 
 impl TeamPlan {
+    /// The results of the controlling diver.
     pub fn controlling_diver(&self) -> &DiverPlan {
         &self.divers[self.controlling]
     }
 
+    /// The divers' names, in input order.
     pub fn names(&self) -> Vec<String> {
         self.divers.iter().map(|d| d.name.clone()).collect()
     }

@@ -17,9 +17,13 @@ pub struct Mix {
 /// Mole fractions of the species the gas model knows.
 #[derive(Clone, Copy, Debug, PartialEq)]
 pub struct Composition {
+    /// Nitrogen mole fraction.
     pub nitrogen: f64,
+    /// Oxygen mole fraction.
     pub oxygen: f64,
+    /// Helium mole fraction.
     pub helium: f64,
+    /// Argon mole fraction (non-zero only for air).
     pub argon: f64,
 }
 
@@ -30,11 +34,16 @@ impl Default for Mix {
 }
 
 impl Mix {
+    /// Air: 21 % oxygen, no helium; modelled with its argon (see [`Mix::composition`]).
     pub const AIR: Mix = Mix { o2: 0.21, he: 0.0 };
 
+    /// Nitrox: oxygen fraction `o2` (e.g. 0.32), the rest nitrogen. Not range-checked
+    /// here; a team's validation does that.
     pub fn nitrox(o2: f64) -> Mix {
         Mix { o2, he: 0.0 }
     }
+    /// Trimix (or heliox): oxygen fraction `o2`, helium fraction `he`, the rest
+    /// nitrogen. Not range-checked here; a team's validation does that.
     pub fn trimix(o2: f64, he: f64) -> Mix {
         Mix { o2, he }
     }

@@ -1,3 +1,4 @@
+#![warn(missing_docs)]
 //! The planning core: units, gas models, cylinders and the team plan.
 //! Pure Rust: no user interface, no file or network I/O.
 

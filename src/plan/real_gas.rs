@@ -29,6 +29,10 @@ impl std::fmt::Debug for RealGasModel {
 }
 
 impl RealGasModel {
+    /// The model of `mix` at `temperature`: the gas is taken to be at that temperature
+    /// both in the cylinder and as free gas at one atmosphere. If GERG-2008 refuses the
+    /// composition a warning is logged, and any density it cannot give comes from the
+    /// ideal gas.
     pub fn new(mix: Mix, temperature: Temperature) -> Self {
         let c = mix.composition();
         let comp = AgaComposition {
@@ -53,6 +57,7 @@ impl RealGasModel {
         model
     }
 
+    /// The gas temperature the model was built for.
     pub fn temperature(&self) -> Temperature {
         self.temperature
     }

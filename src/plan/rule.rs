@@ -2,6 +2,8 @@
 
 use serde::{Deserialize, Serialize};
 
+/// A gas rule: going in, each diver may spend the rule's fraction of the smallest
+/// diver's gas, so every diver spends the same volume.
 #[derive(Clone, Copy, Debug, PartialEq, Eq, Serialize, Deserialize, Default)]
 #[serde(rename_all = "lowercase")]
 pub enum Rule {
@@ -10,12 +12,16 @@ pub enum Rule {
     /// One third: the usual minimum in overhead environments.
     #[default]
     Thirds,
+    /// One quarter.
     Quarters,
+    /// One fifth.
     Fifths,
+    /// One sixth.
     Sixths,
 }
 
 impl Rule {
+    /// Every rule, from the most gas spent going in (halves) to the least (sixths).
     pub const ALL: [Rule; 5] = [
         Rule::Halves,
         Rule::Thirds,
@@ -29,6 +35,7 @@ impl Rule {
         1.0 / f64::from(self.denominator())
     }
 
+    /// The n of the fraction 1/n: 2 for halves up to 6 for sixths.
     pub fn denominator(self) -> u8 {
         match self {
             Rule::Halves => 2,
@@ -39,6 +46,7 @@ impl Rule {
         }
     }
 
+    /// The lowercase name, as written in team files: "halves" to "sixths".
     pub fn name(self) -> &'static str {
         match self {
             Rule::Halves => "halves",
@@ -49,6 +57,8 @@ impl Rule {
         }
     }
 
+    /// The rule of that name, in any case, ignoring surrounding spaces; `None` if there
+    /// is none.
     pub fn parse(s: &str) -> Option<Rule> {
         Rule::ALL
             .into_iter()

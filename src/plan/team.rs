@@ -8,14 +8,22 @@ use super::rule::Rule;
 use super::units::{Depth, Gauge, Pressure, PressureUnit, Temperature, UnitSystem, Water};
 use super::warning::{OVERFILL_SHARE, Supply, Warning};
 
+/// Fewest divers in a team.
 pub const MIN_DIVERS: usize = 2;
+/// Most divers in a team.
 pub const MAX_DIVERS: usize = 6;
+/// Most cylinders in one set (a diver's main set or a stage).
 pub const MAX_CYLINDERS: u8 = 4;
+/// Highest start pressure accepted, bar (gauge); also the highest stamped working
+/// pressure.
 pub const MAX_START_BAR: f64 = 400.0;
 /// Highest start pressure as a multiple of working pressure. Cave fills of
 /// low-pressure steel run about 1.36× (common practice).
 pub const MAX_FILL_RATIO: f64 = 1.5;
+/// Smallest water capacity of one cylinder, litres. For a rated cylinder the
+/// capacity checked is the one the real-gas model derives from the rating.
 pub const MIN_WATER_L: f64 = 0.5;
+/// Largest water capacity of one cylinder, litres (checked as for [`MIN_WATER_L`]).
 pub const MAX_WATER_L: f64 = 30.0;
 /// Below this share of working pressure a start pressure draws a low-fill warning.
 pub const LOW_FILL_RATIO: f64 = 0.5;
@@ -25,7 +33,9 @@ pub const LOW_FILL_RATIO: f64 = 0.5;
 /// each stage-carrying diver a drop pressure.
 #[derive(Clone, Debug, PartialEq)]
 pub struct StageInput {
+    /// The stage cylinders.
     pub cylinders: CylinderSet,
+    /// The gas in the stage.
     pub mix: Mix,
     /// Stage pressure read in the water (gauge).
     pub start: Pressure,
@@ -34,8 +44,11 @@ pub struct StageInput {
 /// One diver's inputs.
 #[derive(Clone, Debug, PartialEq)]
 pub struct DiverInput {
+    /// The diver's name: 1 to 24 characters once trimmed, and unlike every teammate's.
     pub name: String,
+    /// The diver's main cylinders (back-mounted or sidemount), the stage left out.
     pub cylinders: CylinderSet,
+    /// The gas in the main cylinders.
     pub mix: Mix,
     /// Start pressure read in the water (gauge).
     pub start: Pressure,
@@ -51,13 +64,23 @@ pub struct DiverInput {
 /// A team's inputs.
 #[derive(Clone, Debug, PartialEq)]
 pub struct TeamInput {
+    /// The team's unit system: the default gauge unit, and the unit in which water
+    /// temperature, depth and breathing rates are checked and named in errors.
     pub units: UnitSystem,
+    /// The gas rule: the fraction of the smallest supply each diver may spend going in.
     pub rule: Rule,
     /// Gauge step in the team's pressure unit, for divers without a gauge of their own.
     pub gauge_step: f64,
+    /// Water temperature; the gas in every cylinder is taken to be at it. Accepted from
+    /// −2 °C to 40 °C, in the team's unit widened out to whole degrees.
     pub water_temp: Temperature,
+    /// Planned depth, if known (0 to 300 m, or 0 to 1000 ft): with a diver's breathing
+    /// rate it gives the minutes to that diver's turn.
     pub depth: Option<Depth>,
+    /// Fresh or sea water, for the ambient pressure at `depth`.
     pub water: Water,
+    /// The divers, [`MIN_DIVERS`] to [`MAX_DIVERS`] of them. Errors and results name a
+    /// diver by their index in this list.
     pub divers: Vec<DiverInput>,
 }
 

@@ -14,6 +14,8 @@ pub struct TemperatureChange {
     pub ideal: Pressure,
 }
 
+/// The gauge pressure of a sealed cylinder of `mix` that reads `p1` (gauge) at `t1`,
+/// once its gas has cooled or warmed to `t2`: real-gas and ideal-gas answers.
 pub fn pressure_after_temperature_change(
     mix: Mix,
     p1: Pressure,

@@ -14,30 +14,36 @@ pub const LITRES_PER_CUFT: f64 = 28.316_846_592;
 #[derive(Clone, Copy, Debug, PartialEq, Eq, Serialize, Deserialize, Default)]
 #[serde(rename_all = "lowercase")]
 pub enum UnitSystem {
+    /// Bar, litres, metres and degrees Celsius (the default).
     #[default]
     Metric,
+    /// Psi, cubic feet, feet and degrees Fahrenheit.
     Imperial,
 }
 
 impl UnitSystem {
+    /// The pressure unit's label: "bar" or "psi".
     pub fn pressure_label(self) -> &'static str {
         match self {
             UnitSystem::Metric => "bar",
             UnitSystem::Imperial => "psi",
         }
     }
+    /// The volume unit's label: "L" or "cu ft".
     pub fn volume_label(self) -> &'static str {
         match self {
             UnitSystem::Metric => "L",
             UnitSystem::Imperial => "cu ft",
         }
     }
+    /// The depth unit's label: "m" or "ft".
     pub fn depth_label(self) -> &'static str {
         match self {
             UnitSystem::Metric => "m",
             UnitSystem::Imperial => "ft",
         }
     }
+    /// The temperature unit's label: "°C" or "°F".
     pub fn temperature_label(self) -> &'static str {
         match self {
             UnitSystem::Metric => "°C",
@@ -58,30 +64,35 @@ impl UnitSystem {
             UnitSystem::Imperial => p.psi(),
         }
     }
+    /// Volume from a number in this system's unit (litres or cubic feet).
     pub fn volume(self, value: f64) -> Volume {
         match self {
             UnitSystem::Metric => Volume::from_litres(value),
             UnitSystem::Imperial => Volume::from_cuft(value),
         }
     }
+    /// A volume as a number in this system's unit (litres or cubic feet), unrounded.
     pub fn volume_value(self, v: Volume) -> f64 {
         match self {
             UnitSystem::Metric => v.litres(),
             UnitSystem::Imperial => v.cuft(),
         }
     }
+    /// Depth from a number in this system's unit (metres or feet).
     pub fn depth(self, value: f64) -> Depth {
         match self {
             UnitSystem::Metric => Depth::from_metres(value),
             UnitSystem::Imperial => Depth::from_feet(value),
         }
     }
+    /// Temperature from a number in this system's unit (°C or °F).
     pub fn temperature(self, value: f64) -> Temperature {
         match self {
             UnitSystem::Metric => Temperature::from_celsius(value),
             UnitSystem::Imperial => Temperature::from_fahrenheit(value),
         }
     }
+    /// A temperature as a number in this system's unit (°C or °F), unrounded.
     pub fn temperature_value(self, t: Temperature) -> f64 {
         match self {
             UnitSystem::Metric => t.celsius(),
@@ -214,18 +225,23 @@ pub struct Pressure {
 }
 
 impl Pressure {
+    /// Zero gauge (one standard atmosphere absolute): an empty cylinder.
     pub const ZERO: Pressure = Pressure { bar: 0.0 };
+    /// Gauge pressure from a number of bar.
     pub fn from_bar(bar: f64) -> Self {
         Pressure { bar }
     }
+    /// Gauge pressure from a number of psi (psig), converted with [`BAR_PER_PSI`].
     pub fn from_psi(psi: f64) -> Self {
         Pressure {
             bar: psi * BAR_PER_PSI,
         }
     }
+    /// The gauge pressure in bar.
     pub fn bar(self) -> f64 {
         self.bar
     }
+    /// The gauge pressure in psi.
     pub fn psi(self) -> f64 {
         self.bar / BAR_PER_PSI
     }
@@ -233,9 +249,11 @@ impl Pressure {
     pub fn absolute_bar(self) -> f64 {
         self.bar + ATM_BAR
     }
+    /// The lower of two pressures (`self` when they are equal).
     pub fn min(self, other: Pressure) -> Pressure {
         if other.bar < self.bar { other } else { self }
     }
+    /// The higher of two pressures (`self` when they are equal).
     pub fn max(self, other: Pressure) -> Pressure {
         if other.bar > self.bar { other } else { self }
     }
@@ -248,21 +266,27 @@ pub struct Volume {
 }
 
 impl Volume {
+    /// No volume at all.
     pub const ZERO: Volume = Volume { litres: 0.0 };
+    /// Volume from a number of litres.
     pub fn from_litres(litres: f64) -> Self {
         Volume { litres }
     }
+    /// Volume from a number of cubic feet, converted with [`LITRES_PER_CUFT`].
     pub fn from_cuft(cuft: f64) -> Self {
         Volume {
             litres: cuft * LITRES_PER_CUFT,
         }
     }
+    /// The volume in litres.
     pub fn litres(self) -> f64 {
         self.litres
     }
+    /// The volume in cubic feet.
     pub fn cuft(self) -> f64 {
         self.litres / LITRES_PER_CUFT
     }
+    /// This volume multiplied by `factor` (a rule's fraction, a cylinder count).
     pub fn scaled(self, factor: f64) -> Volume {
         Volume {
             litres: self.litres * factor,
@@ -291,18 +315,23 @@ pub struct Temperature {
 }
 
 impl Temperature {
+    /// Temperature from degrees Celsius: T/K = t/°C + 273.15 (NIST SP 811).
     pub fn from_celsius(c: f64) -> Self {
         Temperature { kelvin: c + 273.15 }
     }
+    /// Temperature from degrees Fahrenheit: t/°C = (t/°F − 32) × 5/9 (NIST SP 811).
     pub fn from_fahrenheit(f: f64) -> Self {
         Self::from_celsius((f - 32.0) * 5.0 / 9.0)
     }
+    /// The temperature in kelvin.
     pub fn kelvin(self) -> f64 {
         self.kelvin
     }
+    /// The temperature in degrees Celsius.
     pub fn celsius(self) -> f64 {
         self.kelvin - 273.15
     }
+    /// The temperature in degrees Fahrenheit.
     pub fn fahrenheit(self) -> f64 {
         self.celsius() * 9.0 / 5.0 + 32.0
     }
@@ -315,17 +344,21 @@ pub struct Depth {
 }
 
 impl Depth {
+    /// Depth from a number of metres.
     pub fn from_metres(m: f64) -> Self {
         Depth { metres: m }
     }
+    /// Depth from a number of feet; 1 ft = 0.3048 m exactly (NIST SP 811).
     pub fn from_feet(ft: f64) -> Self {
         Depth {
             metres: ft * 0.3048,
         }
     }
+    /// The depth in metres.
     pub fn metres(self) -> f64 {
         self.metres
     }
+    /// The depth in feet.
     pub fn feet(self) -> f64 {
         self.metres / 0.3048
     }
@@ -335,8 +368,10 @@ impl Depth {
 #[derive(Clone, Copy, Debug, PartialEq, Eq, Serialize, Deserialize, Default)]
 #[serde(rename_all = "lowercase")]
 pub enum Water {
+    /// Fresh water (the default): 0.0979 bar per metre.
     #[default]
     Fresh,
+    /// Sea water: 0.1005 bar per metre.
     Salt,
 }
 
