@@ -69,9 +69,8 @@ fn mixed_gauge_teams_match_the_coolprop_reference() {
                     d.name
                 );
             }
-            assert_eq!(
-                off_grid(d.turn_shown_value, d.gauge.step) < 1e-9 || d.turn_shown_value == start,
-                true
+            assert!(
+                off_grid(d.turn_shown_value, d.gauge.step) < 1e-9 || d.turn_shown_value == start
             );
             if let Some(drop) = e.get("stage_drop").and_then(Value::as_f64) {
                 let st = d.stage.as_ref().expect("stage plan");
