@@ -6,6 +6,7 @@ use super::super::nav::Screen;
 use super::super::{AppWindow, Nav, Page, StatusAdapter};
 use super::{Shared, act, handles};
 use crate::app::session::Session;
+use crate::app::view_models as vm;
 
 fn page(s: Screen) -> Page {
     match s {
@@ -53,5 +54,5 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
 pub fn refresh(ui: &AppWindow, s: &Session) {
     ui.global::<Nav>().set_page(page(s.page()));
     ui.global::<StatusAdapter>()
-        .set_message(s.status.text().into());
+        .set_message(vm::status(s).into());
 }

@@ -2,7 +2,7 @@
 
 use slint::ComponentHandle;
 
-use super::super::session::{Picker, Session};
+use super::super::session::Session;
 use super::super::view_models as vm;
 use super::super::{AppWindow, PickRow, PickerAdapter};
 use super::{Shared, act, handles, model};
@@ -29,11 +29,12 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
 
 pub fn refresh(ui: &AppWindow, s: &Session) {
     let a = ui.global::<PickerAdapter>();
-    a.set_cylinders_open(matches!(s.picker, Picker::Cylinders { .. }));
-    a.set_stage_mode(matches!(s.picker, Picker::Cylinders { stage: true, .. }));
-    a.set_mix_open(matches!(s.picker, Picker::Mix { .. }));
-    a.set_title(vm::picker_title(s).into());
-    if let Picker::Cylinders { .. } = s.picker {
+    let p = vm::picker(s);
+    a.set_cylinders_open(p.cylinders_open);
+    a.set_stage_mode(p.stage_mode);
+    a.set_mix_open(p.mix_open);
+    a.set_title(p.title.into());
+    if p.cylinders_open {
         a.set_locker(model(
             vm::locker_pick_rows(s)
                 .into_iter()
@@ -55,10 +56,10 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
                 .collect(),
         ));
     }
-    if let (Picker::Mix { o2, he, .. }, Some(mix)) = (s.picker, s.picker.mix()) {
+    if let Some((o2, he, text, reason)) = p.mix {
         a.set_o2(o2);
         a.set_he(he);
-        a.set_mix_text(mix.label().into());
-        a.set_mix_reason(s.picker.mix_reason().into());
+        a.set_mix_text(text.into());
+        a.set_mix_reason(reason.into());
     }
 }

@@ -126,6 +126,31 @@ pub fn preset_rows() -> Vec<(String, String)> {
         .collect()
 }
 
+/// The open picker: which one, for what, and the mix being picked.
+pub struct PickerVm {
+    pub cylinders_open: bool,
+    pub stage_mode: bool,
+    pub mix_open: bool,
+    pub title: String,
+    /// O2 and He in percent, the mix's name and why it cannot be used (mix picker only).
+    pub mix: Option<(i32, i32, String, String)>,
+}
+
+pub fn picker(s: &Session) -> PickerVm {
+    PickerVm {
+        cylinders_open: matches!(s.picker, Picker::Cylinders { .. }),
+        stage_mode: matches!(s.picker, Picker::Cylinders { stage: true, .. }),
+        mix_open: matches!(s.picker, Picker::Mix { .. }),
+        title: picker_title(s),
+        mix: match (s.picker, s.picker.mix()) {
+            (Picker::Mix { o2, he, .. }, Some(mix)) => {
+                Some((o2, he, mix.label(), s.picker.mix_reason()))
+            }
+            _ => None,
+        },
+    }
+}
+
 pub fn picker_title(s: &Session) -> String {
     let name = |i: usize| {
         s.team

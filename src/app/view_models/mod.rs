@@ -20,13 +20,13 @@ mod turns;
 
 pub use keypad::{KeypadVm, keypad};
 pub use locker::{
-    LockerEditVm, LockerRowVm, locker_edit, locker_pick_rows, locker_rows, picker_title,
-    preset_rows, undo_text,
+    LockerEditVm, LockerRowVm, PickerVm, locker_edit, locker_pick_rows, locker_rows, picker,
+    picker_title, preset_rows, undo_text,
 };
 pub use settings::{SettingsVm, cautions, settings};
 pub use team::{
-    DiverCardVm, TeamPageVm, depth_label, diver_cards, team_page, team_summary, water_temp_text,
-    water_text,
+    DiverCardVm, TeamPageVm, depth_label, diver_cards, status, team_page, team_summary,
+    water_temp_text, water_text,
 };
 pub use tools::{ChartRowVm, ChartVm, FillVm, chart, fill};
 pub use turns::{

@@ -125,3 +125,8 @@ pub fn water_text(s: &Session) -> String {
 pub fn water_temp_text(s: &Session) -> String {
     temperature_text(s.units(), s.team.input().water_temp)
 }
+
+/// The messages for the person, one a line; empty when there are none.
+pub fn status(s: &Session) -> String {
+    s.status.text()
+}
