@@ -7,7 +7,9 @@ use slint::ComponentHandle;
 use slint::platform::{Key, WindowEvent};
 use turnsheet::app::{App, Nav, Page};
 use turnsheet::formats::team_file::TeamFile;
-use turnsheet::plan::{CylinderSet, CylinderSpec, Mix, Pressure, UnitSystem, plan_team};
+use turnsheet::plan::{
+    CylinderSet, CylinderSpec, Gauge, Mix, Pressure, PressureUnit, UnitSystem, plan_team,
+};
 
 fn init() {
     i_slint_backend_testing::init_no_event_loop();
@@ -55,12 +57,42 @@ fn open(dir: &std::path::Path) -> App {
     app
 }
 
-fn open_acknowledged(dir: &std::path::Path) -> App {
+/// Past the cautions, on the Team page, with every start unread (as on the dock).
+fn open_unread(dir: &std::path::Path) -> App {
     let app = open(dir);
     if page(&app) == Page::Cautions {
         press(&app, "acknowledge cautions");
     }
     assert_eq!(page(&app), Page::Team);
+    app
+}
+
+/// Type each diver's start on the keypad, as read in the water: only then are there turns.
+fn read_every_start(app: &App) {
+    let starts: Vec<(String, String)> = {
+        let s = app.session.borrow();
+        let input = s.team.input();
+        (0..input.divers.len())
+            .map(|i| {
+                let g = input.gauge_of(i);
+                (
+                    input.divers[i].name.clone(),
+                    format!("{}", (g.value(input.divers[i].start) + 1e-6).floor() as i64),
+                )
+            })
+            .collect()
+    };
+    for (name, digits) in starts {
+        press(app, &format!("start pressure of {name}"));
+        press(app, "clear");
+        type_keys(app, &digits);
+        press(app, "done");
+    }
+}
+
+fn open_acknowledged(dir: &std::path::Path) -> App {
+    let app = open_unread(dir);
+    read_every_start(&app);
     app
 }
 
@@ -328,7 +360,18 @@ fn units_switch_shows_numbers_consistent_with_the_core() {
     press(&app, "Settings");
     press(&app, "units imperial");
     back_key(&app);
-    assert_eq!(value(&app, "start pressure of Ines"), "3161 psi");
+    // Starts read on bar gauges stay in bar: switching the team's units converts no
+    // reading into a number those gauges do not show.
+    assert_eq!(value(&app, "start pressure of Ines"), "218 bar");
+    // Bram reads a psi gauge: two taps (5 bar, then 100 psi), and his start is read again.
+    press(&app, "gauge of Bram");
+    press(&app, "gauge of Bram");
+    assert_eq!(value(&app, "start pressure of Bram"), "— psi");
+    assert!(value(&app, "start note of Bram").contains("Not read"));
+    press(&app, "start pressure of Bram");
+    type_keys(&app, "2950");
+    press(&app, "done");
+    assert_eq!(value(&app, "start pressure of Bram"), "2950 psi");
     press(&app, "show turns");
     let mut input = TeamFile::parse(turnsheet::app::session::DEMO_TEAM)
         .unwrap()
@@ -336,20 +379,97 @@ fn units_switch_shows_numbers_consistent_with_the_core() {
         .unwrap();
     input.units = UnitSystem::Imperial;
     input.gauge_step = 100.0;
+    for d in &mut input.divers {
+        d.gauge = Some(Gauge::usual(PressureUnit::Bar));
+    }
+    input.divers[1].gauge = Some(Gauge::usual(PressureUnit::Psi));
+    input.divers[1].start = Pressure::from_psi(2950.0);
     let plan = plan_team(&input).unwrap();
     for d in &plan.divers {
         let shown = value(&app, &format!("turn of {}", d.name));
-        assert_eq!(shown, format!("{} psi", d.turn_shown_value), "{}", d.name);
+        assert_eq!(
+            shown,
+            format!("{} {}", d.turn_shown_value, d.gauge.label()),
+            "{}",
+            d.name
+        );
     }
-    // The buddy view says the unit once and shows the same digits.
+    assert_eq!(plan.divers[1].gauge.label(), "psi");
+    assert_eq!(plan.divers[0].gauge.label(), "bar");
+    // The buddy view shows each diver's turn on their own gauge.
     press(&app, "Buddy view");
     for d in &plan.divers {
         let row = find(&app, &format!("buddy turn of {}", d.name));
         assert_eq!(
             row.accessible_value().unwrap(),
-            format!("{}", d.turn_shown_value)
+            format!("{} {}", d.turn_shown_value, d.gauge.label())
         );
     }
+}
+
+#[test]
+fn turns_wait_until_every_start_is_read_today() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    // The demo's starts count as unread: no turn numbers, and the page says whose.
+    let app = open_unread(dir.path());
+    press(&app, "show turns");
+    assert_eq!(value(&app, "turn of Ines"), "— bar");
+    assert!(value(&app, "plan problem").contains("Ines (start not read)"));
+    press(&app, "Buddy view");
+    assert!(value(&app, "buddy view note").contains("Bram"));
+    assert_eq!(value(&app, "buddy turn of Sol"), "— bar");
+    back_key(&app);
+    back_key(&app);
+    read_every_start(&app);
+    press(&app, "show turns");
+    assert_ne!(value(&app, "turn of Ines"), "— bar");
+    assert!(ElementHandle::find_by_accessible_label(&app.window, "plan problem").next().is_none());
+    // A new diver has no start until it is read, and the turns wait for it.
+    back_key(&app);
+    press(&app, "add diver");
+    assert_eq!(value(&app, "start pressure of Diver 4"), "— bar");
+    press(&app, "show turns");
+    assert_eq!(value(&app, "turn of Ines"), "— bar");
+    assert!(value(&app, "plan problem").contains("Diver 4 (start not read)"));
+}
+
+#[test]
+fn a_start_entered_on_an_earlier_day_must_be_confirmed() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    {
+        let app = open_acknowledged(dir.path());
+        drop(app);
+    }
+    // Move every saved entry time back a day, as if the team was planned yesterday.
+    let path = dir.path().join("last-team.json");
+    let mut v: serde_json::Value =
+        serde_json::from_str(&std::fs::read_to_string(&path).unwrap()).unwrap();
+    for r in v["start_readings"].as_array_mut().unwrap() {
+        let at = r["at"].as_i64().unwrap();
+        r["at"] = (at - 86_400).into();
+    }
+    std::fs::write(&path, v.to_string()).unwrap();
+    let app = open_unread(dir.path());
+    assert!(value(&app, "start note of Ines").contains("Entered yesterday"));
+    assert_eq!(value(&app, "start pressure of Ines"), "218 bar");
+    press(&app, "show turns");
+    assert!(value(&app, "plan problem").contains("Ines (start entered yesterday"));
+    back_key(&app);
+    for name in ["Ines", "Bram", "Sol"] {
+        press(&app, &format!("confirm start of {name}"));
+    }
+    assert!(ElementHandle::find_by_accessible_label(&app.window, "start note of Ines").next().is_none());
+    press(&app, "show turns");
+    let plan = plan_team(
+        &TeamFile::parse(turnsheet::app::session::DEMO_TEAM)
+            .unwrap()
+            .to_input()
+            .unwrap(),
+    )
+    .unwrap();
+    assert_eq!(turn_number(&app, "Ines"), plan.divers[0].turn_shown_value);
 }
 
 #[test]
@@ -440,6 +560,11 @@ fn fill_check_predicts_the_in_water_pressure() {
     press(&app, "use as start pressure");
     back_key(&app);
     assert_eq!(value(&app, "start pressure of Ines"), "207 bar");
+    // The prediction is marked until the gauge is read in the water.
+    assert!(value(&app, "start note of Ines").contains("Predicted"));
+    press(&app, "show turns");
+    assert!(value(&app, "turn of Ines").ends_with("bar"));
+    assert_ne!(value(&app, "turn of Ines"), "— bar");
 }
 
 #[test]
@@ -498,7 +623,7 @@ fn stages_get_drop_pressures_matching_the_core() {
         let st = d.stage.as_ref().unwrap();
         let text = value(&app, &format!("stage drop of {}", d.name));
         assert!(
-            text.starts_with(&format!("Stage: drop at {} bar", st.drop_shown_value)),
+            text.starts_with(&format!("Drop stage at {} bar (", st.drop_shown_value)),
             "{text}"
         );
     }
@@ -567,10 +692,11 @@ fn the_set_marked_mine_starts_a_new_team() {
     press(&app, "mark Twin 10 L 300 bar as mine");
     back_key(&app);
     press(&app, "new team");
-    assert_eq!(value(&app, "start pressure of Me"), "300 bar");
-    assert_eq!(value(&app, "start pressure of Buddy"), "300 bar");
+    // A new team's starts are empty until read in the water.
+    assert_eq!(value(&app, "start pressure of Me"), "— bar");
+    assert_eq!(value(&app, "start pressure of Buddy"), "— bar");
     press(&app, "add diver");
-    assert_eq!(value(&app, "start pressure of Diver 3"), "300 bar");
+    assert_eq!(value(&app, "start pressure of Diver 3"), "— bar");
     let s = app.session.borrow();
     for d in &s.team.input().divers {
         assert_eq!(

@@ -7,26 +7,8 @@
 //! views show turns only when every start is fresh (a prediction is shown, marked).
 
 use chrono::{DateTime, Local, TimeZone};
-use serde::{Deserialize, Serialize};
 
-/// Where a start came from.
-#[derive(Clone, Copy, Debug, PartialEq, Eq, Serialize, Deserialize)]
-#[serde(rename_all = "lowercase")]
-pub enum Source {
-    /// Read on the diver's gauge (typed, or confirmed as still reading that).
-    Gauge,
-    /// Predicted from a warm fill on the fill-to-water page.
-    Prediction,
-}
-
-/// One diver's start: when it was entered and from where.
-#[derive(Clone, Copy, Debug, PartialEq, Eq, Serialize, Deserialize)]
-pub struct StartReading {
-    /// Unix time, seconds.
-    pub at: i64,
-    /// Gauge or prediction.
-    pub source: Source,
-}
+pub use crate::storage::team_state::{Source, StartReading};
 
 /// What a start is worth right now.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]

@@ -17,4 +17,28 @@ pub struct TeamState {
     /// The name of each diver's stage, as picked (empty without a stage).
     #[serde(default)]
     pub stage_labels: Vec<String>,
+    /// When each diver's start was entered and from where (null: never read). Older
+    /// files have none, so their starts count as unread.
+    #[serde(default)]
+    pub start_readings: Vec<Option<StartReading>>,
 }
+
+/// Where a start came from.
+#[derive(Clone, Copy, Debug, PartialEq, Eq, Serialize, Deserialize)]
+#[serde(rename_all = "lowercase")]
+pub enum Source {
+    /// Read on the diver's gauge (typed, or confirmed as still reading that).
+    Gauge,
+    /// Predicted from a warm fill on the fill-to-water page.
+    Prediction,
+}
+
+/// One diver's start: when it was entered and from where.
+#[derive(Clone, Copy, Debug, PartialEq, Eq, Serialize, Deserialize)]
+pub struct StartReading {
+    /// Unix time, seconds.
+    pub at: i64,
+    /// Gauge or prediction.
+    pub source: Source,
+}
+

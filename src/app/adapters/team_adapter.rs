@@ -24,6 +24,10 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
     let (w, st) = handles(ui, s);
     a.on_nudge_start(move |i, d| act(&w, &st, |x| x.nudge_start(i as usize, d)));
     let (w, st) = handles(ui, s);
+    a.on_cycle_gauge(move |i| act(&w, &st, |x| x.cycle_gauge(i as usize)));
+    let (w, st) = handles(ui, s);
+    a.on_confirm_start(move |i| act(&w, &st, |x| x.confirm_start(i as usize)));
+    let (w, st) = handles(ui, s);
     a.on_edit_sac(move |i| act(&w, &st, |x| x.open_entry(EntryTarget::Sac(i as usize))));
     let (w, st) = handles(ui, s);
     a.on_remove_diver(move |i| act(&w, &st, |x| x.remove_diver(i as usize)));
@@ -61,6 +65,9 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
             mix: c.mix.into(),
             start: c.start.into(),
             unit: c.unit.into(),
+            gauge: c.gauge.into(),
+            start_note: c.start_note.into(),
+            confirm: c.confirm.into(),
             sac: c.sac.into(),
             error: c.error.into(),
             has_stage: c.has_stage,

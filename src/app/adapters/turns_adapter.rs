@@ -18,6 +18,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
                 unit: r.unit.clone().into(),
                 detail: r.detail.clone().into(),
                 set_by: r.set_by.clone().into(),
+                hand: r.hand.clone().into(),
                 minutes: r.minutes.clone().into(),
                 controlling: r.controlling,
                 stage: r.stage.clone().into(),
@@ -28,14 +29,17 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
     a.set_margin_text(vm::margin_text(s).into());
     a.set_warnings(strings(vm::warnings(s)));
     a.set_first_text(vm::first_text(s).into());
-    a.set_error("".into());
+    let blocking = vm::starts_blocking(s).unwrap_or_default();
+    a.set_error(blocking.clone().into());
     let b = ui.global::<BuddyAdapter>();
     b.set_unit(vm::pressure_unit(s).into());
+    b.set_note(blocking.into());
     b.set_rows(model(
         rows.iter()
             .map(|r| BuddyRow {
                 name: r.name.clone().into(),
                 turn: r.turn.clone().into(),
+                unit: r.unit.clone().into(),
                 controlling: r.controlling,
                 stage: r.stage_short.clone().into(),
             })

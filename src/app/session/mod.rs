@@ -147,7 +147,17 @@ impl Session {
     fn team_result(&mut self, r: Result<(), InputError>) {
         match r {
             Ok(()) => self.save_team(),
-            Err(e) => self.status.push(e.to_string()),
+            Err(e) => {
+                let names: Vec<String> = self
+                    .team
+                    .input()
+                    .divers
+                    .iter()
+                    .map(|d| d.name.clone())
+                    .collect();
+                self.status
+                    .push(super::view_models::error_for_people(&names, &e))
+            }
         }
     }
 

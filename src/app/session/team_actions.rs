@@ -15,7 +15,7 @@ pub const DEMO_TEAM: &str = include_str!("../../../examples/hollowmere-team.json
 const DEMO_STAGE_LABELS: [&str; 3] = ["Aluminium 40", "", "Single 7 L 232 bar"];
 const DEMO_LABELS: [&str; 3] = [
     "Twin 12 L 232 bar",
-    "Sidemount 2× aluminium 80",
+    "Sidemount 2 × aluminium 80",
     "Twin 8.5 L 300 bar",
 ];
 
@@ -26,6 +26,8 @@ pub(super) fn demo_team(settings: &Settings) -> TeamController {
         team: TeamFile::parse(DEMO_TEAM).expect("the bundled demo team is valid"),
         cylinder_labels: DEMO_LABELS.iter().map(|s| s.to_string()).collect(),
         stage_labels: DEMO_STAGE_LABELS.iter().map(|s| s.to_string()).collect(),
+        // The demo's starts were read by nobody.
+        start_readings: Vec::new(),
     };
     let mut t = TeamController::from_state(&state).expect("the bundled demo team plans");
     let _ = t.set_rule(settings.rule);
@@ -56,10 +58,30 @@ impl Session {
         self.team_result(r);
     }
 
-    /// The − and + beside a start pressure: one gauge step down or up.
+    /// The − and + beside a start pressure: one graduation down or up. Setting the
+    /// start by hand is entering a reading.
     pub fn nudge_start(&mut self, i: usize, dir: i32) {
         if i < self.team.len() {
             let r = self.team.nudge_start(i, dir);
+            if r.is_ok() {
+                self.team.mark_read(i, crate::app::readings::now());
+            }
+            self.team_result(r);
+        }
+    }
+
+    /// "Still reads N": the diver's gauge shows the start that was entered earlier.
+    pub fn confirm_start(&mut self, i: usize) {
+        if i < self.team.len() {
+            self.team.mark_read(i, crate::app::readings::now());
+            self.save_team();
+        }
+    }
+
+    /// The gauge button on a diver's card: the next unit and graduation.
+    pub fn cycle_gauge(&mut self, i: usize) {
+        if i < self.team.len() {
+            let r = self.team.cycle_gauge(i);
             self.team_result(r);
         }
     }

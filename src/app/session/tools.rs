@@ -62,9 +62,10 @@ impl FillCheck {
     }
 
     /// The predicted real-gas pressure as a start: rounded down to a whole unit.
+    /// The prediction rounded down to a whole number on the diver's own gauge.
     pub fn usable_start(&self, input: &TeamInput) -> Pressure {
-        let u = input.units;
-        u.pressure(whole_down(u.pressure_value(self.prediction(input).real)))
+        let g = input.gauge_of(self.diver(input.divers.len()));
+        g.pressure(whole_down(g.value(self.prediction(input).real)))
     }
 }
 
@@ -114,25 +115,31 @@ impl ChartPair {
     /// The chart of the pair, centred on their planned starts.
     pub fn chart(&self, input: &TeamInput) -> Option<PairChart> {
         let (me, other) = self.pair(input.divers.len())?;
-        let u = input.units;
         let around = |i: usize| {
-            starts_around(
-                u.pressure_value(input.divers[i].start),
-                input.gauge_step,
-                2,
-                7,
-            )
+            let g = input.gauge_of(i);
+            starts_around(g.value(input.divers[i].start), g.step, 2, 7)
         };
         pair_chart(input, me, other, &around(me), &around(other)).ok()
     }
 }
 
 impl Session {
-    /// Use the predicted in-water pressure (rounded down) as the diver's start.
+    /// Plan with the predicted in-water pressure (rounded down) as the diver's start,
+    /// marked as a prediction until the gauge is read in the water.
     pub fn fill_use_as_start(&mut self) {
         let d = self.fill.diver(self.team.len());
         let start = self.fill.usable_start(self.team.input());
         let r = self.team.set_start(d, start);
+        if r.is_ok() {
+            self.team.mark_predicted(d, crate::app::readings::now());
+            let name = self.team.input().divers[d].name.clone();
+            let g = self.team.input().gauge_of(d);
+            self.status.push(format!(
+                "{name}'s start is now the prediction, {} {}, marked \"predicted\" until the gauge is read in the water.",
+                crate::plan::error::fmt_num(g.value(start)),
+                g.label()
+            ));
+        }
         self.team_result(r);
     }
 }

@@ -4,8 +4,11 @@
 use crate::formats::team_file::TeamFile;
 use crate::plan::error::InputError;
 use crate::plan::rounding::next_step;
-use crate::plan::{Mix, Pressure, Rule, TeamInput, TeamPlan, UnitSystem, plan_team};
+use crate::plan::rounding::round_down_to_step;
+use crate::plan::{Gauge, Mix, Pressure, PressureUnit, Rule, TeamInput, TeamPlan, UnitSystem, plan_team};
 use crate::storage::team_state::{TEAM_SCHEMA, TeamState};
+
+use super::readings::{Readings, Source, StartStatus};
 
 /// The gauge steps offered, per unit system.
 pub fn step_options(units: UnitSystem) -> [f64; 2] {
@@ -21,6 +24,8 @@ pub struct TeamController {
     labels: Vec<String>,
     stage_labels: Vec<String>,
     plan: TeamPlan,
+    /// Whether each start is a reading taken today.
+    readings: Readings,
 }
 
 impl TeamController {
@@ -44,16 +49,19 @@ impl TeamController {
                     .unwrap_or_default()
             })
             .collect();
+        let readings = Readings::unread(input.divers.len());
         Ok(TeamController {
             input,
             labels,
             stage_labels,
             plan,
+            readings,
         })
     }
 
     pub fn from_state(state: &TeamState) -> Result<Self, InputError> {
         let mut t = Self::new(state.team.to_input()?, state.cylinder_labels.clone())?;
+        t.readings = Readings::from_saved(&state.start_readings, t.len());
         for (i, l) in state.stage_labels.iter().enumerate() {
             if i < t.stage_labels.len() && !l.is_empty() && t.input.divers[i].stage.is_some() {
                 t.stage_labels[i] = l.clone();
@@ -68,7 +76,71 @@ impl TeamController {
             team: TeamFile::from_input(&self.input),
             cylinder_labels: self.labels.clone(),
             stage_labels: self.stage_labels.clone(),
+            start_readings: self.readings.saved().to_vec(),
         }
+    }
+
+    /// Whether each start is a reading taken today.
+    pub fn readings(&self) -> &Readings {
+        &self.readings
+    }
+
+    /// Diver `i`'s start status at `now` (unix seconds).
+    pub fn start_status(&self, i: usize, now: i64) -> StartStatus {
+        self.readings.status(i, now)
+    }
+
+    /// Whether every start may make turns at `now`.
+    pub fn turns_ready(&self, now: i64) -> bool {
+        self.readings.all_usable(now)
+    }
+
+    /// Diver `i`'s start was just read on the gauge (typed, nudged or confirmed).
+    pub fn mark_read(&mut self, i: usize, now: i64) {
+        self.readings.mark(i, now, Source::Gauge);
+    }
+
+    /// Diver `i`'s start was set from a fill prediction.
+    pub fn mark_predicted(&mut self, i: usize, now: i64) {
+        self.readings.mark(i, now, Source::Prediction);
+    }
+
+    /// Every start unread (a new team, the demo).
+    pub fn forget_readings(&mut self) {
+        self.readings = Readings::unread(self.len());
+    }
+
+    /// Give diver `i` a gauge. A change of unit makes the start unread (a reading on
+    /// one unit is not a reading on the other); it is kept as a placeholder rounded down
+    /// to the new graduation. A change of graduation keeps the reading.
+    pub fn set_gauge(&mut self, i: usize, gauge: Gauge) -> Result<(), InputError> {
+        let old = self.input.gauge_of(i);
+        let start = self.input.divers[i].start;
+        let placeholder = gauge.pressure(round_down_to_step(gauge.value(start), gauge.step).max(gauge.step));
+        let unit_changed = old.unit != gauge.unit;
+        self.try_update(|t| {
+            t.divers[i].gauge = Some(gauge);
+            if unit_changed {
+                t.divers[i].start = placeholder;
+            }
+        })?;
+        if unit_changed {
+            self.readings.clear(i);
+        }
+        Ok(())
+    }
+
+    /// The next gauge in the card's cycle: 10 bar, 5 bar, 100 psi, 50 psi, then 10 bar.
+    pub fn cycle_gauge(&mut self, i: usize) -> Result<(), InputError> {
+        let g = self.input.gauge_of(i);
+        let cycle = [
+            Gauge { unit: PressureUnit::Bar, step: 10.0 },
+            Gauge { unit: PressureUnit::Bar, step: 5.0 },
+            Gauge { unit: PressureUnit::Psi, step: 100.0 },
+            Gauge { unit: PressureUnit::Psi, step: 50.0 },
+        ];
+        let at = cycle.iter().position(|c| *c == g).map_or(0, |k| (k + 1) % cycle.len());
+        self.set_gauge(i, cycle[at])
     }
 
     pub fn input(&self) -> &TeamInput {
@@ -120,12 +192,12 @@ impl TeamController {
         self.try_update(|t| t.divers[i].start = p)
     }
 
-    /// Move a start pressure to the next gauge step up (`dir` > 0) or down.
+    /// Move a start pressure to the next graduation of the diver's gauge, up (`dir` > 0)
+    /// or down.
     pub fn nudge_start(&mut self, i: usize, dir: i32) -> Result<(), InputError> {
-        let u = self.input.units;
-        let step = self.input.gauge_step;
-        let v = u.pressure_value(self.input.divers[i].start);
-        self.set_start(i, u.pressure(next_step(v, step, dir)))
+        let g = self.input.gauge_of(i);
+        let v = g.value(self.input.divers[i].start);
+        self.set_start(i, g.pressure(next_step(v, g.step, dir)))
     }
 
     pub fn set_name(&mut self, i: usize, name: &str) -> Result<(), InputError> {
@@ -167,20 +239,41 @@ impl TeamController {
     }
 
     /// Switch units. Pressures, depth and breathing rates keep their physical value;
-    /// the gauge step moves to the matching option of the new system.
+    /// the gauge step moves to the matching option of the new system. A diver whose start
+    /// was entered keeps the gauge it was read on, so their start is never shown as a
+    /// number their gauge does not show; divers without a reading follow the team.
     pub fn set_units(&mut self, units: UnitSystem) -> Result<(), InputError> {
         let old = self.input.units;
         if old == units {
             return Ok(());
         }
+        let pinned: Vec<Option<Gauge>> = (0..self.len())
+            .map(|i| {
+                let d = &self.input.divers[i];
+                match (d.gauge, self.readings.get(i)) {
+                    (Some(g), _) => Some(g),
+                    (None, Some(_)) => Some(self.input.default_gauge()),
+                    (None, None) => None,
+                }
+            })
+            .collect();
         let idx = step_options(old)
             .iter()
             .position(|s| (*s - self.input.gauge_step).abs() < 1e-9)
             .unwrap_or(1);
         let step = step_options(units)[idx];
+        let new_unit = units.pressure_unit();
         self.try_update(|t| {
             t.units = units;
             t.gauge_step = step;
+            for (d, g) in t.divers.iter_mut().zip(&pinned) {
+                d.gauge = *g;
+                if g.is_none() {
+                    // An unread placeholder: on the new unit's graduation.
+                    let v = round_down_to_step(new_unit.value(d.start), step).max(step);
+                    d.start = new_unit.pressure(v);
+                }
+            }
         })
     }
 }

@@ -25,6 +25,8 @@ impl TeamController {
                     t.divers[i].cylinders = set;
                     t.divers[i].start = wp;
                 })?;
+                // The working pressure stands in for a start nobody read.
+                self.readings.clear(i);
                 true
             }
         };
@@ -110,6 +112,8 @@ impl TeamController {
         })?;
         self.labels.push(label.to_string());
         self.stage_labels.push(String::new());
+        // The start is a placeholder until someone reads the gauge in the water.
+        self.readings.push_unread();
         Ok(())
     }
 
@@ -125,6 +129,7 @@ impl TeamController {
         })?;
         self.labels.remove(i);
         self.stage_labels.remove(i);
+        self.readings.remove(i);
         Ok(())
     }
 
@@ -150,5 +155,6 @@ impl TeamController {
         }
         let _ = self.set_depth(None);
         let _ = self.set_water_temp(water_temp);
+        self.forget_readings();
     }
 }

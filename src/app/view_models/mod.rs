@@ -30,7 +30,8 @@ pub use team::{
 };
 pub use tools::{ChartRowVm, ChartVm, FillVm, chart, fill};
 pub use turns::{
-    TurnRowVm, first_text, margin_text, pressure_unit, rule_text, stage_text, turn_rows, warnings,
+    TurnRowVm, first_text, margin_text, pressure_unit, rule_text, stage_text, starts_blocking,
+    turn_rows, warnings,
 };
 
 /// Float noise tolerated when a value is read as whole units.
@@ -219,5 +220,78 @@ mod tests {
         );
         assert_eq!(rule_warning(Rule::Thirds), "");
         assert_eq!(rule_index(Rule::Quarters), 2);
+    }
+}
+
+/// A gauge as the card's button shows it: "bar · 10".
+pub fn gauge_text(g: Gauge) -> String {
+    format!("{} · {}", g.label(), fmt_num(g.step))
+}
+
+/// An input error in words for a person: the diver's name and the field in plain words
+/// instead of a path like `divers[0].stage.start`.
+pub fn error_for_people(names: &[String], e: &crate::plan::InputError) -> String {
+    let mut field = e.field.as_str();
+    let mut who = String::new();
+    if let Some(rest) = field.strip_prefix("divers[") {
+        if let Some((n, tail)) = rest.split_once(']') {
+            if let Some(name) = n.parse::<usize>().ok().and_then(|i| names.get(i)) {
+                who = name.clone();
+            }
+            field = tail.trim_start_matches('.');
+        }
+    }
+    let words: Vec<&str> = field
+        .split('.')
+        .filter(|p| !p.is_empty())
+        .map(|p| match p {
+            "water_l" => "water capacity",
+            "working_bar" => "working pressure",
+            "rated_cuft" => "rated volume",
+            "rated_psi" => "rated pressure",
+            "sac" => "breathing rate",
+            "gauge_step" => "gauge step",
+            "step" => "graduation",
+            "water_temp" => "water temperature",
+            "o2" => "oxygen",
+            "he" => "helium",
+            "count" => "number of cylinders",
+            other => other,
+        })
+        .collect();
+    let what = words.join(" ");
+    match (who.is_empty(), what.is_empty()) {
+        (true, true) => first_upper(&e.message),
+        (true, false) => format!("{}: {}", first_upper(&what), e.message),
+        (false, true) => format!("{who}: {}", e.message),
+        (false, false) => format!("{who}, {what}: {}", e.message),
+    }
+}
+
+/// The first letter upper case, the rest as it is.
+fn first_upper(s: &str) -> String {
+    let mut c = s.chars();
+    match c.next() {
+        Some(f) => f.to_uppercase().collect::<String>() + c.as_str(),
+        None => String::new(),
+    }
+}
+
+#[cfg(test)]
+mod people_tests {
+    use super::*;
+
+    #[test]
+    fn errors_read_without_field_paths() {
+        let names = vec!["Ines".to_string(), "Bram".to_string()];
+        let e = crate::plan::InputError::new("divers[1].stage.start", "5 bar is not a fill");
+        assert_eq!(error_for_people(&names, &e), "Bram, stage start: 5 bar is not a fill");
+        let e = crate::plan::InputError::new("divers[0].cylinders.water_l", "too big");
+        assert_eq!(
+            error_for_people(&names, &e),
+            "Ines, cylinders water capacity: too big"
+        );
+        let e = crate::plan::InputError::new("gauge_step", "out of range");
+        assert_eq!(error_for_people(&names, &e), "Gauge step: out of range");
     }
 }

@@ -2,9 +2,10 @@
 
 use super::super::session::Session;
 use super::{
-    depth_text, rate_text, rule_index, rule_warning, start_text, step_index, step_labels,
-    temperature_text, turn_text,
+    depth_text, gauge_text, rate_text, reading, rule_index, rule_warning, step_index,
+    step_labels, temperature_text, turn_text,
 };
+use crate::app::readings::{StartStatus, now, when_text};
 use crate::plan::Water;
 
 /// The Team page besides the cards.
@@ -40,8 +41,16 @@ pub struct DiverCardVm {
     pub name: String,
     pub cylinders: String,
     pub mix: String,
+    /// The start on the diver's gauge, or "—" when nobody has read it.
     pub start: String,
     pub unit: String,
+    /// The diver's gauge: "bar · 10".
+    pub gauge: String,
+    /// What the start is worth: not read, entered earlier (check), predicted; empty when
+    /// it was read today.
+    pub start_note: String,
+    /// "Still reads 220 bar" for a start entered earlier; empty otherwise.
+    pub confirm: String,
     pub sac: String,
     pub error: String,
     pub has_stage: bool,
@@ -54,16 +63,31 @@ pub fn diver_cards(s: &Session) -> Vec<DiverCardVm> {
     let input = s.team.input();
     let u = input.units;
     let warnings = &s.team.plan().warnings;
+    let now = now();
     input
         .divers
         .iter()
         .enumerate()
-        .map(|(i, d)| DiverCardVm {
+        .map(|(i, d)| {
+            let g = input.gauge_of(i);
+            let status = s.team.start_status(i, now);
+            let read = reading(g, d.start);
+            DiverCardVm {
             name: d.name.clone(),
             cylinders: s.team.labels()[i].clone(),
             mix: d.mix.label(),
-            start: start_text(u, d.start),
-            unit: u.pressure_label().to_string(),
+            start: if status == StartStatus::Missing {
+                "—".to_string()
+            } else {
+                read.clone()
+            },
+            unit: g.label().to_string(),
+            gauge: gauge_text(g),
+            start_note: start_note(status, now),
+            confirm: match status {
+                StartStatus::Old { .. } => format!("Still reads {read} {}", g.label()),
+                _ => String::new(),
+            },
             sac: match d.sac_l_per_min {
                 Some(l) => format!("SAC {} {}/min", rate_text(u, l), u.volume_label()),
                 None => "SAC — tap to add for time to turn".to_string(),
@@ -87,23 +111,43 @@ pub fn diver_cards(s: &Session) -> Vec<DiverCardVm> {
             stage_start: d
                 .stage
                 .as_ref()
-                .map(|st| start_text(u, st.start))
+                .map(|st| reading(g, st.start))
                 .unwrap_or_default(),
-        })
+        }})
         .collect()
+}
+
+/// A start's status in words for its card; empty for a start read today.
+pub fn start_note(status: StartStatus, now: i64) -> String {
+    match status {
+        StartStatus::Fresh => String::new(),
+        StartStatus::Missing => "Not read yet: read the gauge in the water".to_string(),
+        StartStatus::Predicted => {
+            "Predicted from the fill: read the gauge in the water".to_string()
+        }
+        StartStatus::Old { at } => format!("Entered {}: check the gauge", when_text(at, now)),
+    }
 }
 
 pub fn team_summary(s: &Session) -> String {
     let plan = s.team.plan();
-    let u = s.units();
+    if let Some(wait) = super::turns::starts_blocking(s) {
+        return wait;
+    }
     let turns: Vec<String> = plan
         .divers
         .iter()
-        .map(|d| format!("{} {}", d.name, turn_text(d.turn_shown_value)))
+        .map(|d| {
+            format!(
+                "{} {} {}",
+                d.name,
+                turn_text(d.turn_shown_value),
+                d.gauge.label()
+            )
+        })
         .collect();
     format!(
-        "Turns ({}): {} · ▶ {} controls",
-        u.pressure_label(),
+        "Turns: {} · {} controls (least usable gas)",
         turns.join(" · "),
         plan.controlling_diver().name
     )

@@ -2,28 +2,29 @@
 //! rule line, the stress margin and who turns first.
 
 use super::super::session::Session;
-use super::{start_text, temperature_text, turn_text, volume_down_text};
-use crate::plan::ModelKind;
-use crate::plan::error::fmt_num;
+use super::{gauge_text, reading, temperature_text, turn_text, volume_down_text};
+use crate::app::readings::{StartStatus, now, when_text};
+use crate::plan::hand_check::{hand_working, turn_sentence};
 
-/// "Stage: drop at 160 bar …" for a diver with a stage, else empty.
+/// "Drop stage at 140 bar (Aluminium 40, EAN32, start 200 bar)" for a diver with a
+/// stage, else empty.
 pub fn stage_text(s: &Session, i: usize) -> String {
     let plan = s.team.plan();
-    let u = s.units();
+    let g = plan.divers[i].gauge;
     match (&plan.divers[i].stage, &s.team.input().divers[i].stage) {
         (Some(st), Some(si)) => format!(
-            "Stage: drop at {} {} · {} {} from {} · {}{}",
+            "Drop stage at {} {u} ({}, {}, start {} {u}; set by {}){}",
             turn_text(st.drop_shown_value),
-            u.pressure_label(),
             s.team.stage_labels()[i],
             si.mix.label(),
-            start_text(u, st.start),
+            reading(g, st.start),
             st.set_by.describe(),
             if st.controlling {
-                " · ▶ controls stages"
+                ". This stage has the least usable gas and sets every stage's drop."
             } else {
                 ""
-            }
+            },
+            u = g.label(),
         ),
         _ => String::new(),
     }
@@ -31,88 +32,138 @@ pub fn stage_text(s: &Session, i: usize) -> String {
 
 pub struct TurnRowVm {
     pub name: String,
+    /// The turn on the diver's gauge, or "—" while a start is not read today.
     pub turn: String,
     pub unit: String,
     pub detail: String,
+    /// How the shown turn follows from the hand and real-gas figures, in one reading.
     pub set_by: String,
+    /// The pencil sums behind the hand figure.
+    pub hand: String,
     pub minutes: String,
     pub controlling: bool,
     pub stage: String,
-    /// Short form for the buddy view: "stage 160" (the stage drop pressure).
+    /// Short form for the buddy view: "drop stage 160".
     pub stage_short: String,
+}
+
+/// Why there are no turns yet, naming each diver whose start is not a reading taken
+/// today; None when every start is.
+pub fn starts_blocking(s: &Session) -> Option<String> {
+    let now = now();
+    let input = s.team.input();
+    let why: Vec<String> = s
+        .team
+        .readings()
+        .blocking(now)
+        .into_iter()
+        .filter(|&i| i < input.divers.len())
+        .map(|i| {
+            let name = &input.divers[i].name;
+            match s.team.start_status(i, now) {
+                StartStatus::Old { at } => {
+                    format!("{name} (start entered {}: check)", when_text(at, now))
+                }
+                _ => format!("{name} (start not read)"),
+            }
+        })
+        .collect();
+    if why.is_empty() {
+        None
+    } else {
+        Some(format!(
+            "No turn pressures until every start is read in the water today: {}.",
+            why.join(", ")
+        ))
+    }
 }
 
 pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
     let plan = s.team.plan();
     let input = s.team.input();
-    let u = input.units;
+    let ready = starts_blocking(s).is_none();
+    let now = now();
     plan.divers
         .iter()
         .enumerate()
         .map(|(i, d)| {
-            let other = match d.set_by {
-                ModelKind::Hand => d.turn_real,
-                ModelKind::Real => d.turn_hand,
-            };
+            let g = d.gauge;
+            let predicted = s.team.start_status(i, now) == StartStatus::Predicted;
+            let hand = hand_working(input, plan, i);
             TurnRowVm {
                 name: d.name.clone(),
-                turn: turn_text(d.turn_shown_value),
-                unit: u.pressure_label().to_string(),
+                turn: if ready {
+                    turn_text(d.turn_shown_value)
+                } else {
+                    "—".to_string()
+                },
+                unit: g.label().to_string(),
                 detail: format!(
-                    "{} → {} {} · {} · {}",
-                    start_text(u, d.start),
-                    turn_text(d.turn_shown_value),
-                    u.pressure_label(),
+                    "Start {} {}{} · {} · {} · gauge {}",
+                    reading(g, d.start),
+                    g.label(),
+                    if predicted { " (predicted, not read)" } else { "" },
                     s.team.labels()[i],
-                    input.divers[i].mix.label()
+                    input.divers[i].mix.label(),
+                    gauge_text(g)
                 ),
-                set_by: format!(
-                    "Set by {} (exact {:.0}; {} says {:.0})",
-                    d.set_by.describe(),
-                    u.pressure_value(match d.set_by {
-                        ModelKind::Hand => d.turn_hand,
-                        ModelKind::Real => d.turn_real,
-                    }),
-                    match d.set_by {
-                        ModelKind::Hand => ModelKind::Real.describe(),
-                        ModelKind::Real => ModelKind::Hand.describe(),
-                    },
-                    u.pressure_value(other)
-                ),
-                minutes: d
-                    .minutes_to_turn
-                    .map(|m| {
-                        format!(
-                            "About {} min to turn at the planned depth",
-                            m.floor() as i64
-                        )
-                    })
-                    .unwrap_or_default(),
+                set_by: if ready {
+                    capitalised_first(&turn_sentence(plan, i))
+                } else {
+                    String::new()
+                },
+                hand: if ready {
+                    format!("By hand: {}; {}", hand.content, hand.turn)
+                } else {
+                    String::new()
+                },
+                minutes: match (ready, d.minutes_to_turn) {
+                    (true, Some(m)) => format!(
+                        "About {} min to turn at the planned depth",
+                        m.floor() as i64
+                    ),
+                    _ => String::new(),
+                },
                 controlling: d.controlling,
-                stage: stage_text(s, i),
-                stage_short: d
-                    .stage
-                    .as_ref()
-                    .map(|st| format!("stage {}", turn_text(st.drop_shown_value)))
-                    .unwrap_or_default(),
+                stage: if ready { stage_text(s, i) } else { String::new() },
+                stage_short: {
+                    let mut parts = Vec::new();
+                    if predicted {
+                        parts.push("start predicted".to_string());
+                    }
+                    if let (Some(st), true) = (&d.stage, ready) {
+                        parts.push(format!("drop stage {}", turn_text(st.drop_shown_value)));
+                    }
+                    parts.join(" · ")
+                },
             }
         })
         .collect()
 }
 
+/// The rule line: the rule, the water and what each diver may use going in.
 pub fn rule_text(s: &Session) -> String {
     let input = s.team.input();
     let u = input.units;
     let plan = s.team.plan();
+    let c = plan.controlling_diver();
     format!(
-        "Rule of {} · gauge step {} {} · water {} · team allowance {} ({} controls)",
+        "Rule of {} · water {} · each diver may use {} going in (real gas; {} by hand). {} controls: {} has the least usable gas, and that sets everyone's allowance.",
         input.rule.name(),
-        fmt_num(input.gauge_step),
-        u.pressure_label(),
         temperature_text(u, input.water_temp),
         volume_down_text(u, plan.team_allowance_real),
-        plan.controlling_diver().name
+        volume_down_text(u, plan.team_allowance_hand),
+        c.name,
+        c.name,
     )
+}
+
+fn capitalised_first(s: &str) -> String {
+    let mut c = s.chars();
+    match c.next() {
+        Some(f) => f.to_uppercase().collect::<String>() + c.as_str(),
+        None => String::new(),
+    }
 }
 
 pub fn margin_text(s: &Session) -> String {
@@ -142,7 +193,7 @@ pub fn warnings(s: &Session) -> Vec<String> {
     s.team.plan().warning_texts()
 }
 
-/// The team's pressure unit: "bar" or "psi".
+/// The team's default pressure unit: "bar" or "psi".
 pub fn pressure_unit(s: &Session) -> String {
     s.units().pressure_label().to_string()
 }

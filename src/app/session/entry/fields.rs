@@ -38,8 +38,18 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
         EntryTarget::Start(i) => {
             let d = input.divers.get(i)?;
             let g = input.gauge_of(i);
+            // A start nobody read opens empty: the number must come from the gauge.
+            let unread = s.team.start_status(i, crate::app::readings::now())
+                == crate::app::readings::StartStatus::Missing;
             Field {
-                buffer: KeypadBuffer::digits(&vm::reading(g, d.start), false),
+                buffer: KeypadBuffer::digits(
+                    &if unread {
+                        String::new()
+                    } else {
+                        vm::reading(g, d.start)
+                    },
+                    false,
+                ),
                 title: format!(
                     "Start pressure for {} ({}), read in the water",
                     d.name,
@@ -54,7 +64,11 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                     validate_start(g, "start", g.pressure(v), working)
                 }),
                 apply: apply(move |s, t| s.team.set_start(i, pressure(g.unit, t)?)),
-                on_done: None,
+                // Done on a start is entering a reading taken now.
+                on_done: Some(apply(move |s, _| {
+                    s.team.mark_read(i, crate::app::readings::now());
+                    Ok(())
+                })),
             }
         }
         EntryTarget::StageStart(i) => {
