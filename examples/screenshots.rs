@@ -54,6 +54,15 @@ fn main() {
 
     shot("01-cautions", &|_| {});
     shot("02-team", &|s| s.acknowledge_cautions());
+    // The demo's starts are unread: the Turns page says whose and shows no numbers.
+    shot("16-turns-waiting", &|s| s.go(Screen::Turns));
+    // Read every start in the water (here: confirm the demo's numbers).
+    shot("17-team-read", &|s| {
+        s.back();
+        for i in 0..s.team.len() {
+            s.confirm_start(i);
+        }
+    });
     shot("03-keypad", &|s| {
         s.open_entry(EntryTarget::Start(1));
         for k in ["clear", "2", "1", "0"] {
@@ -115,9 +124,20 @@ fn main() {
         s.go(Screen::Turns);
         s.go(Screen::Chart);
     });
+    // Imperial volumes; Bram reads a psi gauge (two taps on his gauge button) and his
+    // start is read again on it. Every other diver keeps the bar gauge they read.
     shot("14-turns-imperial", &|s| {
         s.back();
+        s.back();
         s.set_units(turnsheet::plan::UnitSystem::Imperial);
+        s.cycle_gauge(1);
+        s.cycle_gauge(1);
+        s.open_entry(EntryTarget::Start(1));
+        for k in ["clear", "2", "9", "5", "0"] {
+            s.key(k);
+        }
+        s.entry_done();
+        s.go(Screen::Turns);
     });
     shot("15-buddy-imperial", &|s| s.go(Screen::Buddy));
 }
