@@ -424,7 +424,11 @@ fn turns_wait_until_every_start_is_read_today() {
     read_every_start(&app);
     press(&app, "show turns");
     assert_ne!(value(&app, "turn of Ines"), "— bar");
-    assert!(ElementHandle::find_by_accessible_label(&app.window, "plan problem").next().is_none());
+    assert!(
+        ElementHandle::find_by_accessible_label(&app.window, "plan problem")
+            .next()
+            .is_none()
+    );
     // A new diver has no start until it is read, and the turns wait for it.
     back_key(&app);
     press(&app, "add diver");
@@ -460,7 +464,11 @@ fn a_start_entered_on_an_earlier_day_must_be_confirmed() {
     for name in ["Ines", "Bram", "Sol"] {
         press(&app, &format!("confirm start of {name}"));
     }
-    assert!(ElementHandle::find_by_accessible_label(&app.window, "start note of Ines").next().is_none());
+    assert!(
+        ElementHandle::find_by_accessible_label(&app.window, "start note of Ines")
+            .next()
+            .is_none()
+    );
     press(&app, "show turns");
     let plan = plan_team(
         &TeamFile::parse(turnsheet::app::session::DEMO_TEAM)

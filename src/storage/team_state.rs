@@ -41,4 +41,3 @@ pub struct StartReading {
     /// Gauge or prediction.
     pub source: Source,
 }
-

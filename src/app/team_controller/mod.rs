@@ -5,7 +5,9 @@ use crate::formats::team_file::TeamFile;
 use crate::plan::error::InputError;
 use crate::plan::rounding::next_step;
 use crate::plan::rounding::round_down_to_step;
-use crate::plan::{Gauge, Mix, Pressure, PressureUnit, Rule, TeamInput, TeamPlan, UnitSystem, plan_team};
+use crate::plan::{
+    Gauge, Mix, Pressure, PressureUnit, Rule, TeamInput, TeamPlan, UnitSystem, plan_team,
+};
 use crate::storage::team_state::{TEAM_SCHEMA, TeamState};
 
 use super::readings::{Readings, Source, StartStatus};
@@ -116,7 +118,8 @@ impl TeamController {
     pub fn set_gauge(&mut self, i: usize, gauge: Gauge) -> Result<(), InputError> {
         let old = self.input.gauge_of(i);
         let start = self.input.divers[i].start;
-        let placeholder = gauge.pressure(round_down_to_step(gauge.value(start), gauge.step).max(gauge.step));
+        let placeholder =
+            gauge.pressure(round_down_to_step(gauge.value(start), gauge.step).max(gauge.step));
         let unit_changed = old.unit != gauge.unit;
         self.try_update(|t| {
             t.divers[i].gauge = Some(gauge);
@@ -134,12 +137,27 @@ impl TeamController {
     pub fn cycle_gauge(&mut self, i: usize) -> Result<(), InputError> {
         let g = self.input.gauge_of(i);
         let cycle = [
-            Gauge { unit: PressureUnit::Bar, step: 10.0 },
-            Gauge { unit: PressureUnit::Bar, step: 5.0 },
-            Gauge { unit: PressureUnit::Psi, step: 100.0 },
-            Gauge { unit: PressureUnit::Psi, step: 50.0 },
+            Gauge {
+                unit: PressureUnit::Bar,
+                step: 10.0,
+            },
+            Gauge {
+                unit: PressureUnit::Bar,
+                step: 5.0,
+            },
+            Gauge {
+                unit: PressureUnit::Psi,
+                step: 100.0,
+            },
+            Gauge {
+                unit: PressureUnit::Psi,
+                step: 50.0,
+            },
         ];
-        let at = cycle.iter().position(|c| *c == g).map_or(0, |k| (k + 1) % cycle.len());
+        let at = cycle
+            .iter()
+            .position(|c| *c == g)
+            .map_or(0, |k| (k + 1) % cycle.len());
         self.set_gauge(i, cycle[at])
     }
 

@@ -233,13 +233,14 @@ pub fn gauge_text(g: Gauge) -> String {
 pub fn error_for_people(names: &[String], e: &crate::plan::InputError) -> String {
     let mut field = e.field.as_str();
     let mut who = String::new();
-    if let Some(rest) = field.strip_prefix("divers[") {
-        if let Some((n, tail)) = rest.split_once(']') {
-            if let Some(name) = n.parse::<usize>().ok().and_then(|i| names.get(i)) {
-                who = name.clone();
-            }
-            field = tail.trim_start_matches('.');
+    if let Some((n, tail)) = field
+        .strip_prefix("divers[")
+        .and_then(|rest| rest.split_once(']'))
+    {
+        if let Some(name) = n.parse::<usize>().ok().and_then(|i| names.get(i)) {
+            who = name.clone();
         }
+        field = tail.trim_start_matches('.');
     }
     let words: Vec<&str> = field
         .split('.')
@@ -285,7 +286,10 @@ mod people_tests {
     fn errors_read_without_field_paths() {
         let names = vec!["Ines".to_string(), "Bram".to_string()];
         let e = crate::plan::InputError::new("divers[1].stage.start", "5 bar is not a fill");
-        assert_eq!(error_for_people(&names, &e), "Bram, stage start: 5 bar is not a fill");
+        assert_eq!(
+            error_for_people(&names, &e),
+            "Bram, stage start: 5 bar is not a fill"
+        );
         let e = crate::plan::InputError::new("divers[0].cylinders.water_l", "too big");
         assert_eq!(
             error_for_people(&names, &e),

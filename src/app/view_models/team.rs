@@ -2,8 +2,8 @@
 
 use super::super::session::Session;
 use super::{
-    depth_text, gauge_text, rate_text, reading, rule_index, rule_warning, step_index,
-    step_labels, temperature_text, turn_text,
+    depth_text, gauge_text, rate_text, reading, rule_index, rule_warning, step_index, step_labels,
+    temperature_text, turn_text,
 };
 use crate::app::readings::{StartStatus, now, when_text};
 use crate::plan::Water;
@@ -73,47 +73,48 @@ pub fn diver_cards(s: &Session) -> Vec<DiverCardVm> {
             let status = s.team.start_status(i, now);
             let read = reading(g, d.start);
             DiverCardVm {
-            name: d.name.clone(),
-            cylinders: s.team.labels()[i].clone(),
-            mix: d.mix.label(),
-            start: if status == StartStatus::Missing {
-                "—".to_string()
-            } else {
-                read.clone()
-            },
-            unit: g.label().to_string(),
-            gauge: gauge_text(g),
-            start_note: start_note(status, now),
-            confirm: match status {
-                StartStatus::Old { .. } => format!("Still reads {read} {}", g.label()),
-                _ => String::new(),
-            },
-            sac: match d.sac_l_per_min {
-                Some(l) => format!("SAC {} {}/min", rate_text(u, l), u.volume_label()),
-                None => "SAC — tap to add for time to turn".to_string(),
-            },
-            error: warnings
-                .iter()
-                .filter(|w| w.diver() == Some(i))
-                .map(|w| w.detail())
-                .collect::<Vec<_>>()
-                .join(" "),
-            has_stage: d.stage.is_some(),
-            stage: match &d.stage {
-                Some(_) => format!("Stage: {}", s.team.stage_labels()[i]),
-                None => "+ Stage (dropped on the way in)".to_string(),
-            },
-            stage_mix: d
-                .stage
-                .as_ref()
-                .map(|st| st.mix.label())
-                .unwrap_or_default(),
-            stage_start: d
-                .stage
-                .as_ref()
-                .map(|st| reading(g, st.start))
-                .unwrap_or_default(),
-        }})
+                name: d.name.clone(),
+                cylinders: s.team.labels()[i].clone(),
+                mix: d.mix.label(),
+                start: if status == StartStatus::Missing {
+                    "—".to_string()
+                } else {
+                    read.clone()
+                },
+                unit: g.label().to_string(),
+                gauge: gauge_text(g),
+                start_note: start_note(status, now),
+                confirm: match status {
+                    StartStatus::Old { .. } => format!("Still reads {read} {}", g.label()),
+                    _ => String::new(),
+                },
+                sac: match d.sac_l_per_min {
+                    Some(l) => format!("SAC {} {}/min", rate_text(u, l), u.volume_label()),
+                    None => "SAC — tap to add for time to turn".to_string(),
+                },
+                error: warnings
+                    .iter()
+                    .filter(|w| w.diver() == Some(i))
+                    .map(|w| w.detail())
+                    .collect::<Vec<_>>()
+                    .join(" "),
+                has_stage: d.stage.is_some(),
+                stage: match &d.stage {
+                    Some(_) => format!("Stage: {}", s.team.stage_labels()[i]),
+                    None => "+ Stage (dropped on the way in)".to_string(),
+                },
+                stage_mix: d
+                    .stage
+                    .as_ref()
+                    .map(|st| st.mix.label())
+                    .unwrap_or_default(),
+                stage_start: d
+                    .stage
+                    .as_ref()
+                    .map(|st| reading(g, st.start))
+                    .unwrap_or_default(),
+            }
+        })
         .collect()
 }
 

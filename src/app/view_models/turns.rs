@@ -102,7 +102,11 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
                     "Start {} {}{} · {} · {} · gauge {}",
                     reading(g, d.start),
                     g.label(),
-                    if predicted { " (predicted, not read)" } else { "" },
+                    if predicted {
+                        " (predicted, not read)"
+                    } else {
+                        ""
+                    },
                     s.team.labels()[i],
                     input.divers[i].mix.label(),
                     gauge_text(g)
@@ -125,7 +129,11 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
                     _ => String::new(),
                 },
                 controlling: d.controlling,
-                stage: if ready { stage_text(s, i) } else { String::new() },
+                stage: if ready {
+                    stage_text(s, i)
+                } else {
+                    String::new()
+                },
                 stage_short: {
                     let mut parts = Vec::new();
                     if predicted {
