@@ -720,3 +720,27 @@ fn the_set_marked_mine_starts_a_new_team() {
     }
     assert!(s.team.labels().iter().all(|l| l == "Twin 10 L 300 bar"));
 }
+
+#[test]
+fn the_keypad_replaces_the_old_value_on_the_first_digit() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_acknowledged(dir.path());
+    press(&app, "start pressure of Ines");
+    assert_eq!(value(&app, "entry"), "218");
+    type_keys(&app, "2");
+    assert_eq!(value(&app, "entry"), "2");
+    type_keys(&app, "05");
+    press(&app, "done");
+    assert_eq!(value(&app, "start pressure of Ines"), "205 bar");
+    // A name that is too long is refused with a message, not cut short.
+    press(&app, "name of diver 1");
+    type_keys(&app, "ABCDEFGHIJKLMNOPQRSTUVWXYZ");
+    assert!(
+        value(&app, "entry problem").contains("24"),
+        "{}",
+        value(&app, "entry problem")
+    );
+    press(&app, "cancel entry");
+    assert_eq!(app.session.borrow().team.input().divers[0].name, "Ines");
+}

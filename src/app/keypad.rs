@@ -7,25 +7,39 @@ pub struct KeypadBuffer {
     letters: bool,
     decimal: bool,
     max_len: usize,
+    /// The text it opened with is selected: the first character typed replaces it, and
+    /// "del" removes it all.
+    selected: bool,
 }
 
 impl KeypadBuffer {
+    /// A number pad opening with `initial` selected.
     pub fn digits(initial: &str, decimal: bool) -> Self {
         KeypadBuffer {
             text: initial.to_string(),
             letters: false,
             decimal,
             max_len: 7,
+            selected: !initial.is_empty(),
         }
     }
 
+    /// A letter pad opening with `initial` selected. `max_len` leaves room past the
+    /// field's own limit, so a name that is too long gets a message instead of being
+    /// cut short silently.
     pub fn letters(initial: &str, max_len: usize) -> Self {
         KeypadBuffer {
             text: initial.to_string(),
             letters: true,
             decimal: false,
             max_len,
+            selected: !initial.is_empty(),
         }
+    }
+
+    /// Whether the opening text is still selected (the next character replaces it).
+    pub fn is_selected(&self) -> bool {
+        self.selected
     }
 
     pub fn text(&self) -> &str {
@@ -39,6 +53,7 @@ impl KeypadBuffer {
     }
     pub fn set_text(&mut self, text: String) {
         self.text = text;
+        self.selected = false;
     }
 
     /// The number typed, if any.
@@ -48,6 +63,18 @@ impl KeypadBuffer {
 
     /// Apply one key: a digit or letter, ".", "del", "clear" or " ". Unknown keys are ignored.
     pub fn press(&mut self, key: &str) {
+        if self.selected {
+            self.selected = false;
+            match key {
+                "del" | "clear" => {
+                    self.text.clear();
+                    return;
+                }
+                // A character replaces the selected text.
+                k if k.chars().count() == 1 => self.text.clear(),
+                _ => {}
+            }
+        }
         match key {
             "del" => {
                 self.text.pop();
@@ -115,6 +142,25 @@ mod tests {
         assert_eq!(b.value(), None);
         b.press("A");
         assert_eq!(b.text(), "");
+    }
+
+    #[test]
+    fn the_opening_value_is_replaced_by_the_first_key() {
+        let mut b = KeypadBuffer::digits("210", false);
+        assert!(b.is_selected());
+        b.press("2");
+        assert_eq!(b.text(), "2");
+        b.press("0");
+        assert_eq!(b.text(), "20");
+        let mut b = KeypadBuffer::digits("210", false);
+        b.press("del");
+        assert_eq!(b.text(), "");
+        let mut b = KeypadBuffer::letters("Ines", 32);
+        b.press("S");
+        assert_eq!(b.text(), "S");
+        // Digits are allowed in names.
+        b.press("2");
+        assert_eq!(b.text(), "S2");
     }
 
     #[test]

@@ -29,11 +29,38 @@ fn nudges_land_on_the_step() {
 #[test]
 fn units_switch_keeps_physical_pressures() {
     let mut t = demo();
+    // Bram's start was read on his bar gauge; Sol's was never read.
+    t.mark_read(1, crate::app::readings::now());
     let bar = t.input().divers[1].start.bar();
     t.set_units(UnitSystem::Imperial).unwrap();
     assert_eq!(t.input().gauge_step, 100.0);
     assert!((t.input().divers[1].start.bar() - bar).abs() < 1e-9);
+    assert_eq!(t.input().gauge_of(1).unit, crate::plan::PressureUnit::Bar);
     assert_eq!(t.plan().units, UnitSystem::Imperial);
+    // An unread placeholder follows the team onto the psi graduation.
+    assert_eq!(t.input().gauge_of(2).unit, crate::plan::PressureUnit::Psi);
+    assert_eq!(
+        t.input().gauge_of(2).value(t.input().divers[2].start) % 100.0,
+        0.0
+    );
+}
+
+#[test]
+fn a_new_gauge_unit_makes_the_start_unread() {
+    let mut t = demo();
+    let now = crate::app::readings::now();
+    t.mark_read(0, now);
+    t.cycle_gauge(0).unwrap(); // 5 bar: same unit, still read
+    assert_eq!(
+        t.start_status(0, now),
+        crate::app::readings::StartStatus::Fresh
+    );
+    t.cycle_gauge(0).unwrap(); // 100 psi: read again
+    assert_eq!(
+        t.start_status(0, now),
+        crate::app::readings::StartStatus::Missing
+    );
+    assert_eq!(t.input().gauge_of(0).unit, crate::plan::PressureUnit::Psi);
 }
 
 #[test]

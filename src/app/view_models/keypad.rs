@@ -9,6 +9,8 @@ pub struct KeypadVm {
     pub display: String,
     pub unit: String,
     pub reason: String,
+    /// The opening value is selected: the first key replaces it.
+    pub selected: bool,
     pub can_decimal: bool,
     /// The field has ± gauge-step buttons.
     pub can_step: bool,
@@ -25,6 +27,7 @@ pub fn keypad(s: &Session) -> Option<KeypadVm> {
         display: e.buffer().text().to_string(),
         unit: e.unit().to_string(),
         reason: e.reason().to_string(),
+        selected: e.buffer().is_selected(),
         can_decimal: e.buffer().allows_decimal(),
         can_step: e.step().is_some(),
         step_text: e.step().map(fmt_num).unwrap_or_default(),

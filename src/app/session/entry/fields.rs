@@ -58,6 +58,9 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                 unit: g.label().to_string(),
                 live: true,
                 step: Some(g.step),
+                // The plan goes back to the start it had, even when the keypad opened
+                // empty for an unread start.
+                revert: Some(vm::reading(g, d.start)),
                 check: check(move |s, t| {
                     let v = t.number("start", "enter the pressure read in the water")?;
                     let working = s.team.input().divers[i].cylinders.working_pressure();
@@ -85,6 +88,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                 unit: g.label().to_string(),
                 live: true,
                 step: None,
+                revert: None,
                 check: check(move |s, t| {
                     let v =
                         t.number("stage start", "enter the stage pressure read in the water")?;
@@ -115,6 +119,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                 unit: format!("{}/min", u.volume_label()),
                 live: true,
                 step: None,
+                revert: None,
                 check: no_check(),
                 apply: apply(move |s, t| s.team.set_sac(i, t.value.map(|v| u.volume(v).litres()))),
                 on_done: None,
@@ -132,6 +137,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             unit: u.depth_label().to_string(),
             live: true,
             step: None,
+            revert: None,
             check: no_check(),
             apply: apply(move |s, t| s.team.set_depth(t.value.map(|v| u.depth(v)))),
             on_done: None,
@@ -142,6 +148,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             unit: u.temperature_label().to_string(),
             live: true,
             step: None,
+            revert: None,
             check: check(|_, t| {
                 t.number("water temperature", "enter a temperature")
                     .map(|_| ())
@@ -154,11 +161,12 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             })),
         },
         EntryTarget::DiverName(i) => Field {
-            buffer: KeypadBuffer::letters(&input.divers.get(i)?.name, 24),
+            buffer: KeypadBuffer::letters(&input.divers.get(i)?.name, 32),
             title: format!("Name for diver {}", i + 1),
             unit: String::new(),
             live: true,
             step: None,
+            revert: None,
             check: check(move |s, t| {
                 let taken = s
                     .team
@@ -190,6 +198,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             unit: String::new(),
             live: false,
             step: None,
+            revert: None,
             check: check(|_, t| {
                 if t.text.is_empty() {
                     Err(InputError::new("name", "a name is needed"))
@@ -209,6 +218,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             unit: String::new(),
             live: false,
             step: None,
+            revert: None,
             check: no_check(),
             apply: apply(|s, t| {
                 s.locker.edit_draft(|d| d.note = t.text.to_string());
@@ -231,6 +241,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                 unit: unit.to_string(),
                 live: false,
                 step: None,
+                revert: None,
                 check: check(move |s, t| match s.locker.draft() {
                     None => Ok(()),
                     Some(d) => {
@@ -258,6 +269,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             unit: u.pressure_label().to_string(),
             live: false,
             step: None,
+            revert: None,
             check: check(move |_, t| {
                 let v = t.number("fill pressure", "enter a pressure")?;
                 let max = u.pressure_value(Pressure::from_bar(400.0)).floor();
@@ -275,6 +287,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             unit: u.temperature_label().to_string(),
             live: false,
             step: None,
+            revert: None,
             check: check(move |_, t| {
                 let v = t.number("fill temperature", "enter a temperature")?;
                 let lo = u.temperature_value(Temperature::from_celsius(0.0)).ceil();

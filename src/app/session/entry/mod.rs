@@ -51,6 +51,8 @@ pub struct Field {
     pub live: bool,
     /// The step of the ± buttons, if the field has them.
     pub step: Option<f64>,
+    /// What a bad key or Cancel puts back, when it is not the text the keypad opens with.
+    pub revert: Option<String>,
     pub check: Check,
     pub apply: Apply,
     /// What Done does besides, once the value is in place.
@@ -108,14 +110,18 @@ impl Session {
         let Some(field) = fields::field(self, target) else {
             return;
         };
-        let original = field.buffer.text().to_string();
+        let original = field
+            .revert
+            .clone()
+            .unwrap_or_else(|| field.buffer.text().to_string());
         let mut entry = Entry {
             target,
             field,
             original,
             reason: String::new(),
         };
-        entry.reason = reason((entry.field.check)(self, Typed::new(&entry.original)));
+        let opening = entry.field.buffer.text().to_string();
+        entry.reason = reason((entry.field.check)(self, Typed::new(&opening)));
         self.entry = Some(entry);
     }
 

@@ -149,10 +149,28 @@ fn opening_and_cancelling_an_imperial_start_changes_nothing() {
     let (_dir, mut s) = session();
     s.set_units(UnitSystem::Imperial);
     s.team.set_start(0, Pressure::from_psi(3000.0)).unwrap();
+    s.team.mark_read(0, crate::app::readings::now());
     let plan = s.team.plan().clone();
     s.open_entry(EntryTarget::Start(0));
     assert_eq!(s.entry.as_ref().unwrap().buffer().text(), "3000");
     s.key("9");
     s.cancel_entry();
     assert_eq!(s.team.plan(), &plan);
+}
+
+#[test]
+fn an_unread_start_opens_empty_and_a_bad_key_restores_the_placeholder() {
+    let (_dir, mut s) = session();
+    let before = start_bar(&s, 1);
+    s.open_entry(EntryTarget::Start(1));
+    assert_eq!(s.entry.as_ref().unwrap().buffer().text(), "");
+    assert!(!reason(&s).is_empty(), "Done needs a number from the gauge");
+    keys(&mut s, &["2", "0", "0", "0"]);
+    assert_eq!(start_bar(&s, 1), before);
+    s.cancel_entry();
+    assert_eq!(start_bar(&s, 1), before);
+    assert_eq!(
+        s.team.start_status(1, crate::app::readings::now()),
+        crate::app::readings::StartStatus::Missing
+    );
 }
