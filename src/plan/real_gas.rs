@@ -114,7 +114,7 @@ impl ContentModel for RealGasModel {
     /// (0..=400 bar gauge, clamped at both ends) and never NaN.
     fn pressure_for(&self, water: Volume, content: Volume) -> Pressure {
         let (w, c) = (water.litres(), content.litres());
-        if !(w > 0.0 && w.is_finite()) || !c.is_finite() || c <= 0.0 {
+        if !(w.is_finite() && w > 0.0 && c.is_finite() && c > 0.0) {
             return Pressure::ZERO;
         }
         let target = self.density_at_atm * (1.0 + c / w);
@@ -167,8 +167,7 @@ mod tests {
                         let c = Volume::from_litres(full.litres() * f64::from(k) / 40.0);
                         let direct = m.pressure_for(water, c).bar();
                         let oracle =
-                            bracketed_pressure(|p| m.content(water, p).litres(), c.litres())
-                                .bar();
+                            bracketed_pressure(|p| m.content(water, p).litres(), c.litres()).bar();
                         assert!(direct.is_finite() && (0.0..=400.0).contains(&direct));
                         worst = worst.max((direct - oracle).abs());
                         assert!(
