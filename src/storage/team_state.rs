@@ -2,6 +2,8 @@
 
 use serde::{Deserialize, Serialize};
 
+use super::atomic::WithinLimits;
+
 use crate::formats::team_file::TeamFile;
 
 pub const TEAM_SCHEMA: u32 = 1;
@@ -18,3 +20,6 @@ pub struct TeamState {
     #[serde(default)]
     pub stage_labels: Vec<String>,
 }
+
+/// The size limit on the file is enough; ranges are checked where the values are used.
+impl WithinLimits for TeamState {}
