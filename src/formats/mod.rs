@@ -1,4 +1,5 @@
 //! File formats (serde types and their conversion to the planning core).
 //! No I/O here: callers read and write the text.
 
+pub mod cylinder_spec;
 pub mod team_file;
