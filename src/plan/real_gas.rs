@@ -158,13 +158,13 @@ mod tests {
         let mut checked = 0;
         let mut worst: f64 = 0.0;
         for mix in mixes {
-            for t in [-2.0, 4.0, 12.0, 20.0, 35.0] {
+            for t in [-2.0, 12.0, 35.0] {
                 let m = RealGasModel::new(mix, Temperature::from_celsius(t));
-                for w in [0.5, 3.0, 11.1, 24.0, 48.0] {
+                for w in [0.5, 11.1, 48.0] {
                     let water = Volume::from_litres(w);
                     let full = m.content(water, Pressure::from_bar(MAX_MODEL_PRESSURE_BAR));
-                    for k in -2..=42 {
-                        let c = Volume::from_litres(full.litres() * f64::from(k) / 40.0);
+                    for k in -1..=21 {
+                        let c = Volume::from_litres(full.litres() * f64::from(k) / 20.0);
                         let direct = m.pressure_for(water, c).bar();
                         let oracle =
                             bracketed_pressure(|p| m.content(water, p).litres(), c.litres()).bar();
@@ -181,7 +181,7 @@ mod tests {
             }
         }
         eprintln!("direct vs bisection: {checked} points, worst difference {worst:.2e} bar");
-        assert_eq!(checked, 5 * 5 * 5 * 45);
+        assert_eq!(checked, 5 * 3 * 3 * 23);
         assert!(worst < 1e-6, "{worst}");
     }
 
