@@ -1,9 +1,11 @@
-//! Speed of the planning core: one real-gas content evaluation, one inverse solve,
-//! and whole team plans (the app recomputes on every key press).
+//! Speed of the planning core: one real-gas content evaluation, one inverse solve (direct,
+//! and the bisection it replaced), building a model, and whole team plans (the app
+//! recomputes on every key press). Figures and how to reproduce them: BENCHMARKS.md.
 
 use criterion::{Criterion, criterion_group, criterion_main};
 use std::hint::black_box;
 use turnsheet::formats::team_file::TeamFile;
+use turnsheet::plan::gas_model::bracketed_pressure;
 use turnsheet::plan::{ContentModel, Mix, Pressure, RealGasModel, Temperature, Volume, plan_team};
 
 fn benches(c: &mut Criterion) {
@@ -21,6 +23,21 @@ fn benches(c: &mut Criterion) {
             model.pressure_for(
                 black_box(Volume::from_litres(24.0)),
                 black_box(Volume::from_litres(3000.0)),
+            )
+        })
+    });
+    // The 40-step bisection the direct inverse replaced (kept as its test oracle).
+    c.bench_function("real_gas_inverse_bisection", |b| {
+        b.iter(|| {
+            let water = black_box(Volume::from_litres(24.0));
+            bracketed_pressure(|p| model.content(water, p).litres(), black_box(3000.0))
+        })
+    });
+    c.bench_function("real_gas_model_new", |b| {
+        b.iter(|| {
+            RealGasModel::new(
+                black_box(Mix::trimix(0.21, 0.35)),
+                black_box(Temperature::from_celsius(12.0)),
             )
         })
     });

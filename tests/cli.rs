@@ -345,3 +345,179 @@ fn each_diver_is_planned_on_their_own_gauge() {
     let line = text.lines().find(|l| l.contains("Bram")).unwrap();
     assert!(line.contains(&format!(" {} psi", turn)), "{line}");
 }
+
+/// Run the binary with its standard output going to `stdout`.
+fn run_into(args: &[&str], stdout: std::process::Stdio) -> (Option<i32>, String) {
+    let out = bin()
+        .args(args)
+        .stdout(stdout)
+        .stderr(std::process::Stdio::piped())
+        .output()
+        .unwrap();
+    (
+        out.status.code(),
+        String::from_utf8_lossy(&out.stderr).into_owned(),
+    )
+}
+
+fn demo_str() -> String {
+    demo_path().to_str().unwrap().to_string()
+}
+
+#[test]
+fn a_closed_pipe_ends_with_one_line_and_exit_3_never_a_panic() {
+    let demo = demo_str();
+    let commands: Vec<Vec<&str>> = vec![
+        vec!["plan", &demo],
+        vec!["plan", "--json", &demo],
+        vec!["chart", &demo],
+        vec!["gas", "--litres", "12", "--pressure", "232"],
+        vec!["--help"],
+    ];
+    for args in commands {
+        // The reading end is closed before the program starts: every write fails (EPIPE).
+        let (reader, writer) = std::io::pipe().unwrap();
+        drop(reader);
+        let (code, err) = run_into(&args, writer.into());
+        assert_eq!(code, Some(3), "{args:?}: {err}");
+        assert!(!err.contains("panicked"), "{args:?}: {err}");
+        assert_eq!(err.lines().count(), 1, "{args:?}: {err}");
+        assert!(
+            err.starts_with("turnsheet: could not write the output"),
+            "{err}"
+        );
+    }
+}
+
+#[test]
+fn a_full_disk_ends_with_one_line_and_exit_3_never_a_panic() {
+    let demo = demo_str();
+    for args in [
+        vec!["plan", demo.as_str()],
+        vec!["chart", "--json", demo.as_str()],
+        vec!["gas", "--litres", "12", "--pressure", "232", "--json"],
+    ] {
+        let full = std::fs::OpenOptions::new()
+            .write(true)
+            .open("/dev/full")
+            .unwrap();
+        let (code, err) = run_into(&args, full.into());
+        assert_eq!(code, Some(3), "{args:?}: {err}");
+        assert!(!err.contains("panicked"), "{err}");
+        assert_eq!(err.lines().count(), 1, "{err}");
+        assert!(err.contains("No space left"), "{err}");
+    }
+}
+
+#[test]
+fn gas_takes_negative_temperatures_without_an_equals_sign() {
+    let out = bin()
+        .args([
+            "gas",
+            "--litres",
+            "12",
+            "--pressure",
+            "232",
+            "--temp",
+            "-2",
+            "--to-temp",
+            "-1.5",
+            "--json",
+        ])
+        .output()
+        .unwrap();
+    assert_eq!(
+        out.status.code(),
+        Some(0),
+        "{}",
+        String::from_utf8_lossy(&out.stderr)
+    );
+    let v: serde_json::Value = serde_json::from_slice(&out.stdout).unwrap();
+    // Warming at constant density raises the pressure a little.
+    let after = v["pressure_after"].as_f64().unwrap();
+    assert!(after > 232.0 && after < 235.0, "{after}");
+    // A negative pressure is our message naming the field, not a parsing error.
+    let out = bin()
+        .args(["gas", "--litres", "12", "--pressure", "-5"])
+        .output()
+        .unwrap();
+    assert_eq!(out.status.code(), Some(2));
+    assert!(String::from_utf8_lossy(&out.stderr).contains("--pressure: must be above 0"));
+}
+
+fn plan_text(text: &[u8]) -> (i32, String, String) {
+    let dir = tempfile::tempdir().unwrap();
+    let path = dir.path().join("team.json");
+    std::fs::write(&path, text).unwrap();
+    let out = bin().arg("plan").arg(&path).output().unwrap();
+    (
+        out.status.code().unwrap_or(-1),
+        String::from_utf8_lossy(&out.stdout).into_owned(),
+        String::from_utf8_lossy(&out.stderr).into_owned(),
+    )
+}
+
+#[test]
+fn parse_errors_are_said_once_and_name_the_place() {
+    for text in ["", "{\"units\": \"metric\", ", "[1, 2]", "{\"units\": 7}"] {
+        let (code, out, err) = plan_text(text.as_bytes());
+        assert_eq!(code, 2, "{text}: {err}");
+        assert!(out.is_empty());
+        assert!(!err.contains("team file: team file"), "{text}: {err}");
+        assert!(
+            !err.contains("?:"),
+            "{text}: an unknown place is not shown as ?: {err}"
+        );
+        assert_eq!(err.lines().count(), 1, "{err}");
+    }
+    let (_, _, err) = plan_text(b"{\"units\": 7}");
+    assert!(err.starts_with("turnsheet: units: "), "{err}");
+    let (_, _, err) = plan_text(b"{\"units\": \"metric\", ");
+    assert!(err.starts_with("turnsheet: team file: EOF"), "{err}");
+}
+
+#[test]
+fn a_team_file_that_is_not_utf8_gets_a_byte_position() {
+    let mut bytes = std::fs::read(demo_path()).unwrap();
+    let at = bytes.windows(4).position(|w| w == b"Ines").unwrap();
+    bytes[at + 1] = 0xFF;
+    let line = bytes[..at].iter().filter(|&&b| b == b'\n').count() + 1;
+    let (code, _, err) = plan_text(&bytes);
+    assert_eq!(code, 2);
+    assert!(
+        err.contains(&format!("byte {} (line {line}, column", at + 1)),
+        "{err}"
+    );
+    assert!(err.contains("TEAM"), "{err}");
+}
+
+#[test]
+fn an_oversized_team_file_is_refused_before_reading() {
+    let mut text = serde_json::to_string(&demo()).unwrap();
+    text.push_str(&" ".repeat(1024 * 1024));
+    let t0 = std::time::Instant::now();
+    let (code, _, err) = plan_text(text.as_bytes());
+    assert_eq!(code, 2);
+    assert!(err.contains("the limit is 1 MB"), "{err}");
+    assert!(t0.elapsed() < std::time::Duration::from_secs(5));
+}
+
+#[test]
+fn a_huge_start_is_printed_as_a_number_not_a_saturated_integer() {
+    let mut t = demo();
+    t["divers"][0]["start"] = serde_json::json!(1e308);
+    let (code, _, err) = plan_json(&t);
+    assert_eq!(code, 2);
+    assert!(err.contains("divers[0].start"), "{err}");
+    assert!(err.contains("1e308"), "{err}");
+    assert!(!err.contains("9223372036854775807"), "{err}");
+}
+
+#[test]
+fn a_byte_order_mark_is_not_an_error() {
+    let mut bytes = "\u{feff}".as_bytes().to_vec();
+    bytes.extend(std::fs::read(demo_path()).unwrap());
+    let (code, out, err) = plan_text(&bytes);
+    assert_eq!(code, 0, "{err}");
+    assert!(out.contains("Ines"), "{out}");
+}

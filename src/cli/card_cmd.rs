@@ -7,6 +7,7 @@ use crate::plan::chart::team_charts;
 use crate::plan::error::InputError;
 use crate::plan::plan_team;
 
+use super::CliError;
 use super::plan_cmd::read_team;
 
 /// Arguments of `card`.
@@ -50,7 +51,7 @@ pub fn card_text(args: &CardArgs) -> Result<String, InputError> {
 }
 
 /// Run `card`: the SVG to standard output, or to the file with a line saying where.
-pub fn run(args: &CardArgs) -> Result<String, InputError> {
+pub fn run(args: &CardArgs) -> Result<String, CliError> {
     let svg = card_text(args)?;
     match &args.output {
         None => Ok(svg),
@@ -61,7 +62,7 @@ pub fn run(args: &CardArgs) -> Result<String, InputError> {
     }
 }
 
-fn write(path: &Path, text: &str) -> Result<(), InputError> {
+fn write(path: &Path, text: &str) -> Result<(), CliError> {
     std::fs::write(path, text)
-        .map_err(|e| InputError::new("--output", format!("cannot write {}: {e}", path.display())))
+        .map_err(|e| CliError::Write(format!("cannot write {}: {e}", path.display())))
 }

@@ -11,25 +11,25 @@ use super::PressureUnit;
 #[derive(clap::Args, Debug)]
 pub struct GasArgs {
     /// Water capacity in litres (all cylinders of the set together).
-    #[arg(long)]
+    #[arg(long, allow_negative_numbers = true)]
     pub litres: f64,
     /// Gauge pressure, in --unit.
-    #[arg(long)]
+    #[arg(long, allow_negative_numbers = true)]
     pub pressure: f64,
     /// Pressure unit.
     #[arg(long, value_enum, default_value_t = PressureUnit::Bar)]
     pub unit: PressureUnit,
     /// Oxygen, percent.
-    #[arg(long, default_value_t = 21.0)]
+    #[arg(long, default_value_t = 21.0, allow_negative_numbers = true)]
     pub o2: f64,
     /// Helium, percent.
-    #[arg(long, default_value_t = 0.0)]
+    #[arg(long, default_value_t = 0.0, allow_negative_numbers = true)]
     pub he: f64,
     /// Gas temperature now, °C.
-    #[arg(long, default_value_t = 20.0)]
+    #[arg(long, default_value_t = 20.0, allow_negative_numbers = true)]
     pub temp: f64,
     /// Predict the pressure once the gas reaches this temperature, °C.
-    #[arg(long)]
+    #[arg(long, allow_negative_numbers = true)]
     pub to_temp: Option<f64>,
     /// Print machine-readable JSON.
     #[arg(long)]

@@ -1,16 +1,40 @@
-//! The command line: `plan` prints a team's turn pressures, `gas` a cylinder's contents.
-//! Exit codes: 0 ok, 2 bad input (the message names the field).
+//! The command line: `plan` prints a team's turn pressures, `gas` a cylinder's contents,
+//! `chart` wet-notes charts, `locker` the app's cylinder sets.
+//! Exit codes: 0 ok, 2 bad input (the message names the field), 3 a file or the output
+//! could not be written (full disk, closed pipe, read-only directory). Never a panic.
 
 pub mod card_cmd;
 pub mod chart_cmd;
 pub mod gas_cmd;
+pub mod locker_cmd;
 pub mod plan_cmd;
 pub mod plan_report;
 
+use std::io::Write;
+
 use clap::{Parser, Subcommand};
+
+use crate::plan::error::InputError;
 
 /// Exit code for bad input.
 pub const EXIT_BAD_INPUT: i32 = 2;
+/// Exit code when the output or a file could not be written.
+pub const EXIT_WRITE_FAILED: i32 = 3;
+
+/// Why a command failed.
+#[derive(Debug)]
+pub enum CliError {
+    /// Bad input: the message names the field.
+    Input(InputError),
+    /// A file could not be written (the message says which and why).
+    Write(String),
+}
+
+impl From<InputError> for CliError {
+    fn from(e: InputError) -> Self {
+        CliError::Input(e)
+    }
+}
 
 #[derive(Parser, Debug)]
 #[command(
@@ -74,6 +98,21 @@ pub enum Command {
         #[arg(long)]
         json: bool,
     },
+    /// Your cylinder sets (the app's locker): list, add, remove, and swap them with
+    /// other divers through a file.
+    ///
+    /// The locker is locker.json in the data directory: TURNSHEET_DATA_DIR if set, else
+    /// the per-user data directory (on Linux ~/.local/share/turnsheet). A locker file that
+    /// cannot be read is moved aside (locker.json.unreadable-TIME), never overwritten,
+    /// and the command carries on with an empty locker.
+    #[command(
+        after_help = "SPEC is COUNTxSIZE@RATING: 2x12L@232bar (two 12 L cylinders, 232 bar \
+working pressure) or 1x80cuft@3000psi (one cylinder rated 80 cu ft at 3000 psi)."
+    )]
+    Locker {
+        #[command(subcommand)]
+        action: locker_cmd::LockerAction,
+    },
 }
 
 #[derive(clap::ValueEnum, Clone, Copy, Debug, PartialEq, Eq)]
@@ -84,25 +123,56 @@ pub enum PressureUnit {
 
 /// Run a parsed command; returns the process exit code.
 pub fn run(command: Command) -> i32 {
+    let mut notes = Vec::new();
     let result = match command {
-        Command::Plan { team, json } => plan_cmd::run(&team, json),
-        Command::Gas(args) => gas_cmd::run(&args),
         Command::Card(args) => card_cmd::run(&args),
+        Command::Plan { team, json } => plan_cmd::run(&team, json).map_err(CliError::from),
+        Command::Gas(args) => gas_cmd::run(&args).map_err(CliError::from),
         Command::Chart {
             team,
             above,
             below,
             json,
-        } => chart_cmd::run(&team, above, below, json),
+        } => chart_cmd::run(&team, above, below, json).map_err(CliError::from),
+        Command::Locker { action } => locker_cmd::run(
+            &action,
+            &crate::storage::data_dir::desktop_data_dir(),
+            &mut notes,
+        ),
     };
+    for note in &notes {
+        say(note);
+    }
     match result {
-        Ok(text) => {
-            print!("{text}");
-            0
-        }
-        Err(e) => {
-            eprintln!("turnsheet: {e}");
+        Ok(text) => match write_stdout(&text) {
+            Ok(()) => 0,
+            Err(e) => {
+                say(&format!("could not write the output: {e}"));
+                EXIT_WRITE_FAILED
+            }
+        },
+        Err(CliError::Input(e)) => {
+            say(&e.to_string());
             EXIT_BAD_INPUT
         }
+        Err(CliError::Write(e)) => {
+            say(&e);
+            EXIT_WRITE_FAILED
+        }
     }
+}
+
+/// Write all of `text` to standard output and flush it; the error is returned, never a panic.
+pub fn write_stdout(text: &str) -> std::io::Result<()> {
+    let mut out = std::io::stdout().lock();
+    out.write_all(text.as_bytes())?;
+    out.flush()
+}
+
+/// One line on standard error, prefixed with the program name. Failing to write it is ignored
+/// (there is nowhere left to report it).
+/// Messages that quote a file are cut to a readable length.
+pub fn say(line: &str) {
+    let line = crate::storage::atomic::one_line(line, 600);
+    let _ = writeln!(std::io::stderr().lock(), "turnsheet: {line}");
 }

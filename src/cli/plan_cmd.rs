@@ -5,17 +5,31 @@ use std::path::Path;
 use crate::formats::team_file::TeamFile;
 use crate::plan::error::InputError;
 use crate::plan::plan_team;
+use crate::storage::atomic::{MAX_FILE_BYTES, TextReadError, read_text};
 
 use super::plan_report;
 
-/// Read and convert a team file; errors name the field.
+/// Read and convert a team file; errors name the field. Files over 1 MB are refused
+/// before they are read, and text that is not UTF-8 gets the position of the first bad byte.
 pub fn read_team(path: &Path) -> Result<crate::plan::TeamInput, InputError> {
-    let text = std::fs::read_to_string(path).map_err(|e| {
+    let text = read_text(path, MAX_FILE_BYTES).map_err(|e| {
+        let why = match e {
+            TextReadError::Missing => "no such file".to_string(),
+            TextReadError::Io(e) => e.to_string(),
+            other => other.to_string(),
+        };
         InputError::new(
             "TEAM",
-            format!("cannot read team file {}: {e}", path.display()),
+            format!("cannot read team file {}: {why}", path.display()),
         )
     })?;
+    // Refused here: serde would read a top-level array as the fields in order.
+    if text.trim_start().starts_with('[') {
+        return Err(InputError::new(
+            "team file",
+            "a team file is a JSON object: it starts with { (see turnsheet plan --help)",
+        ));
+    }
     TeamFile::parse(&text)?.to_input()
 }
 

@@ -2,4 +2,5 @@
 //! No I/O here: callers read and write the text.
 
 pub mod card_svg;
+pub mod cylinder_spec;
 pub mod team_file;

@@ -156,13 +156,15 @@ impl TeamFile {
     pub fn parse(text: &str) -> Result<TeamFile, InputError> {
         let de = &mut serde_json::Deserializer::from_str(text);
         serde_path_to_error::deserialize(de).map_err(|e| {
+            // An unknown last segment (`?`, e.g. at the end of the text) names its parent.
             let path = e.path().to_string();
-            let field = if path.is_empty() || path == "." {
+            let path = path.trim_end_matches('?').trim_end_matches('.');
+            let field = if path.is_empty() {
                 "team file".to_string()
             } else {
-                path
+                path.to_string()
             };
-            InputError::new(field, format!("team file: {}", e.inner()))
+            InputError::new(field, e.inner().to_string())
         })
     }
 

@@ -4,9 +4,9 @@
 use aga8::composition::Composition as AgaComposition;
 use aga8::gerg2008::Gerg2008;
 
-use super::gas_model::{ContentModel, ModelKind};
+use super::gas_model::{ContentModel, MAX_MODEL_PRESSURE_BAR, ModelKind, bracketed_pressure};
 use super::mix::Mix;
-use super::units::{ATM_BAR, Pressure, Temperature};
+use super::units::{ATM_BAR, Pressure, Temperature, Volume};
 
 /// Molar gas constant, J/(mol·K), used only for the ideal-gas fallback.
 const R_GAS: f64 = 8.314_462_618;
@@ -18,6 +18,8 @@ pub struct RealGasModel {
     temperature: Temperature,
     /// Molar density at one standard atmosphere, mol/L.
     density_at_atm: f64,
+    /// Molar density at the top of the model's bracket (400 bar gauge), mol/L.
+    density_at_max: f64,
 }
 
 impl std::fmt::Debug for RealGasModel {
@@ -52,8 +54,10 @@ impl RealGasModel {
             template,
             temperature,
             density_at_atm: 0.0,
+            density_at_max: 0.0,
         };
         model.density_at_atm = model.density_at(ATM_BAR, temperature);
+        model.density_at_max = model.density_at(MAX_MODEL_PRESSURE_BAR + ATM_BAR, temperature);
         model
     }
 
@@ -108,6 +112,27 @@ impl ContentModel for RealGasModel {
         let d = self.density_at(p.absolute_bar(), self.temperature);
         (d / self.density_at_atm - 1.0).max(0.0)
     }
+
+    /// Direct inverse. Content = W × (ρ(p_abs) − ρ(1 atm)) / ρ(1 atm), so the density
+    /// wanted is ρ(1 atm) × (1 + content / W), and GERG-2008 gives the pressure at that
+    /// density and temperature in one evaluation. Same bracket as the bisection
+    /// (0..=400 bar gauge, clamped at both ends) and never NaN.
+    fn pressure_for(&self, water: Volume, content: Volume) -> Pressure {
+        let (w, c) = (water.litres(), content.litres());
+        if !(w.is_finite() && w > 0.0 && c.is_finite() && c > 0.0) {
+            return Pressure::ZERO;
+        }
+        let target = self.density_at_atm * (1.0 + c / w);
+        if !target.is_finite() || target >= self.density_at_max {
+            return Pressure::from_bar(MAX_MODEL_PRESSURE_BAR);
+        }
+        let gauge = self.absolute_pressure_at(target, self.temperature) - ATM_BAR;
+        if !gauge.is_finite() {
+            // Not expected inside the bracket; the bisection always answers.
+            return bracketed_pressure(|p| self.content(water, p).litres(), c);
+        }
+        Pressure::from_bar(gauge.clamp(0.0, MAX_MODEL_PRESSURE_BAR))
+    }
 }
 
 #[cfg(test)]
@@ -122,6 +147,62 @@ mod tests {
         let l = m.litres_per_litre(Pressure::from_bar(232.0));
         assert!((l - 219.0).abs() < 1.5, "{l}");
         assert!(m.compressibility(Pressure::from_bar(232.0)) > 1.0);
+    }
+
+    /// The direct inverse against the bisection it replaced, over mixes, temperatures,
+    /// capacities and contents from below empty to beyond the 400 bar bracket.
+    #[test]
+    fn direct_inverse_matches_the_bisection() {
+        let mixes = [
+            Mix::AIR,
+            Mix::nitrox(0.32),
+            Mix::trimix(0.21, 0.35),
+            Mix::trimix(0.10, 0.70),
+            Mix { o2: 1.0, he: 0.0 },
+        ];
+        let mut checked = 0;
+        let mut worst: f64 = 0.0;
+        for mix in mixes {
+            for t in [-2.0, 12.0, 35.0] {
+                let m = RealGasModel::new(mix, Temperature::from_celsius(t));
+                for w in [0.5, 11.1, 48.0] {
+                    let water = Volume::from_litres(w);
+                    let full = m.content(water, Pressure::from_bar(MAX_MODEL_PRESSURE_BAR));
+                    for k in -1..=21 {
+                        let c = Volume::from_litres(full.litres() * f64::from(k) / 20.0);
+                        let direct = m.pressure_for(water, c).bar();
+                        let oracle =
+                            bracketed_pressure(|p| m.content(water, p).litres(), c.litres()).bar();
+                        assert!(direct.is_finite() && (0.0..=400.0).contains(&direct));
+                        worst = worst.max((direct - oracle).abs());
+                        assert!(
+                            (direct - oracle).abs() < 1e-6,
+                            "{mix:?} {t} °C {w} L content {}: direct {direct}, bisection {oracle}",
+                            c.litres()
+                        );
+                        checked += 1;
+                    }
+                }
+            }
+        }
+        eprintln!("direct vs bisection: {checked} points, worst difference {worst:.2e} bar");
+        assert_eq!(checked, 5 * 3 * 3 * 23);
+        assert!(worst < 1e-6, "{worst}");
+    }
+
+    #[test]
+    fn direct_inverse_never_nan() {
+        let m = RealGasModel::new(Mix::AIR, Temperature::from_celsius(20.0));
+        let w = Volume::from_litres(12.0);
+        for c in [f64::NAN, f64::INFINITY, f64::NEG_INFINITY, -1.0, 0.0, 1e300] {
+            let p = m.pressure_for(w, Volume::from_litres(c)).bar();
+            assert!((0.0..=400.0).contains(&p), "{c} -> {p}");
+        }
+        for w in [0.0, -1.0, f64::NAN] {
+            let p = m.pressure_for(Volume::from_litres(w), Volume::from_litres(100.0));
+            assert_eq!(p.bar(), 0.0);
+        }
+        assert_eq!(m.pressure_for(w, Volume::from_litres(1e300)).bar(), 400.0);
     }
 
     #[test]

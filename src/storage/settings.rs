@@ -2,6 +2,8 @@
 
 use serde::{Deserialize, Serialize};
 
+use super::atomic::WithinLimits;
+
 use crate::plan::{Rule, UnitSystem};
 
 pub const SETTINGS_SCHEMA: u32 = 1;
@@ -44,3 +46,6 @@ impl Settings {
         }
     }
 }
+
+/// The size limit on the file is enough; ranges are checked where the values are used.
+impl WithinLimits for Settings {}

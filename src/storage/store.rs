@@ -4,7 +4,7 @@ use std::collections::{HashMap, HashSet};
 use std::path::{Path, PathBuf};
 use std::time::SystemTime;
 
-use super::atomic::{ReadOutcome, read_json, set_aside, write_json};
+use super::atomic::{ReadOutcome, WithinLimits, read_json, set_aside, write_json};
 use super::locker::{LOCKER_SCHEMA, LockerFile};
 use super::settings::{SETTINGS_SCHEMA, Settings};
 use super::team_state::{TEAM_SCHEMA, TeamState};
@@ -75,7 +75,23 @@ impl Store {
         }
     }
 
-    fn take<T: serde::de::DeserializeOwned>(
+    /// Load only the locker (the command line's `locker` commands). An unreadable locker
+    /// is set aside as in `load`; the messages say where it went.
+    pub fn load_locker(&mut self) -> (LockerFile, Vec<String>) {
+        let mut report = LoadReport::default();
+        let locker = self
+            .take(LOCKER_FILE, LOCKER_SCHEMA, "cylinder locker", &mut report)
+            .unwrap_or_default();
+        self.remember(LOCKER_FILE);
+        (locker, report.messages)
+    }
+
+    /// Path of one of the store's files.
+    pub fn path_of(&self, name: &str) -> PathBuf {
+        self.dir.join(name)
+    }
+
+    fn take<T: serde::de::DeserializeOwned + WithinLimits>(
         &mut self,
         name: &'static str,
         schema: u32,
@@ -94,7 +110,7 @@ impl Store {
                     ));
                 } else {
                     report.messages.push(format!(
-                        "The {what} file could not be read ({reason}). It was kept as {} and the app started without it.",
+                        "The {what} file could not be read ({reason}). It was kept as {} and Turnsheet carries on without it.",
                         kept_as.display()
                     ));
                 }

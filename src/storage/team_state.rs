@@ -2,6 +2,8 @@
 
 use serde::{Deserialize, Serialize};
 
+use super::atomic::WithinLimits;
+
 use crate::formats::team_file::TeamFile;
 
 pub const TEAM_SCHEMA: u32 = 1;
@@ -41,3 +43,6 @@ pub struct StartReading {
     /// Gauge or prediction.
     pub source: Source,
 }
+
+/// The size limit on the file is enough; ranges are checked where the values are used.
+impl WithinLimits for TeamState {}
