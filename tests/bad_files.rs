@@ -163,7 +163,7 @@ fn settings_files_are_kept_aside_byte_identical_and_the_app_opens() {
         let dir = tempfile::tempdir().unwrap();
         std::fs::write(dir.path().join(SETTINGS_FILE), bytes).unwrap();
         let session = Session::open(Store::new(dir.path()));
-        let said = session.status.join("\n");
+        let said = session.status.text();
         assert!(
             said.contains("settings file could not be read"),
             "{name}: {said}"
@@ -193,7 +193,7 @@ fn last_team_files_are_kept_aside_byte_identical_and_the_app_opens() {
         let dir = tempfile::tempdir().unwrap();
         std::fs::write(dir.path().join(TEAM_FILE), &bytes).unwrap();
         let session = Session::open(Store::new(dir.path()));
-        let said = session.status.join("\n");
+        let said = session.status.text();
         assert!(said.contains("last team"), "{name}: {said}");
         let kept = kept_aside(dir.path(), TEAM_FILE);
         assert_eq!(kept.len(), 1, "{name}: {said}");
