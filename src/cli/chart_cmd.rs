@@ -32,7 +32,6 @@ pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String
     }
     let team = read_team(path)?;
     let charts = team_charts(&team, above, below)?;
-    let u = team.units;
     let name = |i: usize| team.divers[i].name.clone();
     if json {
         let out: Vec<JsonChart> = charts
@@ -49,6 +48,15 @@ pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String
             .collect();
         return Ok(serde_json::to_string_pretty(&out).unwrap_or_default() + "\n");
     }
+    Ok(chart_text(&team, &charts))
+}
+
+/// Charts as text, each on its own divers' gauges.
+pub fn chart_text(
+    team: &crate::plan::TeamInput,
+    charts: &[crate::plan::chart::PairChart],
+) -> String {
+    let u = team.units;
     let mut s = format!(
         "Wet-notes charts: rule of {}, water {:.0} {}.\n\
          Each chart gives the first diver's turn for their start (rows) and the teammate's start (columns),\n\
@@ -66,7 +74,7 @@ pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String
         .unwrap_or(3)
         .max(3)
         + 1;
-    for c in &charts {
+    for c in charts {
         let me = &team.divers[c.me];
         let buddy = &team.divers[c.buddy];
         s.push_str(&format!(
@@ -106,5 +114,5 @@ pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String
         }
     }
     s.push_str("\n'-' marks a start that does not fit the cylinders. Check by hand; turn at the first limit.\n");
-    Ok(s)
+    s
 }

@@ -7,6 +7,7 @@ pub mod card_cmd;
 pub mod chart_cmd;
 pub mod gas_cmd;
 pub mod locker_cmd;
+pub mod pair_chart_cmd;
 pub mod plan_cmd;
 pub mod plan_report;
 
@@ -86,17 +87,19 @@ pub enum Command {
     /// With more than one teammate, read the chart against each teammate and keep the
     /// HIGHEST turn.
     Chart {
-        /// The team file (JSON), as for `plan`.
-        team: std::path::PathBuf,
-        /// Gauge steps above each planned start.
+        /// The team file (JSON), as for `plan`; or give --mine and --buddy instead.
+        team: Option<std::path::PathBuf>,
+        /// Gauge steps above each planned start (team file).
         #[arg(long, default_value_t = 2)]
         above: usize,
-        /// Gauge steps below each planned start.
+        /// Gauge steps below each planned start (team file).
         #[arg(long, default_value_t = 7)]
         below: usize,
-        /// Print machine-readable JSON.
+        /// Print machine-readable JSON (team file).
         #[arg(long)]
         json: bool,
+        #[command(flatten)]
+        pair: pair_chart_cmd::PairArgs,
     },
     /// Your cylinder sets (the app's locker): list, add, remove, and swap them with
     /// other divers through a file.
@@ -133,7 +136,17 @@ pub fn run(command: Command) -> i32 {
             above,
             below,
             json,
-        } => chart_cmd::run(&team, above, below, json).map_err(CliError::from),
+            pair,
+        } => match (team, &pair.mine, &pair.buddy) {
+            (Some(team), None, None) => {
+                chart_cmd::run(&team, above, below, json).map_err(CliError::from)
+            }
+            (None, Some(_), Some(_)) => pair_chart_cmd::run(&pair),
+            _ => Err(CliError::Input(InputError::new(
+                "chart",
+                "give a team file, or --mine SPEC and --buddy SPEC (SPEC: a locker set's name or COUNTxSIZE@RATING, e.g. 2x12L@232bar)",
+            ))),
+        },
         Command::Locker { action } => locker_cmd::run(
             &action,
             &crate::storage::data_dir::desktop_data_dir(),

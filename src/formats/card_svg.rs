@@ -350,12 +350,17 @@ pub fn card_svg(
 ) -> String {
     let mut pages = vec![card_page(heading, team, plan)];
     pages.extend(charts.iter().map(|c| chart_page(team, c)));
-    let total_h = PAGE_H * pages.len() as f64;
+    svg_of(&pages, &format!("Team card: {}", plan.names().join(", ")))
+}
+
+/// Pages stacked top to bottom, each 100 × 150 mm, separated by a cut line.
+fn svg_of(pages: &[Page], title: &str) -> String {
+    let total_h = PAGE_H * pages.len().max(1) as f64;
     let mut s = format!(
         "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n\
          <svg xmlns=\"http://www.w3.org/2000/svg\" width=\"{PAGE_W}mm\" height=\"{total_h}mm\" viewBox=\"0 0 {PAGE_W} {total_h}\" font-family=\"{FONT}\" fill=\"#000\">\n\
          <title>{}</title>\n<rect x=\"0\" y=\"0\" width=\"{PAGE_W}\" height=\"{total_h}\" fill=\"#fff\"/>\n",
-        xml_escape(&format!("Team card: {}", plan.names().join(", ")))
+        xml_escape(title)
     );
     for (k, page) in pages.iter().enumerate() {
         let dy = PAGE_H * k as f64;
@@ -370,6 +375,12 @@ pub fn card_svg(
     }
     s.push_str("</svg>\n");
     s
+}
+
+/// Pairing charts only, one page each (no card page).
+pub fn charts_svg(team: &TeamInput, charts: &[PairChart]) -> String {
+    let pages: Vec<Page> = charts.iter().map(|c| chart_page(team, c)).collect();
+    svg_of(&pages, "Pairing charts")
 }
 
 #[cfg(test)]
