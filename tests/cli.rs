@@ -190,15 +190,20 @@ fn unreadable_and_malformed_files_exit_2() {
     assert!(String::from_utf8_lossy(&out.stderr).contains("team file"));
 }
 
-#[test]
-fn gas_command_reports_both_models_and_cooling() {
-    // CoolProp 8.0.0 (HEOS reference equation): air at 232 bar, 20 °C holds about 219 L per litre.
+/// `turnsheet gas --litres L --pressure 232 --json`, parsed.
+fn gas_232(litres: &str) -> serde_json::Value {
     let out = bin()
-        .args(["gas", "--litres", "1", "--pressure", "232", "--json"])
+        .args(["gas", "--litres", litres, "--pressure", "232", "--json"])
         .output()
         .unwrap();
     assert_eq!(out.status.code(), Some(0));
-    let v: serde_json::Value = serde_json::from_slice(&out.stdout).unwrap();
+    serde_json::from_slice(&out.stdout).unwrap()
+}
+
+#[test]
+fn gas_command_reports_both_models_and_cooling() {
+    // CoolProp 8.0.0 (HEOS reference equation): air at 232 bar, 20 °C holds about 219 L per litre.
+    let v = gas_232("1");
     let real = v["content_l"].as_f64().unwrap();
     assert!((real - 218.0).abs() < 1.0, "{real}");
     // Pencil arithmetic (common practice): 1 L × 232 bar = 232 L.
@@ -303,12 +308,7 @@ fn chart_command_prints_every_pair() {
 #[test]
 fn hand_content_is_the_pencil_sum() {
     // Common practice: 12 L of water at 232 bar holds 12 × 232 = 2784 L by hand.
-    let out = bin()
-        .args(["gas", "--litres", "12", "--pressure", "232", "--json"])
-        .output()
-        .unwrap();
-    assert_eq!(out.status.code(), Some(0));
-    let v: serde_json::Value = serde_json::from_slice(&out.stdout).unwrap();
+    let v = gas_232("12");
     assert_eq!(v["content_hand_l"].as_f64(), Some(2784.0));
     let out = bin()
         .args(["gas", "--litres", "12", "--pressure", "232"])

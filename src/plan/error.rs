@@ -53,6 +53,15 @@ pub fn check_range(
     Ok(())
 }
 
+/// The first letter upper case, the rest as it is.
+pub fn first_upper(s: &str) -> String {
+    let mut c = s.chars();
+    match c.next() {
+        Some(f) => f.to_uppercase().collect::<String>() + c.as_str(),
+        None => String::new(),
+    }
+}
+
 /// A number without needless decimals. Magnitudes beyond what an integer holds
 /// exactly print in scientific notation (`1e308`), never as a saturated integer.
 pub fn fmt_num(x: f64) -> String {

@@ -210,38 +210,42 @@ mod tests {
         }
     }
 
-    #[test]
-    fn pencil_sums_match_the_plan() {
-        // Worked by hand (common practice): twin 12 L at 220 bar = 5280 L; twin 7 L at
-        // 280 bar = 3920 L, a third 1306.6 L; 220 × 1306.6 ÷ 5280 = 54.4 bar; turn 165.6.
-        let t = TeamInput {
+    fn metric_team(divers: Vec<DiverInput>) -> TeamInput {
+        TeamInput {
             units: UnitSystem::Metric,
             rule: Rule::Thirds,
             gauge_step: 10.0,
             water_temp: Temperature::from_celsius(15.0),
             depth: None,
             water: Water::Fresh,
-            divers: vec![
-                diver(
-                    "Ines",
-                    CylinderSet::twins(CylinderSpec::Stamped {
-                        water_l: 12.0,
-                        working_bar: 232.0,
-                    }),
-                    Pressure::from_bar(220.0),
-                    None,
-                ),
-                diver(
-                    "Tomas",
-                    CylinderSet::twins(CylinderSpec::Stamped {
-                        water_l: 7.0,
-                        working_bar: 300.0,
-                    }),
-                    Pressure::from_bar(280.0),
-                    None,
-                ),
-            ],
-        };
+            divers,
+        }
+    }
+
+    #[test]
+    fn pencil_sums_match_the_plan() {
+        // Worked by hand (common practice): twin 12 L at 220 bar = 5280 L; twin 7 L at
+        // 280 bar = 3920 L, a third 1306.6 L; 220 × 1306.6 ÷ 5280 = 54.4 bar; turn 165.6.
+        let t = metric_team(vec![
+            diver(
+                "Ines",
+                CylinderSet::twins(CylinderSpec::Stamped {
+                    water_l: 12.0,
+                    working_bar: 232.0,
+                }),
+                Pressure::from_bar(220.0),
+                None,
+            ),
+            diver(
+                "Tomas",
+                CylinderSet::twins(CylinderSpec::Stamped {
+                    water_l: 7.0,
+                    working_bar: 300.0,
+                }),
+                Pressure::from_bar(280.0),
+                None,
+            ),
+        ]);
         let plan = plan_team(&t).unwrap();
         let w = hand_working(&t, &plan, 0);
         assert_eq!(w.content, "2 × 12 L × 220 bar = 5280 L");
@@ -262,37 +266,29 @@ mod tests {
     fn a_psi_gauge_on_a_rated_cylinder_in_a_metric_team() {
         // Rated 40 cu ft at 3000 psi, read 3000 psi: 40 cu ft = 1132.6 L by pencil
         // (1 cu ft = 28.317 L, NIST SP 811).
-        let t = TeamInput {
-            units: UnitSystem::Metric,
-            rule: Rule::Thirds,
-            gauge_step: 10.0,
-            water_temp: Temperature::from_celsius(15.0),
-            depth: None,
-            water: Water::Fresh,
-            divers: vec![
-                diver(
-                    "A",
-                    CylinderSet::twins(CylinderSpec::Rated {
-                        rated_cuft: 40.0,
-                        rated_psi: 3000.0,
-                    }),
-                    Pressure::from_psi(3000.0),
-                    Some(Gauge {
-                        unit: PressureUnit::Psi,
-                        step: 50.0,
-                    }),
-                ),
-                diver(
-                    "B",
-                    CylinderSet::single(CylinderSpec::Stamped {
-                        water_l: 12.0,
-                        working_bar: 232.0,
-                    }),
-                    Pressure::from_bar(200.0),
-                    None,
-                ),
-            ],
-        };
+        let t = metric_team(vec![
+            diver(
+                "A",
+                CylinderSet::twins(CylinderSpec::Rated {
+                    rated_cuft: 40.0,
+                    rated_psi: 3000.0,
+                }),
+                Pressure::from_psi(3000.0),
+                Some(Gauge {
+                    unit: PressureUnit::Psi,
+                    step: 50.0,
+                }),
+            ),
+            diver(
+                "B",
+                CylinderSet::single(CylinderSpec::Stamped {
+                    water_l: 12.0,
+                    working_bar: 232.0,
+                }),
+                Pressure::from_bar(200.0),
+                None,
+            ),
+        ]);
         let plan = plan_team(&t).unwrap();
         let w = hand_working(&t, &plan, 0);
         assert_eq!(

@@ -1,7 +1,7 @@
 //! Observations about a plan that do not stop it: typed values (which diver, which
 //! kind, the figures), put into words only where they are shown.
 
-use super::error::fmt_num;
+use super::error::{first_upper, fmt_num};
 use super::units::PressureUnit;
 
 /// Which of a diver's gas supplies a warning is about.
@@ -114,7 +114,7 @@ impl Warning {
                 ..
             } => format!(
                 "{} {} {u} is above the working pressure {} {u}; check the fill and the cylinder's rating.",
-                capital(supply.noun()),
+                first_upper(supply.noun()),
                 fmt_num(start),
                 fmt_num(working),
                 u = unit.label()
@@ -139,7 +139,7 @@ impl Warning {
                 ..
             } => format!(
                 "{} {} {} is under half the working pressure; a low fill leaves little to share.",
-                capital(supply.noun()),
+                first_upper(supply.noun()),
                 fmt_num(start),
                 unit.label()
             ),
@@ -160,14 +160,6 @@ impl Warning {
             Some(name) => format!("{name}: {}", self.detail()),
             None => self.detail(),
         }
-    }
-}
-
-fn capital(s: &str) -> String {
-    let mut c = s.chars();
-    match c.next() {
-        Some(f) => f.to_uppercase().collect::<String>() + c.as_str(),
-        None => String::new(),
     }
 }
 

@@ -6,7 +6,7 @@
 //! `turns.rs`, `tools.rs` (fill check, chart), `locker.rs` (locker, pickers),
 //! `settings.rs` and `keypad.rs`.
 
-use crate::plan::error::fmt_num;
+use crate::plan::error::{first_upper, fmt_num};
 use crate::plan::{Depth, Gauge, Pressure, Rule, Temperature, UnitSystem, Volume};
 
 use super::team_controller::step_options;
@@ -176,12 +176,7 @@ pub fn rule_warning(rule: Rule) -> String {
 
 /// The first letter upper case, the rest lower case.
 pub fn capitalised(s: &str) -> String {
-    let lower = s.to_lowercase();
-    let mut c = lower.chars();
-    match c.next() {
-        Some(f) => f.to_uppercase().collect::<String>() + c.as_str(),
-        None => String::new(),
-    }
+    first_upper(&s.to_lowercase())
 }
 
 #[cfg(test)]
@@ -266,15 +261,6 @@ pub fn error_for_people(names: &[String], e: &crate::plan::InputError) -> String
         (true, false) => format!("{}: {}", first_upper(&what), e.message),
         (false, true) => format!("{who}: {}", e.message),
         (false, false) => format!("{who}, {what}: {}", e.message),
-    }
-}
-
-/// The first letter upper case, the rest as it is.
-fn first_upper(s: &str) -> String {
-    let mut c = s.chars();
-    match c.next() {
-        Some(f) => f.to_uppercase().collect::<String>() + c.as_str(),
-        None => String::new(),
     }
 }
 

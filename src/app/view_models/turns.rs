@@ -4,6 +4,7 @@
 use super::super::session::Session;
 use super::{gauge_text, reading, temperature_text, turn_text, volume_down_text};
 use crate::app::readings::{StartStatus, now, when_text};
+use crate::plan::error::first_upper;
 use crate::plan::hand_check::{hand_working, turn_sentence};
 
 /// "Drop stage at 140 bar (Aluminium 40, EAN32, start 200 bar)" for a diver with a
@@ -112,7 +113,7 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
                     gauge_text(g)
                 ),
                 set_by: if ready {
-                    capitalised_first(&turn_sentence(plan, i))
+                    first_upper(&turn_sentence(plan, i))
                 } else {
                     String::new()
                 },
@@ -164,14 +165,6 @@ pub fn rule_text(s: &Session) -> String {
         c.name,
         c.name,
     )
-}
-
-fn capitalised_first(s: &str) -> String {
-    let mut c = s.chars();
-    match c.next() {
-        Some(f) => f.to_uppercase().collect::<String>() + c.as_str(),
-        None => String::new(),
-    }
 }
 
 pub fn margin_text(s: &Session) -> String {
