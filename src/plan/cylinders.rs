@@ -24,6 +24,12 @@ pub fn rating_temperature() -> Temperature {
     Temperature::from_fahrenheit(70.0)
 }
 
+/// Real air at the rating temperature, built once: every rated cylinder in every plan uses it.
+fn rating_air() -> &'static RealGasModel {
+    static AIR_AT_RATING: std::sync::OnceLock<RealGasModel> = std::sync::OnceLock::new();
+    AIR_AT_RATING.get_or_init(|| RealGasModel::new(Mix::AIR, rating_temperature()))
+}
+
 impl CylinderSpec {
     pub fn working_pressure(&self) -> Pressure {
         match *self {
@@ -49,9 +55,7 @@ impl CylinderSpec {
                 let p = Pressure::from_psi(rated_psi);
                 let per_litre = match kind {
                     ModelKind::Hand => p.bar() / ATM_BAR,
-                    ModelKind::Real => {
-                        RealGasModel::new(Mix::AIR, rating_temperature()).litres_per_litre(p)
-                    }
+                    ModelKind::Real => rating_air().litres_per_litre(p),
                 };
                 if per_litre > 0.0 {
                     Volume::from_litres(rating / per_litre)
