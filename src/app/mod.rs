@@ -55,6 +55,7 @@ pub fn run_desktop() -> i32 {
             return 1;
         }
     };
+    crate::platform::first_frame::exit_after_first_frame_if_asked(app.window.window());
     let result = app.window.run();
     app.save();
     match result {

@@ -35,6 +35,12 @@ pub fn rating_temperature() -> Temperature {
     Temperature::from_fahrenheit(70.0)
 }
 
+/// Real air at the rating temperature, built once: every rated cylinder in every plan uses it.
+fn rating_air() -> &'static RealGasModel {
+    static AIR_AT_RATING: std::sync::OnceLock<RealGasModel> = std::sync::OnceLock::new();
+    AIR_AT_RATING.get_or_init(|| RealGasModel::new(Mix::AIR, rating_temperature()))
+}
+
 impl CylinderSpec {
     /// Working pressure of one cylinder (gauge): the stamped bar or the rated psi.
     pub fn working_pressure(&self) -> Pressure {
@@ -63,9 +69,7 @@ impl CylinderSpec {
                     // Pencil arithmetic: rated cu ft × gauge psi / rated psi, so the
                     // tank-factor water is the rating per bar of rated pressure.
                     ModelKind::Hand => p.bar(),
-                    ModelKind::Real => {
-                        RealGasModel::new(Mix::AIR, rating_temperature()).litres_per_litre(p)
-                    }
+                    ModelKind::Real => rating_air().litres_per_litre(p),
                 };
                 if per_litre > 0.0 {
                     Volume::from_litres(rating / per_litre)

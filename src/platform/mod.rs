@@ -8,6 +8,8 @@ use crate::app::session::Session;
 
 #[cfg(target_os = "android")]
 mod android;
+#[cfg(not(target_os = "android"))]
+pub mod first_frame;
 
 /// The lifecycle events the app reacts to (names as on Android).
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
