@@ -31,7 +31,30 @@ impl TeamController {
             }
         };
         self.labels[i] = label.to_string();
+        self.gauge_for_new_set(i, set);
         Ok(reset)
+    }
+
+    /// A diver whose start is not read yet gets the gauge that goes with the set: psi for
+    /// an imperial rating, bar for a metric stamp (the team's graduation when the team
+    /// reads that unit). A diver with a reading keeps the gauge it was read on.
+    fn gauge_for_new_set(&mut self, i: usize, set: CylinderSet) {
+        if self.readings.get(i).is_some() {
+            return;
+        }
+        let unit = match set.spec {
+            crate::plan::CylinderSpec::Rated { .. } => crate::plan::PressureUnit::Psi,
+            crate::plan::CylinderSpec::Stamped { .. } => crate::plan::PressureUnit::Bar,
+        };
+        let team = self.input.default_gauge();
+        let gauge = if unit == team.unit {
+            team
+        } else {
+            crate::plan::Gauge::usual(unit)
+        };
+        if gauge != self.input.gauge_of(i) {
+            let _ = self.set_gauge(i, gauge);
+        }
     }
 
     /// Give a diver a stage set, or take it away. A new stage starts full (its working

@@ -78,3 +78,20 @@ fn add_and_remove_respect_team_size() {
     }
     assert!(t.remove_diver(0).is_err());
 }
+
+#[test]
+fn an_unread_diver_picking_a_rated_set_reads_psi() {
+    use crate::plan::{CylinderSet, CylinderSpec, PressureUnit};
+    let mut t = demo();
+    let rated = CylinderSet::twins(CylinderSpec::Rated {
+        rated_cuft: 104.0,
+        rated_psi: 2640.0,
+    });
+    t.set_cylinders(0, rated, "Twin steel 104").unwrap();
+    assert_eq!(t.input().gauge_of(0).unit, PressureUnit::Psi);
+    // A diver whose start was read keeps the gauge it was read on.
+    // (Bram's 205 bar still fits the new set, so his reading stands.)
+    t.mark_read(1, crate::app::readings::now());
+    t.set_cylinders(1, rated, "Twin steel 104").unwrap();
+    assert_eq!(t.input().gauge_of(1).unit, PressureUnit::Bar);
+}
