@@ -10,11 +10,9 @@ use crate::formats::team_file::CylindersFile;
 use crate::plan::catalogue::Material;
 use crate::plan::error::InputError;
 use crate::storage::Store;
-use crate::storage::atomic::{
-    MAX_FILE_BYTES, WithinLimits, check_envelope, one_line, read_text, write_json,
-};
+use crate::storage::atomic::{WithinLimits, write_json};
 use crate::storage::locker::{
-    LOCKER_SCHEMA, LockerEntry, LockerFile, MAX_LOCKER_SETS, check_set_name,
+    LockerEntry, LockerFile, MAX_LOCKER_SETS, check_set_name, read_locker_file,
 };
 use crate::storage::store::LOCKER_FILE;
 
@@ -367,41 +365,6 @@ fn export(locker: &LockerFile, file: &Path, force: bool) -> Result<String, CliEr
         sets_word(locker.entries.len()),
         file.display()
     ))
-}
-
-/// Read a locker file given on the command line; errors name the file and the field.
-pub fn read_locker_file(file: &Path) -> Result<LockerFile, InputError> {
-    let shown = file.display().to_string();
-    let text = read_text(file, MAX_FILE_BYTES)
-        .map_err(|e| InputError::new("FILE", format!("{shown}: {e}")))?;
-    check_envelope(&text, LOCKER_SCHEMA)
-        .map_err(|why| InputError::new("FILE", format!("{shown} is not a locker file: {why}")))?;
-    let de = &mut serde_json::Deserializer::from_str(&text);
-    let parsed: LockerFile = serde_path_to_error::deserialize(de).map_err(|e| {
-        let at = e.path().to_string();
-        let field = if at.is_empty() || at == "." {
-            "FILE".to_string()
-        } else {
-            at
-        };
-        InputError::new(
-            field,
-            format!(
-                "{shown} is not a locker file: {}",
-                one_line(&e.inner().to_string(), 200)
-            ),
-        )
-    })?;
-    if parsed.entries.len() > MAX_LOCKER_SETS {
-        return Err(InputError::new(
-            "entries",
-            format!(
-                "{shown} has {} sets; a locker holds at most {MAX_LOCKER_SETS}",
-                parsed.entries.len()
-            ),
-        ));
-    }
-    Ok(parsed)
 }
 
 fn import(

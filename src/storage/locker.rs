@@ -1,8 +1,10 @@
 //! The diver's own cylinder sets.
 
+use std::path::Path;
+
 use serde::{Deserialize, Serialize};
 
-use super::atomic::WithinLimits;
+use super::atomic::{MAX_FILE_BYTES, WithinLimits, check_envelope, one_line, read_text};
 use crate::formats::team_file::CylindersFile;
 use crate::plan::catalogue::Material;
 use crate::plan::error::InputError;
@@ -263,6 +265,43 @@ impl LockerFile {
             e.mine = e.id == id;
         }
     }
+}
+
+/// Read a locker file to import (one exported by `locker export` or copied from another
+/// diver's data directory). Nothing is set aside: the file is not the app's. Errors name the
+/// file and the field; files over 1 MB or nested too deep are refused before parsing.
+pub fn read_locker_file(file: &Path) -> Result<LockerFile, InputError> {
+    let shown = file.display().to_string();
+    let text = read_text(file, MAX_FILE_BYTES)
+        .map_err(|e| InputError::new("FILE", format!("{shown}: {e}")))?;
+    check_envelope(&text, LOCKER_SCHEMA)
+        .map_err(|why| InputError::new("FILE", format!("{shown} is not a locker file: {why}")))?;
+    let de = &mut serde_json::Deserializer::from_str(&text);
+    let parsed: LockerFile = serde_path_to_error::deserialize(de).map_err(|e| {
+        let at = e.path().to_string();
+        let field = if at.is_empty() || at == "." {
+            "FILE".to_string()
+        } else {
+            at
+        };
+        InputError::new(
+            field,
+            format!(
+                "{shown} is not a locker file: {}",
+                one_line(&e.inner().to_string(), 200)
+            ),
+        )
+    })?;
+    if parsed.entries.len() > MAX_LOCKER_SETS {
+        return Err(InputError::new(
+            "entries",
+            format!(
+                "{shown} has {} sets; a locker holds at most {MAX_LOCKER_SETS}",
+                parsed.entries.len()
+            ),
+        ));
+    }
+    Ok(parsed)
 }
 
 #[cfg(test)]
