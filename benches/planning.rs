@@ -1,6 +1,6 @@
 //! Speed of the planning core: one real-gas content evaluation, one inverse solve (direct,
 //! and the bisection it replaced), building a model, and whole team plans (the app
-//! recomputes on every key press). Figures and how to reproduce them: BENCHMARKS.md.
+//! recomputes on every key press), and a 41 × 41 pairing chart. Figures and how to reproduce them: BENCHMARKS.md.
 
 use criterion::{Criterion, criterion_group, criterion_main};
 use std::hint::black_box;
@@ -55,6 +55,12 @@ fn benches(c: &mut Criterion) {
     }
     c.bench_function("plan_team_6_divers", |b| {
         b.iter(|| plan_team(black_box(&six)).unwrap())
+    });
+    // A 41 × 41 pairing chart (Ines against Bram, 41 starts each on 5 bar).
+    let rows: Vec<f64> = (0..41).map(|k| 230.0 - 5.0 * k as f64).collect();
+    let cols: Vec<f64> = (0..41).map(|k| 205.0 - 4.0 * k as f64).collect();
+    c.bench_function("pair_chart_41x41", |b| {
+        b.iter(|| turnsheet::plan::chart::pair_chart(black_box(&team), 0, 1, &rows, &cols).unwrap())
     });
 }
 
