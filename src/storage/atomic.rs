@@ -259,7 +259,7 @@ pub fn read_json<T: DeserializeOwned + WithinLimits>(
             if at.is_empty() {
                 set_aside(path, why)
             } else {
-                set_aside(path, format!("{}: {why}", one_line(&at, 100)))
+                set_aside(path, format!("{}: {why}", one_line(at, 100)))
             }
         }
     }
