@@ -68,8 +68,9 @@ fn number_of(l: &LockerFile) -> Option<u64> {
 }
 
 /// The child: save lockers base, base + 1, ... until killed, printing each number once
-/// saved. Does nothing in a normal test run.
+/// saved. Ignored: only the kill test runs it (with `--ignored` and its environment).
 #[test]
+#[ignore = "the kill test's child process; the kill test starts it"]
 fn child_saves_forever() {
     let (Some(dir), Some(base)) = (std::env::var_os(CHILD_DIR), std::env::var(CHILD_BASE).ok())
     else {
@@ -143,6 +144,7 @@ fn killed_while_saving_the_locker_is_the_old_or_the_new_one() {
             .args([
                 "child_saves_forever",
                 "--exact",
+                "--ignored",
                 "--nocapture",
                 "--test-threads=1",
             ])

@@ -177,26 +177,33 @@ fn list(locker: &LockerFile, path: &Path, json: bool) -> String {
             path.display()
         );
     }
-    let width = locker
+    let rows: Vec<(&LockerEntry, String)> = locker
         .entries
         .iter()
-        .map(|e| e.name.chars().count())
-        .max()
-        .unwrap_or(0);
+        .enumerate()
+        .map(|(i, e)| {
+            let (spec, problem) = describe(e, i);
+            let spec =
+                spec.unwrap_or_else(|| format!("not usable: {}", problem.unwrap_or_default()));
+            (e, spec)
+        })
+        .collect();
+    let name_width = rows.iter().map(|(e, _)| e.name.chars().count()).max();
+    let spec_width = rows.iter().map(|(_, s)| s.chars().count()).max();
     let mut s = format!(
         "{} in {}:\n",
         sets_word(locker.entries.len()),
         path.display()
     );
-    for (i, e) in locker.entries.iter().enumerate() {
-        let (spec, problem) = describe(e, i);
-        let spec = spec.unwrap_or_else(|| format!("not usable: {}", problem.unwrap_or_default()));
+    for (e, spec) in &rows {
         let mark = if e.mine { "*" } else { " " };
-        let pad = width - e.name.chars().count();
+        let name_pad = name_width.unwrap_or(0) - e.name.chars().count();
+        let spec_pad = spec_width.unwrap_or(0) - spec.chars().count();
         s.push_str(&format!(
-            "{mark} {}{}  {spec}  {}",
+            "{mark} {}{}  {spec}{}  {}",
             e.name,
-            " ".repeat(pad),
+            " ".repeat(name_pad),
+            " ".repeat(spec_pad),
             e.material.name()
         ));
         if !e.note.is_empty() {

@@ -182,9 +182,9 @@ pub fn write_stdout(text: &str) -> std::io::Result<()> {
     out.flush()
 }
 
-/// One line on standard error, prefixed with the program name. Failing to write it is ignored
-/// (there is nowhere left to report it).
-/// Messages that quote a file are cut to a readable length.
+/// One line on standard error, prefixed with the program name, cut to a readable length
+/// (messages can quote a file). Failing to write it is ignored: there is nowhere left to
+/// report it.
 pub fn say(line: &str) {
     let line = crate::storage::atomic::one_line(line, 600);
     let _ = writeln!(std::io::stderr().lock(), "turnsheet: {line}");

@@ -254,11 +254,12 @@ pub fn read_json<T: DeserializeOwned + WithinLimits>(
         },
         Err(e) => {
             let at = e.path().to_string();
+            let at = at.trim_end_matches('?').trim_end_matches('.');
             let why = one_line(&e.inner().to_string(), 200);
-            if at.is_empty() || at == "." {
+            if at.is_empty() {
                 set_aside(path, why)
             } else {
-                set_aside(path, format!("{}: {why}", one_line(&at, 100)))
+                set_aside(path, format!("{}: {why}", one_line(at, 100)))
             }
         }
     }

@@ -279,10 +279,11 @@ pub fn read_locker_file(file: &Path) -> Result<LockerFile, InputError> {
     let de = &mut serde_json::Deserializer::from_str(&text);
     let parsed: LockerFile = serde_path_to_error::deserialize(de).map_err(|e| {
         let at = e.path().to_string();
-        let field = if at.is_empty() || at == "." {
+        let at = at.trim_end_matches('?').trim_end_matches('.');
+        let field = if at.is_empty() {
             "FILE".to_string()
         } else {
-            at
+            at.to_string()
         };
         InputError::new(
             field,
