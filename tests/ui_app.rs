@@ -556,7 +556,7 @@ fn fill_check_predicts_the_in_water_pressure() {
     press(&app, "clear");
     type_keys(&app, "232");
     press(&app, "done");
-    press(&app, "fill temperature");
+    press(&app, "cylinder temperature at the fill");
     press(&app, "clear");
     type_keys(&app, "35");
     press(&app, "done");
@@ -565,7 +565,7 @@ fn fill_check_predicts_the_in_water_pressure() {
     type_keys(&app, "12");
     press(&app, "done");
     assert_eq!(value(&app, "expected pressure in the water"), "207 bar");
-    press(&app, "use as start pressure");
+    press(&app, "plan with the prediction");
     back_key(&app);
     assert_eq!(value(&app, "start pressure of Ines"), "207 bar");
     // The prediction is marked until the gauge is read in the water.
@@ -743,4 +743,92 @@ fn the_keypad_replaces_the_old_value_on_the_first_digit() {
     );
     press(&app, "cancel entry");
     assert_eq!(app.session.borrow().team.input().divers[0].name, "Ines");
+}
+
+fn keyboard(app: &App, text: impl Into<slint::SharedString>) {
+    let text: slint::SharedString = text.into();
+    let w = app.window.window();
+    w.dispatch_event(WindowEvent::KeyPressed { text: text.clone() });
+    w.dispatch_event(WindowEvent::KeyReleased { text });
+}
+
+#[test]
+fn removing_a_diver_offers_undo_that_puts_the_diver_back() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_acknowledged(dir.path());
+    let before = app.session.borrow().team.to_state();
+    press(&app, "show turns");
+    let bram_turn = turn_number(&app, "Bram");
+    back_key(&app);
+    press(&app, "remove Bram");
+    assert_eq!(app.session.borrow().team.len(), 2);
+    assert_eq!(value(&app, "undo note"), "Bram removed.");
+    press(&app, "undo");
+    assert_eq!(app.session.borrow().team.to_state().team, before.team);
+    assert!(
+        ElementHandle::find_by_accessible_label(&app.window, "undo").count() == 0,
+        "the offer is gone once used"
+    );
+    // Bram's start still counts as read today: his turn is back at once.
+    press(&app, "show turns");
+    assert_eq!(turn_number(&app, "Bram"), bram_turn);
+    back_key(&app);
+    // New team: the same offer; undone, the whole team is back.
+    press(&app, "new team");
+    assert!(value(&app, "undo note").contains("Ines, Bram, Sol"));
+    press(&app, "undo");
+    assert_eq!(app.session.borrow().team.to_state().team, before.team);
+}
+
+#[test]
+fn a_physical_keyboard_types_into_the_keypads() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_acknowledged(dir.path());
+    press(&app, "start pressure of Ines");
+    for k in ["2", "1", "x", "0"] {
+        keyboard(&app, k);
+    }
+    keyboard(&app, Key::Backspace);
+    keyboard(&app, "5");
+    assert_eq!(value(&app, "entry"), "215");
+    keyboard(&app, Key::Return);
+    assert_eq!(value(&app, "start pressure of Ines"), "215 bar");
+    press(&app, "name of diver 1");
+    for k in ["n", "e", "l", "l", "a", "2"] {
+        keyboard(&app, k);
+    }
+    keyboard(&app, Key::Return);
+    assert_eq!(app.session.borrow().team.input().divers[0].name, "Nella2");
+    // Escape cancels an entry and leaves the value as it was.
+    press(&app, "start pressure of Nella2");
+    keyboard(&app, "9");
+    back_key(&app);
+    assert_eq!(value(&app, "start pressure of Nella2"), "215 bar");
+    assert_eq!(page(&app), Page::Team);
+}
+
+#[test]
+fn the_water_temperature_belongs_to_the_dive() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_acknowledged(dir.path());
+    let (dive, default) = {
+        let s = app.session.borrow();
+        (s.team.input().water_temp.celsius(), s.settings.water_temp_c)
+    };
+    press(&app, "colder water");
+    press(&app, "colder water");
+    let s = app.session.borrow();
+    assert!((s.team.input().water_temp.celsius() - (dive - 2.0)).abs() < 1e-9);
+    assert_eq!(
+        s.settings.water_temp_c, default,
+        "not the default for new teams"
+    );
+    drop(s);
+    let shown = value(&app, "water temperature");
+    assert_eq!(shown, format!("{} °C", dive - 2.0));
+    press(&app, "fill check");
+    assert_eq!(value(&app, "water temperature for the fill check"), shown);
 }

@@ -12,6 +12,12 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
     let (w, st) = handles(ui, s);
     a.on_key(move |k| act(&w, &st, |x| x.key(k.as_str())));
     let (w, st) = handles(ui, s);
+    a.on_typed(move |t| {
+        let mut used = false;
+        act(&w, &st, |x| used = x.keyboard(t.as_str()));
+        used
+    });
+    let (w, st) = handles(ui, s);
     a.on_done(move || act(&w, &st, |x| x.entry_done()));
     let (w, st) = handles(ui, s);
     a.on_cancel(move || act(&w, &st, |x| x.cancel_entry()));

@@ -25,9 +25,9 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
     let (w, st) = handles(ui, s);
     a.on_set_step(move |i| act(&w, &st, |x| x.set_default_step(i as usize)));
     let (w, st) = handles(ui, s);
-    a.on_nudge_temp(move |d| act(&w, &st, |x| x.nudge_water_temp(d)));
+    a.on_nudge_temp(move |d| act(&w, &st, |x| x.nudge_default_water_temp(d)));
     let (w, st) = handles(ui, s);
-    a.on_edit_temp(move || act(&w, &st, |x| x.open_entry(EntryTarget::WaterTemp)));
+    a.on_edit_temp(move || act(&w, &st, |x| x.open_entry(EntryTarget::DefaultWaterTemp)));
     let (w, st) = handles(ui, s);
     ui.global::<CautionsAdapter>()
         .on_acknowledge(move || act(&w, &st, |x| x.acknowledge_cautions()));

@@ -42,6 +42,12 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
     let (w, st) = handles(ui, s);
     a.on_toggle_water(move || act(&w, &st, |x| x.toggle_water()));
     let (w, st) = handles(ui, s);
+    a.on_nudge_water_temp(move |d| act(&w, &st, |x| x.nudge_water_temp(d)));
+    let (w, st) = handles(ui, s);
+    a.on_edit_water_temp(move || act(&w, &st, |x| x.open_entry(EntryTarget::WaterTemp)));
+    let (w, st) = handles(ui, s);
+    a.on_undo(move || act(&w, &st, |x| x.undo()));
+    let (w, st) = handles(ui, s);
     a.on_new_team(move || act(&w, &st, |x| x.new_team()));
     let (w, st) = handles(ui, s);
     a.on_pick_stage(move |i| act(&w, &st, |x| x.open_stage_picker(i as usize)));
@@ -86,6 +92,8 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
     a.set_step_index(p.step_index);
     a.set_depth_text(p.depth_text.into());
     a.set_water_text(p.water_text.into());
+    a.set_water_temp(p.water_temp.into());
+    a.set_undo_text(p.undo.into());
     a.set_can_add(p.can_add);
     a.set_can_remove(p.can_remove);
     a.set_summary(p.summary.into());

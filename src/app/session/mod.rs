@@ -23,6 +23,7 @@ mod locker_actions;
 mod pickers;
 mod team_actions;
 mod tools;
+mod undo;
 
 pub use entry::{Entry, EntryTarget};
 pub use pickers::Picker;
@@ -40,6 +41,8 @@ pub struct Session {
     pub fill: FillCheck,
     pub chart: ChartPair,
     pub status: Status,
+    /// Undo for the last diver removed or the team replaced, until the team changes.
+    undo: Option<undo::UndoOffer>,
 }
 
 impl Session {
@@ -88,6 +91,7 @@ impl Session {
             entry: None,
             picker: Picker::None,
             status: Status::new(messages),
+            undo: None,
         }
     }
 
@@ -126,11 +130,16 @@ impl Session {
 
     /// Write everything (used on edits and on Android lifecycle events).
     pub fn save_all(&mut self) {
-        self.save_team();
+        self.write_team();
         self.save_locker();
         self.save_settings();
     }
+    /// Save the team after a change: the change ends any Undo on offer.
     pub fn save_team(&mut self) {
+        self.undo = None;
+        self.write_team();
+    }
+    fn write_team(&mut self) {
         let r = self.store.save_team(&self.team.to_state());
         self.status.report(r);
     }

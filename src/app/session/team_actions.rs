@@ -101,10 +101,16 @@ impl Session {
 
     pub fn remove_diver(&mut self, i: usize) {
         if i < self.team.len() {
+            let before = self.team.to_state();
+            let name = self.team.input().divers[i].name.clone();
             let r = self.team.remove_diver(i);
+            let removed = r.is_ok();
             self.team_result(r);
             self.fill.keep_within(self.team.len());
             self.chart = ChartPair::default();
+            if removed {
+                self.offer_undo(format!("{name} removed."), before);
+            }
         }
     }
 
@@ -114,6 +120,7 @@ impl Session {
             .locker
             .mine()
             .unwrap_or_else(|| (presets()[0].set, presets()[0].name.to_string()));
+        let before = self.team.to_state();
         let mut t = demo_team(&self.settings);
         t.start_afresh(
             set,
@@ -121,7 +128,15 @@ impl Session {
             Temperature::from_celsius(self.settings.water_temp_c),
         );
         self.team = t;
+        self.fill = super::FillCheck::for_team(self.team.input());
+        self.chart = ChartPair::default();
         self.save_team();
+        let names: Vec<&str> = before.team.divers.iter().map(|d| d.name.as_str()).collect();
+        let text = format!(
+            "New team started; the team of {} was cleared.",
+            names.join(", ")
+        );
+        self.offer_undo(text, before);
     }
 
     // ---- settings ----------------------------------------------------------------
@@ -151,17 +166,24 @@ impl Session {
         }
     }
 
-    /// One degree colder or warmer, for the team and as the default for new teams.
+    /// One degree colder or warmer: the water of this dive (Team page).
     pub fn nudge_water_temp(&mut self, dir: i32) {
         let u = self.units();
+        let current = u.temperature_value(self.team.input().water_temp);
+        let t = u.temperature(current.round() + f64::from(dir.signum()));
+        let r = self.team.set_water_temp(t);
+        self.team_result(r);
+    }
+
+    /// One degree colder or warmer: the water a new team starts with (Settings page).
+    /// Kept within the range a team accepts.
+    pub fn nudge_default_water_temp(&mut self, dir: i32) {
+        let u = self.settings.units;
         let current = u.temperature_value(Temperature::from_celsius(self.settings.water_temp_c));
         let t = u.temperature(current.round() + f64::from(dir.signum()));
-        match self.team.set_water_temp(t) {
-            Ok(()) => {
-                self.remember_water_temp(t);
-                self.save_team();
-            }
-            Err(e) => self.status.push(e.to_string()),
+        let c = t.celsius();
+        if (-2.0..=40.0).contains(&c) || (c > 40.0 && dir < 0) || (c < -2.0 && dir > 0) {
+            self.remember_water_temp(t);
         }
     }
 
@@ -211,11 +233,25 @@ mod tests {
     }
 
     #[test]
-    fn the_water_temperature_nudge_is_remembered_for_new_teams() {
+    fn the_dive_and_the_default_water_temperatures_are_apart() {
         let (_dir, mut s) = session();
-        let before = s.settings.water_temp_c;
+        let default = s.settings.water_temp_c;
+        let dive = s.team.input().water_temp.celsius();
         s.nudge_water_temp(-1);
-        assert_eq!(s.settings.water_temp_c, before - 1.0);
-        assert!((s.team.input().water_temp.celsius() - (before - 1.0)).abs() < 1e-9);
+        assert!((s.team.input().water_temp.celsius() - (dive - 1.0)).abs() < 1e-9);
+        assert_eq!(
+            s.settings.water_temp_c, default,
+            "the dive's water is not the default"
+        );
+        s.nudge_default_water_temp(1);
+        assert_eq!(s.settings.water_temp_c, default + 1.0);
+        assert!((s.team.input().water_temp.celsius() - (dive - 1.0)).abs() < 1e-9);
+        s.new_team();
+        assert!((s.team.input().water_temp.celsius() - (default + 1.0)).abs() < 1e-9);
+        // The default stays within what a team accepts (-2 to 40 °C, the core's range).
+        for _ in 0..60 {
+            s.nudge_default_water_temp(1);
+        }
+        assert_eq!(s.settings.water_temp_c, 40.0);
     }
 }

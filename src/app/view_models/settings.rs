@@ -2,8 +2,8 @@
 
 use super::super::cautions::CAUTIONS;
 use super::super::session::Session;
-use super::{rule_index, step_index, step_labels, water_temp_text};
-use crate::plan::UnitSystem;
+use super::{rule_index, step_index, step_labels, temperature_text};
+use crate::plan::{Temperature, UnitSystem};
 
 pub struct SettingsVm {
     pub imperial: bool,
@@ -21,7 +21,7 @@ pub fn settings(s: &Session) -> SettingsVm {
         rule_index: rule_index(cfg.rule),
         step_options: step_labels(cfg.units),
         step_index: step_index(cfg.units, cfg.gauge_step()),
-        water_temp: water_temp_text(s),
+        water_temp: temperature_text(cfg.units, Temperature::from_celsius(cfg.water_temp_c)),
         about: format!(
             "Turnsheet {} · free software under the GNU GPL, version 3 or later · built with Slint {} (used under its GPL-3.0 licence) · real-gas contents by GERG-2008 (the aga8 crate) · Roboto fonts under the Apache License 2.0 · data in {}",
             env!("CARGO_PKG_VERSION"),

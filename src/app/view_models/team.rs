@@ -17,6 +17,10 @@ pub struct TeamPageVm {
     pub step_index: i32,
     pub depth_text: String,
     pub water_text: String,
+    /// The water temperature of this dive.
+    pub water_temp: String,
+    /// "Bram removed." while the last removal or new team can be undone; else empty.
+    pub undo: String,
     pub can_add: bool,
     pub can_remove: bool,
     pub summary: String,
@@ -31,6 +35,8 @@ pub fn team_page(s: &Session) -> TeamPageVm {
         step_index: step_index(input.units, input.gauge_step),
         depth_text: depth_label(s),
         water_text: water_text(s),
+        water_temp: water_temp_text(s),
+        undo: s.undo_text().to_string(),
         can_add: s.team.can_add(),
         can_remove: s.team.can_remove(),
         summary: team_summary(s),

@@ -20,13 +20,16 @@ pub struct FillVm {
 pub fn fill(s: &Session) -> FillVm {
     let u = s.units();
     let input = s.team.input();
-    let d = &input.divers[s.fill.diver(input.divers.len())];
-    let pu = u.pressure_label();
+    let i = s.fill.diver(input.divers.len());
+    let d = &input.divers[i];
+    // The prediction on the diver's own gauge, as "Plan with" sets it.
+    let g = input.gauge_of(i);
+    let pu = g.label();
     let tu = u.temperature_label();
     let change = s.fill.prediction(input);
-    let real = whole_down(u.pressure_value(change.real));
-    let ideal = whole_down(u.pressure_value(change.ideal));
-    let fill = u.pressure_value(s.fill.pressure);
+    let real = whole_down(g.value(change.real));
+    let ideal = whole_down(g.value(change.ideal));
+    let fill = g.value(s.fill.pressure);
     let dt = u.temperature_value(s.fill.temperature) - u.temperature_value(input.water_temp);
     FillVm {
         diver: d.name.clone(),
@@ -46,7 +49,11 @@ pub fn fill(s: &Session) -> FillVm {
                 fmt_num(ideal)
             )
         },
-        use_text: format!("Use {} {pu} as {}'s start", fmt_num(real), d.name),
+        use_text: format!(
+            "Plan with {} {pu} for {} until the gauge is read in the water",
+            fmt_num(real),
+            d.name
+        ),
     }
 }
 

@@ -19,7 +19,10 @@ pub enum EntryTarget {
     StageStart(usize),
     Sac(usize),
     Depth,
+    /// The water temperature of this dive (the team's; Team and Fill pages).
     WaterTemp,
+    /// The water temperature a new team starts with (Settings page).
+    DefaultWaterTemp,
     DiverName(usize),
     LockerName,
     LockerNote,
@@ -144,7 +147,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
         },
         EntryTarget::WaterTemp => Field {
             buffer: KeypadBuffer::digits(&vm::degrees(u, input.water_temp), false),
-            title: "Water temperature (the gas cools to it)".to_string(),
+            title: "Water temperature of this dive: the gas cools to it, and every diver's plan uses it".to_string(),
             unit: u.temperature_label().to_string(),
             live: true,
             step: None,
@@ -154,11 +157,29 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                     .map(|_| ())
             }),
             apply: apply(move |s, t| s.team.set_water_temp(temperature(u, t)?)),
-            // Also the default for new teams.
-            on_done: Some(apply(move |s, t| {
+            on_done: None,
+        },
+        EntryTarget::DefaultWaterTemp => Field {
+            buffer: KeypadBuffer::digits(
+                &vm::degrees(u, Temperature::from_celsius(s.settings.water_temp_c)),
+                false,
+            ),
+            title: "Water temperature a new team starts with (each dive sets its own on the Team page)".to_string(),
+            unit: u.temperature_label().to_string(),
+            live: false,
+            step: None,
+            revert: None,
+            check: check(move |_, t| {
+                let v = u.temperature_value(temperature(u, t)?);
+                let lo = u.temperature_value(Temperature::from_celsius(-2.0)).floor();
+                let hi = u.temperature_value(Temperature::from_celsius(40.0)).ceil();
+                check_range("water temperature", v, lo, hi, u.temperature_label())
+            }),
+            apply: apply(move |s, t| {
                 s.remember_water_temp(temperature(u, t)?);
                 Ok(())
-            })),
+            }),
+            on_done: None,
         },
         EntryTarget::DiverName(i) => Field {
             buffer: KeypadBuffer::letters(&input.divers.get(i)?.name, 32),
@@ -265,7 +286,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
         }
         EntryTarget::FillPressure => Field {
             buffer: KeypadBuffer::digits(&vm::start_text(u, s.fill.pressure), false),
-            title: "Pressure at the fill station".to_string(),
+            title: "Pressure read at the fill station, cylinder still warm".to_string(),
             unit: u.pressure_label().to_string(),
             live: false,
             step: None,
@@ -283,7 +304,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
         },
         EntryTarget::FillTemp => Field {
             buffer: KeypadBuffer::digits(&vm::degrees(u, s.fill.temperature), false),
-            title: "Gas temperature at the fill (a warm cylinder)".to_string(),
+            title: "Cylinder temperature when that pressure was read: your estimate (hand on the cylinder)".to_string(),
             unit: u.temperature_label().to_string(),
             live: false,
             step: None,

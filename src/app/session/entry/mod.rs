@@ -144,6 +144,44 @@ impl Session {
         self.use_typed(false);
     }
 
+    /// A key of a physical keyboard while a keypad is open (desktop): digits, the
+    /// decimal point (or comma), letters and space on the letter pad, Backspace and
+    /// Delete, Enter for Done, the up and down arrows for one step. Returns whether the
+    /// key was used; Escape is left to Back, which cancels the entry.
+    pub fn keyboard(&mut self, text: &str) -> bool {
+        const BACKSPACE: &str = "\u{8}";
+        const DELETE: &str = "\u{7f}";
+        const UP: &str = "\u{f700}";
+        const DOWN: &str = "\u{f701}";
+        let Some(entry) = self.entry.as_ref() else {
+            return false;
+        };
+        let letters = entry.field.buffer.is_letters();
+        match text {
+            BACKSPACE | DELETE => self.key("del"),
+            "\n" | "\r" => self.entry_done(),
+            UP => self.key("+step"),
+            DOWN => self.key("-step"),
+            "," if !letters => self.key("."),
+            t => {
+                let mut chars = t.chars();
+                let (Some(c), None) = (chars.next(), chars.next()) else {
+                    return false;
+                };
+                let usable = if letters {
+                    c.is_alphanumeric() || " -'./".contains(c)
+                } else {
+                    c.is_ascii_digit() || c == '.'
+                };
+                if !usable {
+                    return false;
+                }
+                self.key(t);
+            }
+        }
+        true
+    }
+
     /// Done: use the value (only possible when it is usable) and close.
     pub fn entry_done(&mut self) {
         if !self.use_typed(true) {

@@ -134,14 +134,53 @@ fn fields_that_do_not_drive_the_plan_apply_on_done_only() {
 }
 
 #[test]
-fn the_water_temperature_on_done_is_the_default_for_new_teams() {
+fn the_dive_water_is_live_and_the_default_is_set_on_done_only() {
     let (_dir, mut s) = session();
+    let default = s.settings.water_temp_c;
     s.open_entry(EntryTarget::WaterTemp);
     keys(&mut s, &["clear", "8"]);
     assert!((s.team.input().water_temp.celsius() - 8.0).abs() < 1e-9);
-    assert_ne!(s.settings.water_temp_c, 8.0, "remembered on Done only");
     s.entry_done();
-    assert_eq!(s.settings.water_temp_c, 8.0);
+    assert_eq!(
+        s.settings.water_temp_c, default,
+        "a dive's water is not the default"
+    );
+    s.open_entry(EntryTarget::DefaultWaterTemp);
+    keys(&mut s, &["4", "1"]);
+    assert!(reason(&s).contains("-2 to 40"), "{}", reason(&s));
+    keys(&mut s, &["del"]);
+    assert_eq!(s.settings.water_temp_c, default, "applied on Done only");
+    s.entry_done();
+    assert_eq!(s.settings.water_temp_c, 4.0);
+    assert!((s.team.input().water_temp.celsius() - 8.0).abs() < 1e-9);
+}
+
+#[test]
+fn a_physical_keyboard_types_into_the_open_keypad() {
+    let (_dir, mut s) = session();
+    assert!(!s.keyboard("5"), "no keypad open");
+    s.open_entry(EntryTarget::Start(0));
+    for k in ["2", "x", "1", "0", "\u{8}", "5"] {
+        s.keyboard(k);
+    }
+    assert_eq!(s.entry.as_ref().unwrap().buffer().text(), "215");
+    assert!(s.keyboard("\u{f701}"), "down arrow: one step down");
+    let g = s.team.input().gauge_of(0);
+    assert_eq!(
+        s.entry.as_ref().unwrap().buffer().text(),
+        fmt_num(crate::plan::rounding::next_step(215.0, g.step, -1))
+    );
+    assert!(s.keyboard("\n"));
+    assert!(s.entry.is_none(), "Enter is Done");
+    assert_eq!(
+        s.team.input().divers[0].start.bar(),
+        crate::plan::rounding::next_step(215.0, g.step, -1)
+    );
+    s.open_entry(EntryTarget::DiverName(0));
+    for k in ["b", "o", "\u{7f}", "e", " ", "l", "3"] {
+        s.keyboard(k);
+    }
+    assert_eq!(s.entry.as_ref().unwrap().buffer().text(), "Be L3");
 }
 
 #[test]
