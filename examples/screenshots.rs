@@ -140,4 +140,26 @@ fn main() {
         s.go(Screen::Turns);
     });
     shot("15-buddy-imperial", &|s| s.go(Screen::Buddy));
+
+    // A small phone (360 × 640) with the system text size at 1.3.
+    app.set_font_scale(1.3);
+    app.window
+        .window()
+        .set_size(slint::LogicalSize::new(360.0, 640.0));
+    shot("20-small-team", &|s| {
+        s.back();
+        s.back();
+        s.set_units(turnsheet::plan::UnitSystem::Metric);
+    });
+    shot("21-small-keypad", &|s| {
+        s.open_entry(EntryTarget::Start(0));
+        for k in ["2", "1", "0"] {
+            s.key(k);
+        }
+    });
+    shot("22-small-turns", &|s| {
+        s.entry_done();
+        s.go(Screen::Turns);
+    });
+    shot("23-small-chart", &|s| s.go(Screen::Chart));
 }

@@ -677,8 +677,16 @@ fn wet_notes_chart_page_shows_the_core_chart() {
         .unwrap()
         .to_input()
         .unwrap();
-    let around = |i: usize| starts_around(input.divers[i].start.bar(), 10.0, 2, 7);
-    let chart = pair_chart(&input, 2, 0, &around(2), &around(0)).unwrap();
+    use turnsheet::app::session::{CHART_ROWS, chart_columns};
+    let (start_sol, start_ines) = (input.divers[2].start.bar(), input.divers[0].start.bar());
+    let rows = starts_around(start_sol, 10.0, CHART_ROWS.0, CHART_ROWS.1);
+    let (above, below) = chart_columns(start_ines);
+    let columns = starts_around(start_ines, 10.0, above, below);
+    assert!(
+        columns.len() >= 6,
+        "one above, four below and the planned start"
+    );
+    let chart = pair_chart(&input, 2, 0, &rows, &columns).unwrap();
     for (r, row) in chart.turns.iter().enumerate() {
         for (c, cell) in row.iter().enumerate() {
             let shown = value(&app, &format!("chart cell {r} {c}"));

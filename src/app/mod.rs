@@ -37,6 +37,18 @@ impl App {
         Ok(App { window, session })
     }
 
+    /// Follow the system's text size: 1 is normal, about 1.3 is Android's "large".
+    /// Kept within 0.8 to 2 so a stray value cannot make the app unusable.
+    pub fn set_font_scale(&self, scale: f32) {
+        use slint::ComponentHandle;
+        let scale = if scale.is_finite() {
+            scale.clamp(0.8, 2.0)
+        } else {
+            1.0
+        };
+        self.window.global::<Theme>().set_font_scale(scale);
+    }
+
     /// Save everything now (lifecycle events).
     pub fn save(&self) {
         self.session.borrow_mut().save_all();
@@ -55,6 +67,11 @@ pub fn run_desktop() -> i32 {
             return 1;
         }
     };
+    if let Some(scale) =
+        crate::platform::font_scale_from(std::env::var_os("TURNSHEET_FONT_SCALE").as_deref())
+    {
+        app.set_font_scale(scale);
+    }
     crate::platform::first_frame::exit_after_first_frame_if_asked(app.window.window());
     let result = app.window.run();
     app.save();

@@ -57,6 +57,17 @@ pub fn handle_lifecycle(session: &mut Session, event: Lifecycle) -> bool {
 /// The app's data directory on Android: the app-private internal storage
 /// (`Context.getFilesDir()`), which needs no permission. Falls back to the
 /// desktop rules when the platform gives none.
+/// The text size asked for by `TURNSHEET_FONT_SCALE` (desktop; e.g. `1.3`), if it is
+/// a number.
+pub fn font_scale_from(value: Option<&std::ffi::OsStr>) -> Option<f32> {
+    value?
+        .to_str()?
+        .trim()
+        .parse::<f32>()
+        .ok()
+        .filter(|x| x.is_finite())
+}
+
 pub fn android_data_dir(internal: Option<PathBuf>) -> PathBuf {
     match internal {
         Some(p) if !p.as_os_str().is_empty() => p.join("turnsheet"),
@@ -68,6 +79,15 @@ pub fn android_data_dir(internal: Option<PathBuf>) -> PathBuf {
 mod tests {
     use super::*;
     use crate::storage::Store;
+
+    #[test]
+    fn the_font_scale_comes_from_a_number_only() {
+        use std::ffi::OsStr;
+        assert_eq!(font_scale_from(Some(OsStr::new(" 1.3"))), Some(1.3));
+        assert_eq!(font_scale_from(Some(OsStr::new("large"))), None);
+        assert_eq!(font_scale_from(Some(OsStr::new("NaN"))), None);
+        assert_eq!(font_scale_from(None), None);
+    }
 
     #[test]
     fn pause_and_stop_save_everything() {

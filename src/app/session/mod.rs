@@ -28,7 +28,7 @@ mod undo;
 pub use entry::{Entry, EntryTarget};
 pub use pickers::Picker;
 pub use team_actions::DEMO_TEAM;
-pub use tools::{ChartPair, FillCheck};
+pub use tools::{CHART_ROWS, ChartPair, FillCheck, chart_columns};
 
 pub struct Session {
     store: Store,

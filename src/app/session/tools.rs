@@ -112,14 +112,31 @@ impl ChartPair {
         *self = ChartPair { me, other };
     }
 
-    /// The chart of the pair, centred on their planned starts.
+    /// The chart of the pair around their planned starts: rows from two graduations
+    /// above the diver's start to seven below, columns from one above the teammate's to
+    /// three below (two when their gauge reads four digits), so it fits a phone's width.
     pub fn chart(&self, input: &TeamInput) -> Option<PairChart> {
         let (me, other) = self.pair(input.divers.len())?;
-        let around = |i: usize| {
-            let g = input.gauge_of(i);
-            starts_around(g.value(input.divers[i].start), g.step, 2, 7)
-        };
-        pair_chart(input, me, other, &around(me), &around(other)).ok()
+        let g = |i: usize| input.gauge_of(i);
+        let start = |i: usize| g(i).value(input.divers[i].start);
+        let (above, below) = CHART_ROWS;
+        let rows = starts_around(start(me), g(me).step, above, below);
+        let (above, below) = chart_columns(start(other));
+        let columns = starts_around(start(other), g(other).step, above, below);
+        pair_chart(input, me, other, &rows, &columns).ok()
+    }
+}
+
+/// Graduations above and below the diver's start shown as rows of the app's chart.
+pub const CHART_ROWS: (usize, usize) = (2, 7);
+
+/// Graduations above and below the teammate's start shown as columns of the app's chart:
+/// fewer for a four-digit gauge (psi), so the columns fit a 360 px phone.
+pub fn chart_columns(teammate_start: f64) -> (usize, usize) {
+    if teammate_start >= 1000.0 {
+        (1, 2)
+    } else {
+        (1, 3)
     }
 }
 

@@ -138,7 +138,7 @@ pub fn start_note(status: StartStatus, now: i64) -> String {
 
 pub fn team_summary(s: &Session) -> String {
     let plan = s.team.plan();
-    if let Some(wait) = super::turns::starts_blocking(s) {
+    if let Some(wait) = super::turns::starts_blocking_short(s) {
         return wait;
     }
     let turns: Vec<String> = plan

@@ -79,6 +79,34 @@ pub fn starts_blocking(s: &Session) -> Option<String> {
     }
 }
 
+/// The same in a few words, for the Team page's one-line summary: "No turns yet. Read
+/// in the water: Ines, Bram. Check the gauge: Sol."
+pub fn starts_blocking_short(s: &Session) -> Option<String> {
+    let now = now();
+    let input = s.team.input();
+    let (mut read, mut check) = (Vec::new(), Vec::new());
+    for i in s.team.readings().blocking(now) {
+        let Some(d) = input.divers.get(i) else {
+            continue;
+        };
+        match s.team.start_status(i, now) {
+            StartStatus::Old { .. } => check.push(d.name.as_str()),
+            _ => read.push(d.name.as_str()),
+        }
+    }
+    if read.is_empty() && check.is_empty() {
+        return None;
+    }
+    let mut text = "No turns yet.".to_string();
+    if !read.is_empty() {
+        text += &format!(" Read in the water: {}.", read.join(", "));
+    }
+    if !check.is_empty() {
+        text += &format!(" Check the gauge: {}.", check.join(", "));
+    }
+    Some(text)
+}
+
 pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
     let plan = s.team.plan();
     let input = s.team.input();

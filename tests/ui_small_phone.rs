@@ -1,0 +1,215 @@
+//! A small phone: every page and overlay at 360 × 640 with the system text size at
+//! 1.3 (Android's "large"), through the real toolkit with the software renderer.
+//!
+//! Checked for every state:
+//! - every button is at least 48 × 48 px (the common minimum touch target);
+//! - nothing reaches past the left or right edge;
+//! - the open keypad (field, message, keys, Cancel and Done) fits inside the window, so
+//!   nothing is hidden behind it or below it.
+//!
+//! Each state is also drawn to `target/small-phone/NAME.png` to look at.
+
+use i_slint_backend_testing::{
+    AccessibleRole, ElementHandle, ElementQuery, TestingBackend, TestingBackendOptions,
+};
+use slint::ComponentHandle;
+use turnsheet::app::App;
+use turnsheet::app::adapters::refresh_all;
+use turnsheet::app::nav::Screen;
+use turnsheet::app::session::{EntryTarget, Session};
+
+const W: f32 = 360.0;
+const H: f32 = 640.0;
+const SCALE: f32 = 1.3;
+
+fn save_png(app: &App, name: &str) {
+    let dir = std::path::Path::new(env!("CARGO_TARGET_TMPDIR"))
+        .parent()
+        .unwrap()
+        .join("small-phone");
+    std::fs::create_dir_all(&dir).unwrap();
+    let shot = app.window.window().take_snapshot().unwrap();
+    let file = std::fs::File::create(dir.join(format!("{name}.png"))).unwrap();
+    let mut enc = png::Encoder::new(std::io::BufWriter::new(file), shot.width(), shot.height());
+    enc.set_color(png::ColorType::Rgba);
+    enc.set_depth(png::BitDepth::Eight);
+    enc.write_header()
+        .unwrap()
+        .write_image_data(shot.as_bytes())
+        .unwrap();
+}
+
+/// Every element with a label or a role, with where it is.
+fn elements(app: &App) -> Vec<(String, AccessibleRole, f32, f32, f32, f32)> {
+    ElementQuery::from_root(&app.window)
+        .match_descendants()
+        .find_all()
+        .into_iter()
+        .filter_map(|e: ElementHandle| {
+            let role = e.accessible_role()?;
+            if role == AccessibleRole::None {
+                return None;
+            }
+            let label = e.accessible_label().unwrap_or_default().to_string();
+            let p = e.absolute_position();
+            let s = e.size();
+            Some((label, role, p.x, p.y, s.width, s.height))
+        })
+        .collect()
+}
+
+/// What the open keypad shows: its field and message, keys, Cancel and Done.
+fn on_keypad(label: &str) -> bool {
+    let key = label.chars().count() == 1;
+    key || [
+        "entry",
+        "entry problem",
+        "cancel entry",
+        "done",
+        "delete",
+        "clear",
+        "space",
+        "decimal point",
+        "minus one step",
+        "plus one step",
+    ]
+    .contains(&label)
+}
+
+/// The problems of the state on screen, each naming the element. With `keypad`, the
+/// keypad's own elements must also fit the window's height.
+fn problems(app: &App, state: &str, keypad: bool) -> Vec<String> {
+    let mut out = Vec::new();
+    for (label, role, x, y, w, h) in elements(app) {
+        let whole_height = keypad && on_keypad(&label);
+        if w <= 0.0 || h <= 0.0 {
+            continue;
+        }
+        if role == AccessibleRole::Button && (w < 47.9 || h < 47.9) {
+            out.push(format!("{state}: button {label:?} is {w:.0} × {h:.0} px"));
+        }
+        if x < -0.5 || x + w > W + 0.5 {
+            out.push(format!(
+                "{state}: {label:?} spans x {x:.0} to {:.0} in a {W} px window",
+                x + w
+            ));
+        }
+        if whole_height && (y < -0.5 || y + h > H + 0.5) {
+            out.push(format!(
+                "{state}: {label:?} spans y {y:.0} to {:.0} in a {H} px window",
+                y + h
+            ));
+        }
+    }
+    out
+}
+
+#[test]
+fn every_page_works_on_a_small_phone_with_large_text() {
+    slint::platform::set_platform(Box::new(TestingBackend::new(TestingBackendOptions {
+        mock_time: true,
+        threading: false,
+        renderer_name: Some("software".into()),
+    })))
+    .unwrap();
+    let dir = tempfile::tempdir().unwrap();
+    let app = App::new(dir.path()).unwrap();
+    app.set_font_scale(SCALE);
+    app.window.window().set_size(slint::LogicalSize::new(W, H));
+    app.window.show().unwrap();
+
+    let mut all = Vec::new();
+    let mut seen = 0;
+    let mut state = |name: &str, keypad: bool, f: &dyn Fn(&mut Session)| {
+        f(&mut app.session.borrow_mut());
+        refresh_all(&app.window, &app.session.borrow());
+        save_png(&app, name);
+        seen += elements(&app).len();
+        all.extend(problems(&app, name, keypad));
+    };
+
+    state("cautions", false, &|_| {});
+    state("team", false, &|s| s.acknowledge_cautions());
+    state("keypad-start", true, &|s| {
+        s.open_entry(EntryTarget::Start(1))
+    });
+    state("keypad-start-refused", true, &|s| {
+        for k in ["9", "9", "9"] {
+            s.key(k);
+        }
+    });
+    state("keypad-name", true, &|s| {
+        s.cancel_entry();
+        s.open_entry(EntryTarget::DiverName(0));
+    });
+    state("team-read", false, &|s| {
+        s.cancel_entry();
+        for i in 0..s.team.len() {
+            s.confirm_start(i);
+        }
+    });
+    state("mix-picker", false, &|s| s.open_mix_picker(0));
+    state("cylinder-picker", false, &|s| {
+        s.picker.close();
+        s.open_cylinder_picker(1);
+    });
+    state("turns", false, &|s| {
+        s.picker.close();
+        s.go(Screen::Turns);
+    });
+    state("buddy", false, &|s| s.go(Screen::Buddy));
+    state("chart", false, &|s| {
+        s.back();
+        s.go(Screen::Chart);
+    });
+    state("fill", false, &|s| {
+        s.back();
+        s.back();
+        s.go(Screen::Fill);
+    });
+    state("settings", false, &|s| {
+        s.back();
+        s.go(Screen::Settings);
+    });
+    state("locker", false, &|s| s.go(Screen::Locker));
+    state("locker-edit", false, &|s| s.locker_new());
+    state("keypad-locker-name", true, &|s| {
+        s.open_entry(EntryTarget::LockerName)
+    });
+
+    // Everything below the fold of each scrolling page, in a window as narrow but
+    // tall enough to show it all.
+    app.window
+        .window()
+        .set_size(slint::LogicalSize::new(W, 5000.0));
+    let mut tall = |name: &str, f: &dyn Fn(&mut Session)| {
+        f(&mut app.session.borrow_mut());
+        refresh_all(&app.window, &app.session.borrow());
+        all.extend(problems(&app, name, false));
+    };
+    tall("locker-edit (whole page)", &|s| s.cancel_entry());
+    tall("locker (whole page)", &|s| {
+        s.back();
+    });
+    tall("settings (whole page)", &|s| {
+        s.back();
+    });
+    tall("team (whole page)", &|s| {
+        s.back();
+    });
+    tall("turns (whole page)", &|s| s.go(Screen::Turns));
+    tall("fill (whole page)", &|s| {
+        s.back();
+        s.go(Screen::Fill);
+    });
+
+    assert!(seen > 200, "only {seen} elements looked at");
+    let mut unique = std::collections::BTreeSet::new();
+    all.retain(|p| unique.insert(p.clone()));
+    assert!(
+        all.is_empty(),
+        "{} problems:\n{}",
+        all.len(),
+        all.join("\n")
+    );
+}
