@@ -840,3 +840,59 @@ fn the_water_temperature_belongs_to_the_dive() {
     press(&app, "fill check");
     assert_eq!(value(&app, "water temperature for the fill check"), shown);
 }
+
+#[test]
+fn the_demo_says_so_on_every_page_until_a_team_of_ones_own() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_unread(dir.path());
+    assert!(value(&app, "demo note").contains("invented"));
+    for (go, label) in [("show turns", "Chart"), ("fill check", "")] {
+        press(&app, go);
+        assert!(value(&app, "demo note").contains("invented"), "{go}");
+        if !label.is_empty() {
+            press(&app, label);
+            assert!(value(&app, "demo note").contains("invented"), "{label}");
+            back_key(&app);
+        }
+        back_key(&app);
+    }
+    press(&app, "new team");
+    assert_eq!(
+        ElementHandle::find_by_accessible_label(&app.window, "demo note").count(),
+        0
+    );
+}
+
+#[test]
+fn the_team_card_is_written_from_starts_read_today_only() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_unread(dir.path());
+    press(&app, "show turns");
+    press(&app, "save card");
+    assert!(
+        value(&app, "message").contains("No card yet"),
+        "{}",
+        value(&app, "message")
+    );
+    press(&app, "dismiss message");
+    back_key(&app);
+    read_every_start(&app);
+    press(&app, "show turns");
+    press(&app, "save card");
+    let msg = value(&app, "message");
+    assert!(msg.contains("Team card written to"), "{msg}");
+    let cards: Vec<_> = std::fs::read_dir(dir.path().join("cards"))
+        .unwrap()
+        .map(|e| e.unwrap().path())
+        .collect();
+    assert_eq!(cards.len(), 1);
+    let svg = std::fs::read_to_string(&cards[0]).unwrap();
+    // The card carries the turn the Turns page shows for each diver.
+    for name in ["Ines", "Bram", "Sol"] {
+        let turn = value(&app, &format!("turn of {name}"));
+        let digits = turn.split_whitespace().next().unwrap();
+        assert!(svg.contains(digits), "{name} {turn}");
+    }
+}

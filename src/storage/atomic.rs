@@ -175,9 +175,15 @@ pub enum ReadOutcome<T> {
 /// process is killed or two processes save at once. The temp file's name is unique to the
 /// writer; one left behind by a killed writer is removed by a later save once it is old.
 pub fn write_json<T: Serialize>(path: &Path, value: &T) -> std::io::Result<()> {
+    let mut text = serde_json::to_string_pretty(value).map_err(std::io::Error::other)?;
+    text.push('\n');
+    write_text(path, &text)
+}
+
+/// Write `text` the same way: whole or not at all, even if the process is killed.
+pub fn write_text(path: &Path, text: &str) -> std::io::Result<()> {
     let dir = path.parent().unwrap_or_else(|| Path::new("."));
     fs::create_dir_all(dir)?;
-    let text = serde_json::to_string_pretty(value).map_err(std::io::Error::other)?;
     let name = path.file_name().and_then(|n| n.to_str()).unwrap_or("data");
     let nanos = std::time::SystemTime::now()
         .duration_since(std::time::UNIX_EPOCH)
@@ -192,7 +198,6 @@ pub fn write_json<T: Serialize>(path: &Path, value: &T) -> std::io::Result<()> {
             .create_new(true)
             .open(&tmp)?;
         f.write_all(text.as_bytes())?;
-        f.write_all(b"\n")?;
         f.sync_all()?;
         fs::rename(&tmp, path)
     })();

@@ -51,6 +51,7 @@ pub fn connect_all(ui: &AppWindow, s: &Shared) {
     settings_adapter::connect(ui, s);
     fill_adapter::connect(ui, s);
     chart_adapter::connect(ui, s);
+    turns_adapter::connect(ui, s);
 }
 
 pub fn refresh_all(ui: &AppWindow, s: &Session) {

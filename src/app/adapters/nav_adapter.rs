@@ -55,4 +55,6 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
     ui.global::<Nav>().set_page(page(s.page()));
     ui.global::<StatusAdapter>()
         .set_message(vm::status(s).into());
+    ui.global::<StatusAdapter>()
+        .set_demo_note(vm::demo_note(s).into());
 }

@@ -5,7 +5,16 @@ use slint::ComponentHandle;
 use super::super::session::Session;
 use super::super::view_models as vm;
 use super::super::{AppWindow, BuddyAdapter, BuddyRow, TurnRow, TurnsAdapter};
-use super::{model, strings};
+use super::{Shared, act, handles, model, strings};
+
+pub fn connect(ui: &AppWindow, s: &Shared) {
+    let (w, st) = handles(ui, s);
+    ui.global::<TurnsAdapter>().on_save_card(move || {
+        act(&w, &st, |x| {
+            x.save_card();
+        })
+    });
+}
 
 pub fn refresh(ui: &AppWindow, s: &Session) {
     let rows = vm::turn_rows(s);

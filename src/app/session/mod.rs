@@ -18,6 +18,7 @@ use super::locker_controller::LockerController;
 use super::nav::{NavController, Screen, Status};
 use super::team_controller::TeamController;
 
+mod card;
 mod entry;
 mod locker_actions;
 mod pickers;

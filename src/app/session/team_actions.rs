@@ -28,6 +28,7 @@ pub(super) fn demo_team(settings: &Settings) -> TeamController {
         stage_labels: DEMO_STAGE_LABELS.iter().map(|s| s.to_string()).collect(),
         // The demo's starts were read by nobody.
         start_readings: Vec::new(),
+        demo: true,
     };
     let mut t = TeamController::from_state(&state).expect("the bundled demo team plans");
     let _ = t.set_rule(settings.rule);
@@ -219,6 +220,22 @@ mod tests {
         }
         assert!(s.status.text().contains("1.5 ×"), "{:?}", s.status);
         assert_eq!(s.team.plan(), &last, "the refused step left the plan alone");
+    }
+
+    #[test]
+    fn the_demo_says_so_until_a_team_of_ones_own() {
+        let (dir, mut s) = session();
+        assert!(s.team.is_demo());
+        assert!(crate::app::view_models::demo_note(&s).contains("invented"));
+        s.save_all();
+        let again = Session::open(Store::new(dir.path()));
+        assert!(again.team.is_demo(), "kept across a restart");
+        s.team.set_name(0, "Ana").unwrap();
+        assert!(!s.team.is_demo(), "a diver of one's own");
+        let (_dir, mut s) = session();
+        s.new_team();
+        assert!(!s.team.is_demo());
+        assert_eq!(crate::app::view_models::demo_note(&s), "");
     }
 
     #[test]

@@ -28,6 +28,8 @@ pub struct TeamController {
     plan: TeamPlan,
     /// Whether each start is a reading taken today.
     readings: Readings,
+    /// The demo team of invented divers (until a new team or a diver is named).
+    demo: bool,
 }
 
 impl TeamController {
@@ -58,12 +60,14 @@ impl TeamController {
             stage_labels,
             plan,
             readings,
+            demo: false,
         })
     }
 
     pub fn from_state(state: &TeamState) -> Result<Self, InputError> {
         let mut t = Self::new(state.team.to_input()?, state.cylinder_labels.clone())?;
         t.readings = Readings::from_saved(&state.start_readings, t.len());
+        t.demo = state.demo;
         for (i, l) in state.stage_labels.iter().enumerate() {
             if i < t.stage_labels.len() && !l.is_empty() && t.input.divers[i].stage.is_some() {
                 t.stage_labels[i] = l.clone();
@@ -79,7 +83,13 @@ impl TeamController {
             cylinder_labels: self.labels.clone(),
             stage_labels: self.stage_labels.clone(),
             start_readings: self.readings.saved().to_vec(),
+            demo: self.demo,
         }
+    }
+
+    /// Whether this is the demo team of invented divers.
+    pub fn is_demo(&self) -> bool {
+        self.demo
     }
 
     /// Whether each start is a reading taken today.
@@ -220,7 +230,12 @@ impl TeamController {
 
     pub fn set_name(&mut self, i: usize, name: &str) -> Result<(), InputError> {
         let name = name.trim().to_string();
-        self.try_update(|t| t.divers[i].name = name)
+        let r = self.try_update(|t| t.divers[i].name = name);
+        if r.is_ok() {
+            // A diver of one's own: no longer the demo.
+            self.demo = false;
+        }
+        r
     }
 
     pub fn set_mix(&mut self, i: usize, mix: Mix) -> Result<(), InputError> {

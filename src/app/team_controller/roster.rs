@@ -179,5 +179,6 @@ impl TeamController {
         let _ = self.set_depth(None);
         let _ = self.set_water_temp(water_temp);
         self.forget_readings();
+        self.demo = false;
     }
 }

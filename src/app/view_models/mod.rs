@@ -25,7 +25,7 @@ pub use locker::{
 };
 pub use settings::{SettingsVm, cautions, settings};
 pub use team::{
-    DiverCardVm, TeamPageVm, depth_label, diver_cards, status, team_page, team_summary,
+    DiverCardVm, TeamPageVm, demo_note, depth_label, diver_cards, status, team_page, team_summary,
     water_temp_text, water_text,
 };
 pub use tools::{ChartRowVm, ChartVm, FillVm, chart, fill};

@@ -177,6 +177,15 @@ pub fn water_temp_text(s: &Session) -> String {
     temperature_text(s.units(), s.team.input().water_temp)
 }
 
+/// The line every page shows while the team is the demo; empty otherwise.
+pub fn demo_note(s: &Session) -> String {
+    if s.team.is_demo() {
+        "DEMO: invented divers. Tap New team on the Team page to plan your own.".to_string()
+    } else {
+        String::new()
+    }
+}
+
 /// The messages for the person, one a line; empty when there are none.
 pub fn status(s: &Session) -> String {
     s.status.text()

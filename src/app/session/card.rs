@@ -1,0 +1,87 @@
+//! The printable team card from the app: the same SVG as `turnsheet card --charts`,
+//! written into the data directory's `cards/` folder.
+
+use std::path::PathBuf;
+
+use crate::formats::card_svg::{CardHeading, card_svg};
+use crate::plan::chart::team_charts;
+
+use super::Session;
+
+impl Session {
+    /// Write the team's card with every pairing chart. Only from starts read today: a
+    /// card of unread starts would carry turns nobody can trust. Says what happened in
+    /// the status and returns the file written.
+    pub fn save_card(&mut self) -> Option<PathBuf> {
+        let now = crate::app::readings::now();
+        if !self.team.turns_ready(now) {
+            let why = super::super::view_models::starts_blocking(self).unwrap_or_default();
+            self.status.push(format!("No card yet. {why}"));
+            return None;
+        }
+        let input = self.team.input();
+        let charts = match team_charts(input, 2, 7) {
+            Ok(c) => c,
+            Err(e) => {
+                self.status.push(format!("The card could not be made: {e}"));
+                return None;
+            }
+        };
+        let stamp = chrono::Local::now();
+        let heading = CardHeading {
+            dive: None,
+            date: Some(stamp.format("%-d %b %Y %H:%M").to_string()),
+        };
+        let svg = card_svg(&heading, input, self.team.plan(), &charts);
+        let path = self
+            .data_dir()
+            .join("cards")
+            .join(format!("card-{}.svg", stamp.format("%Y-%m-%d-%H%M%S")));
+        match crate::storage::atomic::write_text(&path, &svg) {
+            Ok(()) => {
+                self.status.push(format!(
+                    "Team card written to {} (open it in a browser to print).",
+                    path.display()
+                ));
+                Some(path)
+            }
+            Err(e) => {
+                self.status.push(format!(
+                    "The card could not be written to {}: {e}",
+                    path.display()
+                ));
+                None
+            }
+        }
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use crate::app::session::Session;
+    use crate::storage::Store;
+
+    #[test]
+    fn a_card_only_from_starts_read_today() {
+        let dir = tempfile::tempdir().unwrap();
+        let mut s = Session::open(Store::new(dir.path()));
+        assert_eq!(s.save_card(), None, "the demo's starts are unread");
+        assert!(
+            s.status.text().contains("No card yet"),
+            "{}",
+            s.status.text()
+        );
+        for i in 0..s.team.len() {
+            s.confirm_start(i);
+        }
+        let path = s.save_card().expect("a card");
+        let svg = std::fs::read_to_string(&path).unwrap();
+        assert!(svg.starts_with("<?xml") || svg.starts_with("<svg"));
+        // Every diver's shown turn, in their unit, is on the card.
+        for d in &s.team.plan().divers {
+            let turn = format!("{}", d.turn_shown_value);
+            assert!(svg.contains(&turn), "{} {turn}", d.name);
+            assert!(svg.contains(&d.name));
+        }
+    }
+}
