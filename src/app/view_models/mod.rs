@@ -49,9 +49,11 @@ pub fn whole_up(value: f64) -> f64 {
     (value - NOISE).ceil()
 }
 
-/// A shown turn pressure: already on the gauge step; rounded up against float noise.
+/// A shown turn pressure: already on the diver's graduation, written as the gauge reads
+/// it (162.5 on a 2.5 bar graduation, as the CLI and the card write it); anything finer
+/// than a hundredth is float noise, rounded up.
 pub fn turn_text(value: f64) -> String {
-    format!("{}", whole_up(value) as i64)
+    crate::plan::error::fmt_num(((value - NOISE) * 100.0).ceil() / 100.0)
 }
 
 /// A start pressure as read: rounded down.
@@ -186,7 +188,9 @@ mod tests {
     #[test]
     fn display_rounding_is_conservative() {
         assert_eq!(turn_text(150.0000001), "150");
-        assert_eq!(turn_text(150.2), "151");
+        assert_eq!(turn_text(149.9999999), "150");
+        assert_eq!(turn_text(162.5), "162.5", "a 2.5 bar graduation");
+        assert_eq!(turn_text(162.501), "162.51", "never below the value");
         assert_eq!(
             start_text(UnitSystem::Metric, Pressure::from_bar(217.9)),
             "217"
