@@ -198,6 +198,19 @@ fn every_page_works_on_a_small_phone_with_large_text() {
         s.back();
     });
     tall("turns (whole page)", &|s| s.go(Screen::Turns));
+    // Bram reads psi (his gauge button twice), the team is imperial, then metric again.
+    tall("team with a psi diver (whole page)", &|s| {
+        s.back();
+        s.cycle_gauge(1);
+        s.cycle_gauge(1);
+        s.open_entry(EntryTarget::Start(1));
+        for k in ["2", "9", "5", "0"] {
+            s.key(k);
+        }
+        s.entry_done();
+        s.set_units(turnsheet::plan::UnitSystem::Imperial);
+        s.set_units(turnsheet::plan::UnitSystem::Metric);
+    });
     tall("fill (whole page)", &|s| {
         s.back();
         s.go(Screen::Fill);
