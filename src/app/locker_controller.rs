@@ -4,7 +4,7 @@ use crate::formats::team_file::CylindersFile;
 use crate::plan::CylinderSet;
 use crate::plan::catalogue::Preset;
 use crate::plan::error::InputError;
-use crate::storage::locker::{LockerEntry, LockerFile};
+use crate::storage::locker::{LockerEntry, LockerFile, MAX_SET_NOTE_CHARS, check_set_name};
 
 pub use super::locker_draft::Draft;
 
@@ -12,6 +12,8 @@ pub use super::locker_draft::Draft;
 pub struct LockerController {
     pub file: LockerFile,
     draft: Option<Draft>,
+    /// The draft as it was opened, to tell whether it was changed.
+    opened: Option<Draft>,
     /// The last deleted entry and where it was.
     undo: Option<(usize, LockerEntry)>,
 }
@@ -21,6 +23,7 @@ impl LockerController {
         LockerController {
             file,
             draft: None,
+            opened: None,
             undo: None,
         }
     }
@@ -45,6 +48,15 @@ impl LockerController {
     /// Close the draft without saving.
     pub fn drop_draft(&mut self) {
         self.draft = None;
+        self.opened = None;
+    }
+    /// Whether the open draft differs from what it was when opened.
+    pub fn draft_changed(&self) -> bool {
+        self.draft.is_some() && self.draft != self.opened
+    }
+    fn open_draft(&mut self, d: Option<Draft>) {
+        self.opened = d.clone();
+        self.draft = d;
     }
 
     /// The name of the entry that Undo would bring back.
@@ -53,13 +65,13 @@ impl LockerController {
     }
 
     pub fn start_new(&mut self) {
-        self.draft = Some(Draft::blank());
+        self.open_draft(Some(Draft::blank()));
     }
     pub fn start_edit(&mut self, id: u64) {
-        self.draft = self.entry(id).map(Draft::from_entry);
+        self.open_draft(self.entry(id).map(Draft::from_entry));
     }
     pub fn start_from_preset(&mut self, p: &Preset) {
-        self.draft = Some(Draft::from_preset(p));
+        self.open_draft(Some(Draft::from_preset(p)));
     }
 
     /// Save the draft into the locker. The draft stays open on error.
@@ -67,11 +79,14 @@ impl LockerController {
         let Some(d) = self.draft.clone() else {
             return Err(InputError::new("locker", "nothing is being edited"));
         };
+        check_set_name("name", &d.name)?;
         let name = d.name.trim().to_string();
-        if name.is_empty() || name.chars().count() > 40 {
+        let note = d.note.trim().to_string();
+        let n = note.chars().count();
+        if n > MAX_SET_NOTE_CHARS {
             return Err(InputError::new(
-                "name",
-                "a name of 1 to 40 characters is needed",
+                "note",
+                format!("{n} characters is too long; at most {MAX_SET_NOTE_CHARS}"),
             ));
         }
         let set = d.to_set()?;
@@ -84,7 +99,7 @@ impl LockerController {
                 e.name = name;
                 e.cylinders = cylinders;
                 e.material = d.material;
-                e.note = d.note.trim().to_string();
+                e.note = note;
                 e.id
             }
             None => {
@@ -95,13 +110,13 @@ impl LockerController {
                     name,
                     cylinders,
                     material: d.material,
-                    note: d.note.trim().to_string(),
+                    note,
                     mine: first,
                 });
                 id
             }
         };
-        self.draft = None;
+        self.drop_draft();
         Ok(id)
     }
 

@@ -20,12 +20,16 @@ use super::team_controller::TeamController;
 
 mod entry;
 mod locker_actions;
+mod locker_exchange;
 mod pickers;
+mod saving;
 mod team_actions;
 mod tools;
 
 pub use entry::{Entry, EntryTarget};
+pub use locker_exchange::Exchange;
 pub use pickers::Picker;
+pub use saving::{AfterPrompt, Prompt, SavedFile, Unsaved};
 pub use team_actions::DEMO_TEAM;
 pub use tools::{ChartPair, FillCheck};
 
@@ -40,6 +44,12 @@ pub struct Session {
     pub fill: FillCheck,
     pub chart: ChartPair,
     pub status: Status,
+    /// Files whose last save failed; written again on every save.
+    pub unsaved: Unsaved,
+    /// The question on screen, if any.
+    pub prompt: Prompt,
+    /// Where locker exports go and imports come from.
+    pub exchange: Exchange,
 }
 
 impl Session {
@@ -78,6 +88,7 @@ impl Session {
             Screen::Team
         };
         Session {
+            exchange: Exchange::for_data_dir(store.dir()),
             store,
             settings,
             fill: FillCheck::for_team(team.input()),
@@ -88,20 +99,25 @@ impl Session {
             entry: None,
             picker: Picker::None,
             status: Status::new(messages),
+            unsaved: Unsaved::default(),
+            prompt: Prompt::None,
         }
     }
 
     /// Read the files again if another program changed them since they were last read
     /// or written (on resume). The page stays where it was. Returns whether it reloaded.
+    /// Never while changes are unsaved: they would be lost.
     pub fn reload_if_changed(&mut self) -> bool {
-        if !self.store.changed_on_disk() {
+        if !self.all_saved() || !self.store.changed_on_disk() {
             return false;
         }
         let page = self.nav.current();
         let dir = self.store.dir().to_path_buf();
         let fresh = Session::open(Store::new(dir));
         let nav = self.nav.clone();
+        let exchange = std::mem::take(&mut self.exchange);
         *self = fresh;
+        self.exchange = exchange;
         if page != Screen::Cautions && self.settings.cautions_acknowledged {
             self.nav = nav;
         }
@@ -120,27 +136,6 @@ impl Session {
     /// The page on screen.
     pub fn page(&self) -> Screen {
         self.nav.current()
-    }
-
-    // ---- saving ------------------------------------------------------------------
-
-    /// Write everything (used on edits and on Android lifecycle events).
-    pub fn save_all(&mut self) {
-        self.save_team();
-        self.save_locker();
-        self.save_settings();
-    }
-    pub fn save_team(&mut self) {
-        let r = self.store.save_team(&self.team.to_state());
-        self.status.report(r);
-    }
-    pub fn save_locker(&mut self) {
-        let r = self.store.save_locker(&self.locker.file);
-        self.status.report(r);
-    }
-    pub fn save_settings(&mut self) {
-        let r = self.store.save_settings(&self.settings);
-        self.status.report(r);
     }
 
     /// Save the team after an accepted edit; report a refused one.
@@ -167,8 +162,13 @@ impl Session {
         self.nav.go(s);
     }
 
-    /// Back: closes an entry or picker first, then goes one page back.
+    /// Back: closes a question (the safe answer), an entry or a picker first, then goes
+    /// one page back. Leaving a changed locker edit asks first.
     pub fn back(&mut self) -> bool {
+        if self.prompt != Prompt::None {
+            self.prompt = Prompt::None;
+            return true;
+        }
         if self.entry.is_some() {
             self.cancel_entry();
             return true;
@@ -178,7 +178,7 @@ impl Session {
             return true;
         }
         if self.nav.current() == Screen::LockerEdit {
-            self.locker.drop_draft();
+            return self.leave_locker_edit();
         }
         self.nav.back()
     }
