@@ -61,6 +61,7 @@ impl Session {
         let LoadReport {
             mut messages,
             first_launch,
+            settings_repaired,
         } = loaded.report;
         let settings = loaded.settings;
         let team = match loaded.team {
@@ -87,7 +88,7 @@ impl Session {
         } else {
             Screen::Team
         };
-        Session {
+        let mut session = Session {
             exchange: Exchange::for_data_dir(store.dir()),
             store,
             settings,
@@ -101,7 +102,11 @@ impl Session {
             status: Status::new(messages),
             unsaved: Unsaved::default(),
             prompt: Prompt::None,
+        };
+        if settings_repaired {
+            session.save_settings();
         }
+        session
     }
 
     /// Read the files again if another program changed them since they were last read
