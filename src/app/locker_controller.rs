@@ -4,7 +4,9 @@ use crate::formats::team_file::CylindersFile;
 use crate::plan::CylinderSet;
 use crate::plan::catalogue::Preset;
 use crate::plan::error::InputError;
-use crate::storage::locker::{LockerEntry, LockerFile, MAX_SET_NOTE_CHARS, check_set_name};
+use crate::storage::locker::{
+    LockerEntry, LockerFile, MAX_LOCKER_SETS, MAX_SET_NOTE_CHARS, check_set_name,
+};
 
 pub use super::locker_draft::Draft;
 
@@ -90,6 +92,15 @@ impl LockerController {
             ));
         }
         let set = d.to_set()?;
+        let is_new = d.id.is_none_or(|id| self.entry(id).is_none());
+        if is_new && self.file.entries.len() >= MAX_LOCKER_SETS {
+            return Err(InputError::new(
+                "locker",
+                format!(
+                    "the locker is full: it holds at most {MAX_LOCKER_SETS} sets; delete one first"
+                ),
+            ));
+        }
         let cylinders = CylindersFile::from_set(&set);
         let id = match d
             .id
@@ -159,6 +170,8 @@ impl LockerController {
 #[cfg(test)]
 mod tests {
     use super::*;
+    use crate::storage::atomic::WithinLimits;
+    use crate::storage::locker::MAX_SET_NAME_CHARS;
 
     #[test]
     fn draft_save_edit_delete_undo() {
@@ -183,5 +196,34 @@ mod tests {
         assert!(l.undo_delete());
         assert_eq!(l.file.entries.len(), 1);
         assert!(l.mine().is_some());
+    }
+
+    #[test]
+    fn names_notes_and_the_number_of_sets_keep_the_locker_file_limits() {
+        let mut l = LockerController::default();
+        let fill = |l: &mut LockerController, name: String, note: String| {
+            l.start_new();
+            l.edit_draft(|d| {
+                d.name = name;
+                d.note = note;
+                d.first = Some(12.0);
+                d.second = Some(232.0);
+            });
+            l.save_draft()
+        };
+        let e = fill(&mut l, "n".repeat(MAX_SET_NAME_CHARS + 1), String::new()).unwrap_err();
+        assert_eq!(e.field, "name");
+        let e = fill(&mut l, "Ok".into(), "x".repeat(MAX_SET_NOTE_CHARS + 1)).unwrap_err();
+        assert_eq!(e.field, "note");
+        for i in 0..MAX_LOCKER_SETS {
+            fill(&mut l, format!("Set {i}"), String::new()).unwrap();
+        }
+        let e = fill(&mut l, "One more".into(), String::new()).unwrap_err();
+        assert!(e.message.contains("full"), "{e}");
+        assert!(l.draft().is_some(), "the draft stays open");
+        assert!(
+            l.file.within_limits().is_ok(),
+            "the saved file would load again"
+        );
     }
 }

@@ -22,6 +22,7 @@ mod entry;
 mod locker_actions;
 mod locker_exchange;
 mod pickers;
+mod prompts;
 mod saving;
 mod team_actions;
 mod tools;
@@ -29,7 +30,8 @@ mod tools;
 pub use entry::{Entry, EntryTarget};
 pub use locker_exchange::Exchange;
 pub use pickers::Picker;
-pub use saving::{AfterPrompt, Prompt, SavedFile, Unsaved};
+pub use prompts::{AfterPrompt, Answer, Prompt};
+pub use saving::{SavedFile, Unsaved};
 pub use team_actions::DEMO_TEAM;
 pub use tools::{ChartPair, FillCheck};
 

@@ -3,11 +3,10 @@
 //! Every edit is kept in memory. A save that fails (a read-only folder, a full disk)
 //! marks that file unsaved with the reason; every later save writes it again, and the
 //! banner above the pages stays until it is written. Closing the window while a file is
-//! unsaved asks first (`Prompt::Close`).
+//! unsaved asks first (`prompts.rs`).
 
 use std::collections::BTreeMap;
 
-use super::super::nav::Screen;
 use super::Session;
 
 /// The app's three files.
@@ -43,31 +42,33 @@ impl Unsaved {
     pub fn files(&self) -> Vec<SavedFile> {
         self.failed.keys().copied().collect()
     }
-    /// The reasons, one per file, joined.
+    /// The reasons, files with the same reason together: `last-team.json and
+    /// settings.json: Permission denied (os error 13)`.
     pub fn reasons(&self) -> String {
-        self.failed.values().cloned().collect::<Vec<_>>().join("; ")
+        let mut groups: Vec<(Vec<&str>, &str)> = Vec::new();
+        for why in self.failed.values() {
+            let (file, rest) = why
+                .strip_prefix("could not save ")
+                .and_then(|x| x.split_once(": "))
+                .unwrap_or(("", why.as_str()));
+            match groups.iter_mut().find(|(_, r)| *r == rest) {
+                Some((files, _)) => files.push(file),
+                None => groups.push((vec![file], rest)),
+            }
+        }
+        groups
+            .into_iter()
+            .map(|(files, rest)| {
+                let files: Vec<&str> = files.into_iter().filter(|f| !f.is_empty()).collect();
+                match files.as_slice() {
+                    [] => rest.to_string(),
+                    [one] => format!("{one}: {rest}"),
+                    [many @ .., last] => format!("{} and {last}: {rest}", many.join(", ")),
+                }
+            })
+            .collect::<Vec<_>>()
+            .join("; ")
     }
-}
-
-/// A question shown over the page until it is answered.
-#[derive(Clone, Copy, Debug, PartialEq, Eq, Default)]
-pub enum Prompt {
-    #[default]
-    None,
-    /// The window is closing with unsaved changes: close anyway, try again, stay.
-    Close,
-    /// Leaving the locker editor with changes: keep editing, discard.
-    Discard,
-}
-
-/// An answer to a prompt: its text, accessible label, and whether it is the one to stress.
-pub type Answer = (&'static str, &'static str, bool);
-
-/// What the window must do after an answer.
-#[derive(Clone, Copy, Debug, PartialEq, Eq)]
-pub enum AfterPrompt {
-    Stay,
-    CloseWindow,
 }
 
 impl Session {
@@ -125,90 +126,10 @@ impl Session {
             return String::new();
         }
         format!(
-            "Not saved to {}: {}. Your changes are kept while Turnsheet is open and saved with your next change.",
+            "Not saved to {}: {}. Your changes are kept while Turnsheet is open; your next change or Try again saves them.",
             self.store.dir().display(),
             self.unsaved.reasons()
         )
-    }
-
-    /// The window is asked to close: save, and say whether it may close now. With
-    /// changes that could not be saved, the close prompt opens instead.
-    pub fn close_requested(&mut self) -> bool {
-        self.save_all();
-        if self.all_saved() {
-            true
-        } else {
-            self.prompt = Prompt::Close;
-            false
-        }
-    }
-
-    /// Back from the locker editor: asks once when the draft was changed.
-    pub(super) fn leave_locker_edit(&mut self) -> bool {
-        if self.locker.draft_changed() {
-            self.prompt = Prompt::Discard;
-            return true;
-        }
-        self.locker.drop_draft();
-        self.nav.back()
-    }
-
-    /// The question on screen and its answers (text, accessible label, the one to
-    /// stress).
-    pub fn prompt_text(&self) -> Option<(String, Vec<Answer>)> {
-        match self.prompt {
-            Prompt::None => None,
-            Prompt::Close => Some((
-                format!(
-                    "Your last changes could not be saved to {}: {}. Closing now loses them.",
-                    self.store.dir().display(),
-                    self.unsaved.reasons()
-                ),
-                vec![
-                    ("Close anyway", "close anyway", false),
-                    ("Try again", "try again", true),
-                    ("Stay", "stay", false),
-                ],
-            )),
-            Prompt::Discard => {
-                let name = self
-                    .locker
-                    .draft()
-                    .map(|d| d.name.trim().to_string())
-                    .filter(|n| !n.is_empty())
-                    .unwrap_or_else(|| "the new set".to_string());
-                Some((
-                    format!("Discard changes to {name}?"),
-                    vec![
-                        ("Keep editing", "keep editing", true),
-                        ("Discard", "discard changes", false),
-                    ],
-                ))
-            }
-        }
-    }
-
-    /// The answer at `idx` of `prompt_text`'s list.
-    pub fn answer_prompt(&mut self, idx: usize) -> AfterPrompt {
-        let prompt = std::mem::take(&mut self.prompt);
-        match (prompt, idx) {
-            (Prompt::Close, 0) => AfterPrompt::CloseWindow,
-            (Prompt::Close, 1) => {
-                if self.close_requested() {
-                    AfterPrompt::CloseWindow
-                } else {
-                    AfterPrompt::Stay
-                }
-            }
-            (Prompt::Discard, 1) => {
-                self.locker.drop_draft();
-                if self.nav.current() == Screen::LockerEdit {
-                    self.nav.back();
-                }
-                AfterPrompt::Stay
-            }
-            _ => AfterPrompt::Stay,
-        }
     }
 }
 
@@ -217,11 +138,30 @@ mod tests {
     use super::*;
     use crate::storage::Store;
 
-    /// A data directory that cannot be written, even by root: its parent is a file.
-    fn unwritable(tmp: &tempfile::TempDir) -> std::path::PathBuf {
-        let blocker = tmp.path().join("blocker");
-        std::fs::write(&blocker, "a file, not a folder").unwrap();
-        blocker.join("data")
+    #[test]
+    fn files_with_the_same_reason_are_named_together() {
+        let mut u = Unsaved::default();
+        let denied = "Permission denied (os error 13)";
+        u.record(
+            SavedFile::Team,
+            Err(format!("could not save last-team.json: {denied}")),
+        );
+        u.record(
+            SavedFile::Settings,
+            Err(format!("could not save settings.json: {denied}")),
+        );
+        u.record(
+            SavedFile::Locker,
+            Err("locker.json is not saved: the unreadable file is kept in its place".into()),
+        );
+        assert_eq!(
+            u.reasons(),
+            format!(
+                "last-team.json and settings.json: {denied}; locker.json is not saved: the unreadable file is kept in its place"
+            )
+        );
+        u.record(SavedFile::Team, Ok(()));
+        assert_eq!(u.files(), [SavedFile::Locker, SavedFile::Settings]);
     }
 
     #[test]
@@ -260,59 +200,5 @@ mod tests {
         assert_eq!(again.settings.rule, s.settings.rule);
         assert_eq!(again.settings.water_temp_c, s.settings.water_temp_c);
         assert_eq!(again.locker.entries()[0].name, "Spare");
-    }
-
-    #[test]
-    fn closing_with_unsaved_changes_asks_first() {
-        let tmp = tempfile::tempdir().unwrap();
-        let dir = tmp.path().join("data");
-        let mut s = Session::open(Store::new(&dir));
-        assert!(s.close_requested(), "all saved: close at once");
-        let mut s = Session::open(Store::new(unwritable(&tmp)));
-        s.acknowledge_cautions();
-        assert!(!s.close_requested());
-        assert_eq!(s.prompt, Prompt::Close);
-        let (text, answers) = s.prompt_text().unwrap();
-        assert!(text.starts_with("Your last changes could not be saved to"));
-        assert!(text.contains("blocker"), "names the folder: {text}");
-        assert_eq!(answers.len(), 3);
-        assert_eq!(s.answer_prompt(2), AfterPrompt::Stay, "Stay");
-        assert_eq!(s.prompt, Prompt::None);
-        assert!(!s.close_requested());
-        assert_eq!(s.answer_prompt(1), AfterPrompt::Stay, "Try again: fails");
-        assert_eq!(s.prompt, Prompt::Close, "and asks again");
-        assert_eq!(s.answer_prompt(0), AfterPrompt::CloseWindow, "Close anyway");
-    }
-
-    #[test]
-    fn leaving_a_changed_locker_edit_asks_once() {
-        let tmp = tempfile::tempdir().unwrap();
-        let mut s = Session::open(Store::new(tmp.path()));
-        s.acknowledge_cautions();
-        s.go(Screen::Locker);
-        s.locker_copy_preset(0);
-        assert!(s.back(), "unchanged: leaves without asking");
-        assert_eq!(s.page(), Screen::Locker);
-        assert_eq!(s.prompt, Prompt::None);
-
-        s.locker_copy_preset(0);
-        s.locker.edit_draft(|d| d.name = "Cave twins".into());
-        assert!(s.back());
-        assert_eq!(s.prompt, Prompt::Discard);
-        assert_eq!(s.page(), Screen::LockerEdit);
-        assert_eq!(s.prompt_text().unwrap().0, "Discard changes to Cave twins?");
-        // Back again answers "keep editing": one question, not a second one.
-        assert!(s.back());
-        assert_eq!(s.prompt, Prompt::None);
-        assert_eq!(s.page(), Screen::LockerEdit);
-        assert!(s.locker.draft().is_some());
-        assert!(s.back());
-        assert_eq!(s.answer_prompt(0), AfterPrompt::Stay, "Keep editing");
-        assert_eq!(s.locker.draft().unwrap().name, "Cave twins");
-        assert!(s.back());
-        assert_eq!(s.answer_prompt(1), AfterPrompt::Stay, "Discard");
-        assert!(s.locker.draft().is_none());
-        assert_eq!(s.page(), Screen::Locker);
-        assert!(s.locker.entries().is_empty(), "nothing was saved");
     }
 }

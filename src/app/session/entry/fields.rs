@@ -8,7 +8,6 @@ use crate::app::view_models as vm;
 use crate::plan::error::{InputError, check_range, fmt_num};
 use crate::plan::team::validate_start;
 use crate::plan::{Pressure, PressureUnit, Temperature, UnitSystem, Volume};
-use crate::storage::locker::{MAX_SET_NAME_CHARS, MAX_SET_NOTE_CHARS};
 
 use super::super::Session;
 use super::{Field, Typed, apply, check, no_check};
@@ -194,7 +193,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             on_done: None,
         },
         EntryTarget::LockerName => Field {
-            buffer: KeypadBuffer::letters(&draft?.name, MAX_SET_NAME_CHARS),
+            buffer: KeypadBuffer::letters(&draft?.name, crate::storage::locker::MAX_SET_NAME_CHARS),
             title: "Name of the cylinder set".to_string(),
             unit: String::new(),
             live: false,
@@ -214,7 +213,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             on_done: None,
         },
         EntryTarget::LockerNote => Field {
-            buffer: KeypadBuffer::letters(&draft?.note, MAX_SET_NOTE_CHARS),
+            buffer: KeypadBuffer::letters(&draft?.note, crate::storage::locker::MAX_SET_NOTE_CHARS),
             title: "Note (serial, test date, valves…)".to_string(),
             unit: String::new(),
             live: false,
