@@ -9,6 +9,7 @@ use std::process::Command;
 use turnsheet::app::session::Session;
 use turnsheet::storage::Store;
 use turnsheet::storage::atomic::kept_aside;
+use turnsheet::storage::settings::Settings;
 use turnsheet::storage::store::{LOCKER_FILE, SETTINGS_FILE, TEAM_FILE};
 
 fn corpus(kind: &str) -> Vec<(String, Vec<u8>)> {
@@ -154,20 +155,34 @@ fn locker_files_are_kept_aside_byte_identical_and_the_locker_starts_empty() {
     }
 }
 
+/// Settings files with one field that is not usable (a wrong type, an unknown name, a value
+/// out of range): that field, named in the message. Every other field of these files is kept.
+fn settings_field_problem(name: &str) -> Option<&'static str> {
+    match name {
+        "unknown-units.json" => Some("units: \"furlongs\""),
+        "unknown-key.json" => Some("colour: not a setting"),
+        "wrong-type.json" => Some("water_temp_c: \"warm\""),
+        "hot-water.json" => {
+            Some("water_temp_c: 300.0 is not usable (allowed -2 to 40 °C); back to 20 °C")
+        }
+        "zero-step.json" => {
+            Some("gauge_step_bar: 0 is not usable (allowed 1 to 50 bar); back to 10 bar")
+        }
+        "unknown-rule.json" => Some("rule: \"tenths\""),
+        _ => None,
+    }
+}
+
 #[test]
 fn settings_files_are_kept_aside_byte_identical_and_the_app_opens() {
     let mut files = corpus("settings");
-    assert!(files.len() >= 10);
+    assert!(files.len() >= 13);
     files.push(("oversized.json".to_string(), oversized()));
     for (name, bytes) in &files {
         let dir = tempfile::tempdir().unwrap();
         std::fs::write(dir.path().join(SETTINGS_FILE), bytes).unwrap();
         let session = Session::open(Store::new(dir.path()));
         let said = session.status.text();
-        assert!(
-            said.contains("settings file could not be read"),
-            "{name}: {said}"
-        );
         let kept = kept_aside(dir.path(), SETTINGS_FILE);
         assert_eq!(kept.len(), 1, "{name}");
         assert!(said.contains(&*kept[0].to_string_lossy()), "{name}: {said}");
@@ -176,7 +191,38 @@ fn settings_files_are_kept_aside_byte_identical_and_the_app_opens() {
             bytes,
             "{name}: byte-identical"
         );
-        assert!(!dir.path().join(SETTINGS_FILE).exists() || name == "none");
+        assert_eq!(said.lines().count(), 1, "{name}: {said}");
+        match settings_field_problem(name) {
+            None => {
+                assert!(
+                    said.contains("settings file could not be read"),
+                    "{name}: {said}"
+                );
+                assert!(!dir.path().join(SETTINGS_FILE).exists(), "{name}");
+            }
+            Some(field) => {
+                assert!(said.contains(field), "{name}: wanted '{field}' in: {said}");
+                assert!(said.contains("The other settings were kept"), "{name}");
+                // The good fields are kept, and saved again at once.
+                let found: serde_json::Value = serde_json::from_slice(bytes).unwrap();
+                let saved: serde_json::Value =
+                    serde_json::from_slice(&std::fs::read(dir.path().join(SETTINGS_FILE)).unwrap())
+                        .unwrap();
+                let defaults = serde_json::to_value(Settings::default()).unwrap();
+                for (key, value) in saved.as_object().unwrap() {
+                    let want = if field.starts_with(&format!("{key}:")) {
+                        &defaults[key]
+                    } else {
+                        &found[key]
+                    };
+                    assert_eq!(
+                        value.as_f64().map_or(value.clone(), |x| x.into()),
+                        want.as_f64().map_or(want.clone(), |x| x.into()),
+                        "{name}: {key}"
+                    );
+                }
+            }
+        }
     }
 }
 

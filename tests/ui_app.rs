@@ -896,3 +896,152 @@ fn the_team_card_is_written_from_starts_read_today_only() {
         assert!(svg.contains(digits), "{name} {turn}");
     }
 }
+
+fn count(app: &App, label: &str) -> usize {
+    ElementHandle::find_by_accessible_label(&app.window, label).count()
+}
+
+/// Make saving fail, even for root: the data directory is replaced by a file.
+fn block_saving(dir: &std::path::Path) {
+    std::fs::remove_dir_all(dir).unwrap();
+    std::fs::write(dir, "a file where the data folder was").unwrap();
+}
+
+fn unblock_saving(dir: &std::path::Path) {
+    std::fs::remove_file(dir).unwrap();
+    std::fs::create_dir(dir).unwrap();
+}
+
+#[test]
+fn a_failed_save_stays_on_screen_until_a_save_succeeds() {
+    init();
+    let tmp = tempfile::tempdir().unwrap();
+    let dir = tmp.path().join("data");
+    let app = open_unread(&dir);
+    assert_eq!(count(&app, "not saved"), 0);
+    block_saving(&dir);
+    read_every_start(&app);
+    let said = value(&app, "not saved");
+    assert!(said.contains("last-team.json"), "{said}");
+    assert!(
+        said.contains(&*dir.to_string_lossy()),
+        "names the folder: {said}"
+    );
+    // It stays: on another page, and after a retry that fails again.
+    press(&app, "Locker");
+    assert_eq!(count(&app, "not saved"), 1);
+    press(&app, "try saving again");
+    assert_eq!(count(&app, "not saved"), 1);
+    back_key(&app);
+    // The folder is back; the next edit saves everything and the banner goes.
+    unblock_saving(&dir);
+    press(&app, "start pressure of Ines");
+    press(&app, "done");
+    assert_eq!(count(&app, "not saved"), 0);
+    drop(app);
+    let again = open_unread(&dir);
+    assert_eq!(value(&again, "start pressure of Bram"), "205 bar");
+}
+
+#[test]
+fn closing_the_window_with_unsaved_changes_asks_first() {
+    init();
+    let tmp = tempfile::tempdir().unwrap();
+    let dir = tmp.path().join("data");
+    let app = open_unread(&dir);
+    app.window.show().unwrap();
+    block_saving(&dir);
+    read_every_start(&app);
+    app.window
+        .window()
+        .dispatch_event(WindowEvent::CloseRequested);
+    assert!(app.window.window().is_visible(), "kept open");
+    let q = value(&app, "question");
+    assert!(
+        q.starts_with(&format!(
+            "Your last changes could not be saved to {}: ",
+            dir.display()
+        )),
+        "{q}"
+    );
+    for label in ["close anyway", "try again", "stay"] {
+        let b = find(&app, label);
+        assert!(b.size().height >= 48.0, "{label}: a big button");
+    }
+    press(&app, "stay");
+    assert_eq!(count(&app, "question"), 0);
+    app.window
+        .window()
+        .dispatch_event(WindowEvent::CloseRequested);
+    press(&app, "try again");
+    assert_eq!(count(&app, "question"), 1, "still failing: asks again");
+    press(&app, "close anyway");
+    assert!(!app.window.window().is_visible());
+}
+
+#[test]
+fn leaving_a_changed_locker_edit_asks_before_discarding() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_unread(dir.path());
+    press(&app, "Locker");
+    press(&app, "+ New");
+    back_key(&app);
+    assert_eq!(page(&app), Page::Locker, "nothing typed: no question");
+    press(&app, "+ New");
+    press(&app, "edit NAME");
+    type_keys(&app, "REEF");
+    press(&app, "done");
+    // The page's own back button asks.
+    press(&app, "back");
+    assert_eq!(value(&app, "question"), "Discard changes to Reef?");
+    press(&app, "keep editing");
+    assert_eq!(page(&app), Page::LockerEdit);
+    assert_eq!(count(&app, "question"), 0);
+    // So does the app's Back, once.
+    back_key(&app);
+    assert_eq!(count(&app, "question"), 1);
+    press(&app, "discard changes");
+    assert_eq!(page(&app), Page::Locker);
+    assert_eq!(count(&app, "locker entry"), 0);
+}
+
+#[test]
+fn two_divers_swap_locker_sets_from_the_locker_page() {
+    init();
+    let tmp = tempfile::tempdir().unwrap();
+    let shared = tmp.path().join("shared");
+    std::fs::create_dir(&shared).unwrap();
+    {
+        let app = open_unread(&tmp.path().join("ana"));
+        app.session.borrow_mut().exchange.export_dir = shared.clone();
+        press(&app, "Locker");
+        press(&app, "copy Aluminium 40");
+        press(&app, "Save");
+        press(&app, "export locker");
+        let said = value(&app, "message");
+        assert!(said.starts_with("Exported 1 set to"), "{said}");
+        assert!(shared.join("turnsheet-locker.json").exists());
+    }
+    let app = open_unread(&tmp.path().join("ben"));
+    press(&app, "Locker");
+    let import_dir = app.session.borrow().exchange.import_dir.clone();
+    assert!(
+        value(&app, "where locker files go").contains(&*import_dir.to_string_lossy()),
+        "the page says where to put the file"
+    );
+    press(&app, "import sets");
+    assert!(value(&app, "message").starts_with("No locker file to import"));
+    std::fs::copy(
+        shared.join("turnsheet-locker.json"),
+        import_dir.join("from-ana.json"),
+    )
+    .unwrap();
+    press(&app, "import sets");
+    let said = value(&app, "message");
+    assert!(said.contains("added Aluminium 40"), "{said}");
+    assert!(said.contains("the locker has 1 set"), "{said}");
+    assert_eq!(value(&app, "locker entry"), "Aluminium 40");
+    press(&app, "dismiss locker message");
+    assert_eq!(count(&app, "message"), 0);
+}

@@ -4,7 +4,9 @@ use crate::formats::team_file::CylindersFile;
 use crate::plan::CylinderSet;
 use crate::plan::catalogue::Preset;
 use crate::plan::error::InputError;
-use crate::storage::locker::{LockerEntry, LockerFile};
+use crate::storage::locker::{
+    LockerEntry, LockerFile, MAX_LOCKER_SETS, MAX_SET_NOTE_CHARS, check_set_name,
+};
 
 pub use super::locker_draft::Draft;
 
@@ -12,6 +14,8 @@ pub use super::locker_draft::Draft;
 pub struct LockerController {
     pub file: LockerFile,
     draft: Option<Draft>,
+    /// The draft as it was opened, to tell whether it was changed.
+    opened: Option<Draft>,
     /// The last deleted entry and where it was.
     undo: Option<(usize, LockerEntry)>,
 }
@@ -21,6 +25,7 @@ impl LockerController {
         LockerController {
             file,
             draft: None,
+            opened: None,
             undo: None,
         }
     }
@@ -45,6 +50,15 @@ impl LockerController {
     /// Close the draft without saving.
     pub fn drop_draft(&mut self) {
         self.draft = None;
+        self.opened = None;
+    }
+    /// Whether the open draft differs from what it was when opened.
+    pub fn draft_changed(&self) -> bool {
+        self.draft.is_some() && self.draft != self.opened
+    }
+    fn open_draft(&mut self, d: Option<Draft>) {
+        self.opened = d.clone();
+        self.draft = d;
     }
 
     /// The name of the entry that Undo would bring back.
@@ -53,13 +67,13 @@ impl LockerController {
     }
 
     pub fn start_new(&mut self) {
-        self.draft = Some(Draft::blank());
+        self.open_draft(Some(Draft::blank()));
     }
     pub fn start_edit(&mut self, id: u64) {
-        self.draft = self.entry(id).map(Draft::from_entry);
+        self.open_draft(self.entry(id).map(Draft::from_entry));
     }
     pub fn start_from_preset(&mut self, p: &Preset) {
-        self.draft = Some(Draft::from_preset(p));
+        self.open_draft(Some(Draft::from_preset(p)));
     }
 
     /// Save the draft into the locker. The draft stays open on error.
@@ -67,14 +81,26 @@ impl LockerController {
         let Some(d) = self.draft.clone() else {
             return Err(InputError::new("locker", "nothing is being edited"));
         };
+        check_set_name("name", &d.name)?;
         let name = d.name.trim().to_string();
-        if name.is_empty() || name.chars().count() > 40 {
+        let note = d.note.trim().to_string();
+        let n = note.chars().count();
+        if n > MAX_SET_NOTE_CHARS {
             return Err(InputError::new(
-                "name",
-                "a name of 1 to 40 characters is needed",
+                "note",
+                format!("{n} characters is too long; at most {MAX_SET_NOTE_CHARS}"),
             ));
         }
         let set = d.to_set()?;
+        let is_new = d.id.is_none_or(|id| self.entry(id).is_none());
+        if is_new && self.file.entries.len() >= MAX_LOCKER_SETS {
+            return Err(InputError::new(
+                "locker",
+                format!(
+                    "the locker is full: it holds at most {MAX_LOCKER_SETS} sets; delete one first"
+                ),
+            ));
+        }
         let cylinders = CylindersFile::from_set(&set);
         let id = match d
             .id
@@ -84,7 +110,7 @@ impl LockerController {
                 e.name = name;
                 e.cylinders = cylinders;
                 e.material = d.material;
-                e.note = d.note.trim().to_string();
+                e.note = note;
                 e.id
             }
             None => {
@@ -95,13 +121,13 @@ impl LockerController {
                     name,
                     cylinders,
                     material: d.material,
-                    note: d.note.trim().to_string(),
+                    note,
                     mine: first,
                 });
                 id
             }
         };
-        self.draft = None;
+        self.drop_draft();
         Ok(id)
     }
 
@@ -144,6 +170,8 @@ impl LockerController {
 #[cfg(test)]
 mod tests {
     use super::*;
+    use crate::storage::atomic::WithinLimits;
+    use crate::storage::locker::MAX_SET_NAME_CHARS;
 
     #[test]
     fn draft_save_edit_delete_undo() {
@@ -168,5 +196,34 @@ mod tests {
         assert!(l.undo_delete());
         assert_eq!(l.file.entries.len(), 1);
         assert!(l.mine().is_some());
+    }
+
+    #[test]
+    fn names_notes_and_the_number_of_sets_keep_the_locker_file_limits() {
+        let mut l = LockerController::default();
+        let fill = |l: &mut LockerController, name: String, note: String| {
+            l.start_new();
+            l.edit_draft(|d| {
+                d.name = name;
+                d.note = note;
+                d.first = Some(12.0);
+                d.second = Some(232.0);
+            });
+            l.save_draft()
+        };
+        let e = fill(&mut l, "n".repeat(MAX_SET_NAME_CHARS + 1), String::new()).unwrap_err();
+        assert_eq!(e.field, "name");
+        let e = fill(&mut l, "Ok".into(), "x".repeat(MAX_SET_NOTE_CHARS + 1)).unwrap_err();
+        assert_eq!(e.field, "note");
+        for i in 0..MAX_LOCKER_SETS {
+            fill(&mut l, format!("Set {i}"), String::new()).unwrap();
+        }
+        let e = fill(&mut l, "One more".into(), String::new()).unwrap_err();
+        assert!(e.message.contains("full"), "{e}");
+        assert!(l.draft().is_some(), "the draft stays open");
+        assert!(
+            l.file.within_limits().is_ok(),
+            "the saved file would load again"
+        );
     }
 }

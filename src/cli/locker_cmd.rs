@@ -10,10 +10,9 @@ use crate::formats::team_file::CylindersFile;
 use crate::plan::catalogue::Material;
 use crate::plan::error::InputError;
 use crate::storage::Store;
-use crate::storage::atomic::{WithinLimits, write_json};
-use crate::storage::locker::{
-    LockerEntry, LockerFile, MAX_LOCKER_SETS, check_set_name, read_locker_file,
-};
+use crate::storage::atomic::WithinLimits;
+use crate::storage::exchange::{export_locker, import_locker, sets_word};
+use crate::storage::locker::{LockerEntry, LockerFile, MAX_LOCKER_SETS, check_set_name};
 use crate::storage::store::LOCKER_FILE;
 
 use super::CliError;
@@ -217,14 +216,6 @@ fn list(locker: &LockerFile, path: &Path, json: bool) -> String {
     s
 }
 
-fn sets_word(n: usize) -> String {
-    if n == 1 {
-        "1 set".to_string()
-    } else {
-        format!("{n} sets")
-    }
-}
-
 fn save(store: &mut Store, locker: &LockerFile) -> Result<(), CliError> {
     store.save_locker(locker).map_err(CliError::Write)
 }
@@ -365,8 +356,7 @@ fn export(locker: &LockerFile, file: &Path, force: bool) -> Result<String, CliEr
         )
         .into());
     }
-    write_json(file, locker)
-        .map_err(|e| CliError::Write(format!("could not write {}: {e}", file.display())))?;
+    export_locker(locker, file).map_err(CliError::Write)?;
     Ok(format!(
         "Exported {} to {}.\n",
         sets_word(locker.entries.len()),
@@ -380,8 +370,7 @@ fn import(
     path: &Path,
     file: &Path,
 ) -> Result<String, CliError> {
-    let incoming = read_locker_file(file)?;
-    let (merged, report) = locker.merge(&incoming)?;
+    let (merged, report) = import_locker(&locker, file)?;
     debug_assert!(merged.within_limits().is_ok());
     if report.changed() {
         save(store, &merged)?;
@@ -403,13 +392,8 @@ fn import(
     for (n, why) in &report.skipped {
         s.push_str(&format!("  skipped  '{n}': {why}\n"));
     }
-    s.push_str(&format!(
-        "{} added ({} of them renamed), {} skipped; the locker has {}.\n",
-        report.added.len() + report.renamed.len(),
-        report.renamed.len(),
-        report.skipped.len(),
-        sets_word(merged.entries.len())
-    ));
+    s.push_str(&report.summary(merged.entries.len()));
+    s.push('\n');
     if !report.changed() {
         s.push_str("Nothing new: the locker file was not changed.\n");
     }

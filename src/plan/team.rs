@@ -99,8 +99,8 @@ impl TeamInput {
         }
         validate_step("gauge_step", u.pressure_unit(), self.gauge_step)?;
         let (tlo, thi) = (
-            u.temperature_value(Temperature::from_celsius(-2.0)),
-            u.temperature_value(Temperature::from_celsius(40.0)),
+            u.temperature_value(Temperature::from_celsius(WATER_TEMP_RANGE_C.0)),
+            u.temperature_value(Temperature::from_celsius(WATER_TEMP_RANGE_C.1)),
         );
         check_range(
             "water_temp",
@@ -232,6 +232,9 @@ fn fill_warning(
         });
     }
 }
+
+/// Water temperatures a team accepts, °C (the settings' default temperature too).
+pub const WATER_TEMP_RANGE_C: (f64, f64) = (-2.0, 40.0);
 
 /// A graduation within its unit's range (1 to 50 bar, 10 to 500 psi).
 pub fn validate_step(field: &str, unit: PressureUnit, step: f64) -> Result<(), InputError> {

@@ -1,6 +1,6 @@
 //! Where the app keeps its files.
 
-use std::path::PathBuf;
+use std::path::{Path, PathBuf};
 
 /// Environment variable that overrides the data directory (tests, CLI, power users).
 pub const DATA_DIR_ENV: &str = "TURNSHEET_DATA_DIR";
@@ -27,6 +27,36 @@ pub fn resolve(override_dir: Option<PathBuf>, platform: Option<PathBuf>) -> Path
         .unwrap_or_else(|| PathBuf::from("turnsheet-data"))
 }
 
+/// Where the Locker page's "Import sets" looks: `<data dir>/import`.
+pub fn import_dir(data_dir: &Path) -> PathBuf {
+    data_dir.join("import")
+}
+
+/// Where the Locker page's "Export locker" writes. Desktop: the user's Downloads folder
+/// if it exists, else the home folder, else the data directory. Android: the data
+/// directory (app storage; sharing it is for later).
+pub fn export_dir(data_dir: &Path) -> PathBuf {
+    if cfg!(target_os = "android") {
+        return data_dir.to_path_buf();
+    }
+    let user = directories::UserDirs::new();
+    pick_export_dir(
+        user.as_ref()
+            .and_then(|u| u.download_dir().map(Path::to_path_buf)),
+        user.as_ref().map(|u| u.home_dir().to_path_buf()),
+        data_dir,
+    )
+}
+
+/// The first of Downloads and home that is an existing folder, else the data directory.
+pub fn pick_export_dir(downloads: Option<PathBuf>, home: Option<PathBuf>, data: &Path) -> PathBuf {
+    [downloads, home]
+        .into_iter()
+        .flatten()
+        .find(|p| p.is_dir())
+        .unwrap_or_else(|| data.to_path_buf())
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
@@ -38,5 +68,25 @@ mod tests {
         assert_eq!(resolve(Some(a.clone()), Some(b.clone())), a);
         assert_eq!(resolve(Some(PathBuf::new()), Some(b.clone())), b);
         assert_eq!(resolve(None, None), PathBuf::from("turnsheet-data"));
+    }
+
+    #[test]
+    fn exports_go_to_an_existing_folder() {
+        let t = tempfile::tempdir().unwrap();
+        let data = t.path().join("data");
+        let home = t.path().to_path_buf();
+        let downloads = t.path().join("Downloads");
+        assert_eq!(
+            pick_export_dir(Some(downloads.clone()), Some(home.clone()), &data),
+            home,
+            "no Downloads folder: home"
+        );
+        std::fs::create_dir(&downloads).unwrap();
+        assert_eq!(
+            pick_export_dir(Some(downloads.clone()), Some(home), &data),
+            downloads
+        );
+        assert_eq!(pick_export_dir(None, None, &data), data);
+        assert_eq!(import_dir(&data), data.join("import"));
     }
 }

@@ -4,6 +4,7 @@
 
 pub mod atomic;
 pub mod data_dir;
+pub mod exchange;
 pub mod locker;
 pub mod settings;
 pub mod store;

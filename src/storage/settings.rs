@@ -1,10 +1,14 @@
 //! App settings.
 
+use serde::de::DeserializeOwned;
 use serde::{Deserialize, Serialize};
+use serde_json::{Map, Value};
 
-use super::atomic::WithinLimits;
+use super::atomic::{WithinLimits, one_line};
 
-use crate::plan::{Rule, UnitSystem};
+use crate::plan::error::fmt_num;
+use crate::plan::team::WATER_TEMP_RANGE_C;
+use crate::plan::{PressureUnit, Rule, UnitSystem};
 
 pub const SETTINGS_SCHEMA: u32 = 1;
 
@@ -49,3 +53,172 @@ impl Settings {
 
 /// The size limit on the file is enough; ranges are checked where the values are used.
 impl WithinLimits for Settings {}
+
+/// A settings file as found: any JSON object. `Settings::from_found` checks each field
+/// on its own, so that one bad value does not cost the others.
+#[derive(Debug, Deserialize)]
+#[serde(transparent)]
+pub struct FoundSettings(pub Map<String, Value>);
+
+impl WithinLimits for FoundSettings {}
+
+/// One field: its value if it has the right type and passes `check`, else the default
+/// and a message naming the field. A missing field takes the default quietly (a file
+/// written before the field existed).
+fn field<T: DeserializeOwned>(
+    found: &mut Map<String, Value>,
+    key: &str,
+    default: T,
+    shown_default: &str,
+    check: impl Fn(&T) -> Result<(), String>,
+    notes: &mut Vec<String>,
+) -> T {
+    let Some(v) = found.remove(key) else {
+        return default;
+    };
+    let shown = one_line(&v.to_string(), 40);
+    let why = match serde_json::from_value::<T>(v) {
+        Ok(x) => match check(&x) {
+            Ok(()) => return x,
+            Err(why) => why,
+        },
+        Err(e) => one_line(&e.to_string(), 120),
+    };
+    notes.push(format!(
+        "{key}: {shown} is not usable ({why}); back to {shown_default}"
+    ));
+    default
+}
+
+/// Any value of the right type.
+fn any<T>(_: &T) -> Result<(), String> {
+    Ok(())
+}
+
+fn within(lo: f64, hi: f64, unit: &'static str) -> impl Fn(&f64) -> Result<(), String> {
+    move |x: &f64| {
+        if x.is_finite() && (lo..=hi).contains(x) {
+            Ok(())
+        } else {
+            Err(format!("allowed {} to {} {unit}", fmt_num(lo), fmt_num(hi)))
+        }
+    }
+}
+
+impl Settings {
+    /// Settings from a file's fields. A field of the wrong type, an unknown name or a
+    /// value out of range goes back to its default; every other field is kept. Returns
+    /// one message per field reset (and per unknown field dropped).
+    pub fn from_found(found: FoundSettings) -> (Settings, Vec<String>) {
+        let mut m = found.0;
+        let d = Settings::default();
+        let mut notes = Vec::new();
+        m.remove("schema");
+        let units = field(&mut m, "units", d.units, "metric", any, &mut notes);
+        let (blo, bhi) = PressureUnit::Bar.step_range();
+        let (plo, phi) = PressureUnit::Psi.step_range();
+        let gauge_step_bar = field(
+            &mut m,
+            "gauge_step_bar",
+            d.gauge_step_bar,
+            "10 bar",
+            within(blo, bhi, "bar"),
+            &mut notes,
+        );
+        let gauge_step_psi = field(
+            &mut m,
+            "gauge_step_psi",
+            d.gauge_step_psi,
+            "100 psi",
+            within(plo, phi, "psi"),
+            &mut notes,
+        );
+        let rule = field(&mut m, "rule", d.rule, "thirds", any, &mut notes);
+        let (tlo, thi) = WATER_TEMP_RANGE_C;
+        let water_temp_c = field(
+            &mut m,
+            "water_temp_c",
+            d.water_temp_c,
+            "20 °C",
+            within(tlo, thi, "°C"),
+            &mut notes,
+        );
+        let cautions_acknowledged = field(
+            &mut m,
+            "cautions_acknowledged",
+            false,
+            "not yet read",
+            any,
+            &mut notes,
+        );
+        for key in m.keys() {
+            notes.push(format!("{}: not a setting; left out", one_line(key, 40)));
+        }
+        let settings = Settings {
+            schema: SETTINGS_SCHEMA,
+            units,
+            gauge_step_bar,
+            gauge_step_psi,
+            rule,
+            water_temp_c,
+            cautions_acknowledged,
+        };
+        (settings, notes)
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    fn found(v: serde_json::Value) -> FoundSettings {
+        FoundSettings(v.as_object().unwrap().clone())
+    }
+
+    #[test]
+    fn a_bad_field_goes_back_to_its_default_and_the_rest_stay() {
+        let good = serde_json::json!({"schema": 1, "units": "imperial", "gauge_step_bar": 5.0,
+            "gauge_step_psi": 50.0, "rule": "quarters", "water_temp_c": 12.0,
+            "cautions_acknowledged": true});
+        let (s, notes) = Settings::from_found(found(good.clone()));
+        assert!(notes.is_empty(), "{notes:?}");
+        assert_eq!(
+            (s.units, s.rule, s.gauge_step_psi),
+            (UnitSystem::Imperial, Rule::Quarters, 50.0)
+        );
+
+        let mut bad = good.clone();
+        bad["water_temp_c"] = serde_json::json!(300.0);
+        bad["gauge_step_bar"] = serde_json::json!(0);
+        bad["rule"] = serde_json::json!("tenths");
+        let (s, notes) = Settings::from_found(found(bad));
+        assert_eq!(notes.len(), 3, "{notes:?}");
+        assert!(
+            notes.iter().any(|n| n.starts_with(
+                "water_temp_c: 300.0 is not usable (allowed -2 to 40 °C); back to 20 °C"
+            )),
+            "{notes:?}"
+        );
+        assert!(
+            notes.iter().any(|n| n.starts_with("gauge_step_bar: 0")),
+            "{notes:?}"
+        );
+        assert!(
+            notes
+                .iter()
+                .any(|n| n.starts_with("rule: \"tenths\"") && n.contains("unknown variant")),
+            "{notes:?}"
+        );
+        assert_eq!(s.water_temp_c, 20.0);
+        assert_eq!(s.gauge_step_bar, 10.0);
+        assert_eq!(s.rule, Rule::Thirds);
+        assert_eq!(s.units, UnitSystem::Imperial, "the good fields stay");
+        assert_eq!(s.gauge_step_psi, 50.0);
+        assert!(s.cautions_acknowledged);
+
+        let (s, notes) =
+            Settings::from_found(found(serde_json::json!({"schema": 1, "colour": "red"})));
+        assert_eq!(s, Settings::default());
+        assert_eq!(notes, ["colour: not a setting; left out"]);
+    }
+}

@@ -6,7 +6,7 @@ use std::time::SystemTime;
 
 use super::atomic::{ReadOutcome, WithinLimits, read_json, set_aside, write_json};
 use super::locker::{LOCKER_SCHEMA, LockerFile};
-use super::settings::{SETTINGS_SCHEMA, Settings};
+use super::settings::{FoundSettings, SETTINGS_SCHEMA, Settings};
 use super::team_state::{TEAM_SCHEMA, TeamState};
 
 pub const LOCKER_FILE: &str = "locker.json";
@@ -20,6 +20,9 @@ pub struct LoadReport {
     pub messages: Vec<String>,
     /// No settings file was found: this is a first launch.
     pub first_launch: bool,
+    /// Some settings were reset to their defaults (the file as found was kept aside):
+    /// the settings should be saved again.
+    pub settings_repaired: bool,
 }
 
 /// Reads and writes the app's files. A file that could not be moved aside is never written.
@@ -61,7 +64,8 @@ impl Store {
         let settings_path = self.dir.join(SETTINGS_FILE);
         report.first_launch = !settings_path.exists();
         let settings = self
-            .take(SETTINGS_FILE, SETTINGS_SCHEMA, "settings", &mut report)
+            .take::<FoundSettings>(SETTINGS_FILE, SETTINGS_SCHEMA, "settings", &mut report)
+            .map(|found| self.repair_settings(found, &mut report))
             .unwrap_or_default();
         let team = self.take(TEAM_FILE, TEAM_SCHEMA, "last team", &mut report);
         for name in FILES {
@@ -117,6 +121,31 @@ impl Store {
                 None
             }
         }
+    }
+
+    /// Settings from the file's fields; a field that is not usable goes back to its
+    /// default, and the file as it was is kept aside so nothing is lost.
+    fn repair_settings(&mut self, found: FoundSettings, report: &mut LoadReport) -> Settings {
+        let (settings, notes) = Settings::from_found(found);
+        if notes.is_empty() {
+            return settings;
+        }
+        let path = self.dir.join(SETTINGS_FILE);
+        let kept = match set_aside::<()>(&path, String::new()) {
+            ReadOutcome::SetAside { kept_as, .. } if kept_as != path => {
+                report.settings_repaired = true;
+                format!("the file as it was is kept as {}", kept_as.display())
+            }
+            _ => {
+                self.blocked.insert(SETTINGS_FILE);
+                "the file was left untouched and will not be overwritten".to_string()
+            }
+        };
+        report.messages.push(format!(
+            "Some settings could not be used and went back to their defaults ({}). The other settings were kept; {kept}.",
+            notes.join("; ")
+        ));
+        settings
     }
 
     fn modified(&self, name: &str) -> Option<SystemTime> {

@@ -76,3 +76,9 @@ w(s + "unknown-key.json", json.dumps(dict(settings, colour="red")))
 w(s + "wrong-type.json", json.dumps(dict(settings, water_temp_c="warm")))
 w(s + "deep-nesting.json", b'{"schema": 1, "units": ' + nest(5000) + b"}")
 w(s + "top-level-array.json", b"[]")
+# One bad field among good ones that are not the defaults: the app resets that field
+# and keeps the others.
+kept = dict(settings, units="imperial", gauge_step_psi=50.0, rule="quarters", water_temp_c=12.0)
+w(s + "hot-water.json", json.dumps(dict(kept, water_temp_c=300.0)))
+w(s + "zero-step.json", json.dumps(dict(kept, gauge_step_bar=0)))
+w(s + "unknown-rule.json", json.dumps(dict(kept, rule="tenths")))

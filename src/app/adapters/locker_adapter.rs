@@ -21,6 +21,12 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
     a.on_undo(move || act(&w, &st, |x| x.locker_undo()));
     let (w, st) = handles(ui, s);
     a.on_copy_preset(move |i| act(&w, &st, |x| x.locker_copy_preset(i as usize)));
+    let (w, st) = handles(ui, s);
+    a.on_export_locker(move || act(&w, &st, |x| x.locker_export()));
+    let (w, st) = handles(ui, s);
+    a.on_import_sets(move || act(&w, &st, |x| x.locker_import()));
+    let (w, st) = handles(ui, s);
+    a.on_dismiss_exchange(move || act(&w, &st, |x| x.dismiss_exchange_message()));
 
     let e = ui.global::<LockerEditAdapter>();
     let (w, st) = handles(ui, s);
@@ -80,6 +86,8 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
             .collect(),
     ));
     a.set_undo_text(vm::undo_text(s).into());
+    a.set_exchange_hint(s.exchange.hint().into());
+    a.set_exchange_text(s.exchange.message.clone().into());
 
     let e = ui.global::<LockerEditAdapter>();
     if let Some(d) = vm::locker_edit(s) {

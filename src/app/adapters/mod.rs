@@ -7,6 +7,7 @@ mod keypad_adapter;
 mod locker_adapter;
 mod nav_adapter;
 mod picker_adapter;
+mod prompt_adapter;
 mod settings_adapter;
 mod team_adapter;
 mod turns_adapter;
@@ -52,6 +53,7 @@ pub fn connect_all(ui: &AppWindow, s: &Shared) {
     fill_adapter::connect(ui, s);
     chart_adapter::connect(ui, s);
     turns_adapter::connect(ui, s);
+    prompt_adapter::connect(ui, s);
 }
 
 pub fn refresh_all(ui: &AppWindow, s: &Session) {
@@ -64,4 +66,5 @@ pub fn refresh_all(ui: &AppWindow, s: &Session) {
     settings_adapter::refresh(ui, s);
     fill_adapter::refresh(ui, s);
     chart_adapter::refresh(ui, s);
+    prompt_adapter::refresh(ui, s);
 }

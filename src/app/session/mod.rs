@@ -21,13 +21,19 @@ use super::team_controller::TeamController;
 mod card;
 mod entry;
 mod locker_actions;
+mod locker_exchange;
 mod pickers;
+mod prompts;
+mod saving;
 mod team_actions;
 mod tools;
 mod undo;
 
 pub use entry::{Entry, EntryTarget};
+pub use locker_exchange::Exchange;
 pub use pickers::Picker;
+pub use prompts::{AfterPrompt, Answer, Prompt};
+pub use saving::{SavedFile, Unsaved};
 pub use team_actions::DEMO_TEAM;
 pub use tools::{CHART_ROWS, ChartPair, FillCheck, chart_columns};
 
@@ -44,6 +50,12 @@ pub struct Session {
     pub status: Status,
     /// Undo for the last diver removed or the team replaced, until the team changes.
     undo: Option<undo::UndoOffer>,
+    /// Files whose last save failed; written again on every save.
+    pub unsaved: Unsaved,
+    /// The question on screen, if any.
+    pub prompt: Prompt,
+    /// Where locker exports go and imports come from.
+    pub exchange: Exchange,
 }
 
 impl Session {
@@ -55,6 +67,7 @@ impl Session {
         let LoadReport {
             mut messages,
             first_launch,
+            settings_repaired,
         } = loaded.report;
         let settings = loaded.settings;
         let team = match loaded.team {
@@ -81,7 +94,8 @@ impl Session {
         } else {
             Screen::Team
         };
-        Session {
+        let mut session = Session {
+            exchange: Exchange::for_data_dir(store.dir()),
             store,
             settings,
             fill: FillCheck::for_team(team.input()),
@@ -93,20 +107,29 @@ impl Session {
             picker: Picker::None,
             status: Status::new(messages),
             undo: None,
+            unsaved: Unsaved::default(),
+            prompt: Prompt::None,
+        };
+        if settings_repaired {
+            session.save_settings();
         }
+        session
     }
 
     /// Read the files again if another program changed them since they were last read
     /// or written (on resume). The page stays where it was. Returns whether it reloaded.
+    /// Never while changes are unsaved: they would be lost.
     pub fn reload_if_changed(&mut self) -> bool {
-        if !self.store.changed_on_disk() {
+        if !self.all_saved() || !self.store.changed_on_disk() {
             return false;
         }
         let page = self.nav.current();
         let dir = self.store.dir().to_path_buf();
         let fresh = Session::open(Store::new(dir));
         let nav = self.nav.clone();
+        let exchange = std::mem::take(&mut self.exchange);
         *self = fresh;
+        self.exchange = exchange;
         if page != Screen::Cautions && self.settings.cautions_acknowledged {
             self.nav = nav;
         }
@@ -125,32 +148,6 @@ impl Session {
     /// The page on screen.
     pub fn page(&self) -> Screen {
         self.nav.current()
-    }
-
-    // ---- saving ------------------------------------------------------------------
-
-    /// Write everything (used on edits and on Android lifecycle events).
-    pub fn save_all(&mut self) {
-        self.write_team();
-        self.save_locker();
-        self.save_settings();
-    }
-    /// Save the team after a change: the change ends any Undo on offer.
-    pub fn save_team(&mut self) {
-        self.undo = None;
-        self.write_team();
-    }
-    fn write_team(&mut self) {
-        let r = self.store.save_team(&self.team.to_state());
-        self.status.report(r);
-    }
-    pub fn save_locker(&mut self) {
-        let r = self.store.save_locker(&self.locker.file);
-        self.status.report(r);
-    }
-    pub fn save_settings(&mut self) {
-        let r = self.store.save_settings(&self.settings);
-        self.status.report(r);
     }
 
     /// Save the team after an accepted edit; report a refused one.
@@ -177,8 +174,13 @@ impl Session {
         self.nav.go(s);
     }
 
-    /// Back: closes an entry or picker first, then goes one page back.
+    /// Back: closes a question (the safe answer), an entry or a picker first, then goes
+    /// one page back. Leaving a changed locker edit asks first.
     pub fn back(&mut self) -> bool {
+        if self.prompt != Prompt::None {
+            self.prompt = Prompt::None;
+            return true;
+        }
         if self.entry.is_some() {
             self.cancel_entry();
             return true;
@@ -188,7 +190,7 @@ impl Session {
             return true;
         }
         if self.nav.current() == Screen::LockerEdit {
-            self.locker.drop_draft();
+            return self.leave_locker_edit();
         }
         self.nav.back()
     }

@@ -214,7 +214,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             on_done: None,
         },
         EntryTarget::LockerName => Field {
-            buffer: KeypadBuffer::letters(&draft?.name, 40),
+            buffer: KeypadBuffer::letters(&draft?.name, crate::storage::locker::MAX_SET_NAME_CHARS),
             title: "Name of the cylinder set".to_string(),
             unit: String::new(),
             live: false,
@@ -234,7 +234,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             on_done: None,
         },
         EntryTarget::LockerNote => Field {
-            buffer: KeypadBuffer::letters(&draft?.note, 60),
+            buffer: KeypadBuffer::letters(&draft?.note, crate::storage::locker::MAX_SET_NOTE_CHARS),
             title: "Note (serial, test date, valves…)".to_string(),
             unit: String::new(),
             live: false,
