@@ -6,7 +6,8 @@
 //!   `team_actions.rs`;
 //! - the cylinder locker and its draft (`LockerController`), actions in `locker_actions.rs`;
 //! - navigation and status (`NavController`, `Status`), here;
-//! - the open keypad entry (`entry/`) and picker (`pickers.rs`);
+//! - the open keypad entry (`entry/`) and picker (`pickers.rs`, with the custom set in
+//!   `custom_set.rs` and the mix choices in `mix_picker.rs`);
 //! - the fill-to-water check and the wet-notes chart selection (`tools.rs`).
 
 use crate::plan::UnitSystem;
@@ -18,13 +19,17 @@ use super::locker_controller::LockerController;
 use super::nav::{NavController, Screen, Status};
 use super::team_controller::TeamController;
 
+mod custom_set;
 mod entry;
 mod locker_actions;
+mod mix_picker;
 mod pickers;
 mod team_actions;
 mod tools;
 
+pub use custom_set::CustomSet;
 pub use entry::{Entry, EntryTarget};
+pub use mix_picker::{MixChoices, MixHistory};
 pub use pickers::Picker;
 pub use team_actions::DEMO_TEAM;
 pub use tools::{ChartPair, FillCheck};
@@ -37,6 +42,8 @@ pub struct Session {
     pub nav: NavController,
     pub entry: Option<Entry>,
     pub picker: Picker,
+    /// The mixes each diver chose since the app started (the mix picker offers them).
+    pub mix_history: MixHistory,
     pub fill: FillCheck,
     pub chart: ChartPair,
     pub status: Status,
@@ -87,6 +94,7 @@ impl Session {
             nav: NavController::new(first),
             entry: None,
             picker: Picker::None,
+            mix_history: MixHistory::default(),
             status: Status::new(messages),
         }
     }
@@ -101,7 +109,9 @@ impl Session {
         let dir = self.store.dir().to_path_buf();
         let fresh = Session::open(Store::new(dir));
         let nav = self.nav.clone();
+        let history = std::mem::take(&mut self.mix_history);
         *self = fresh;
+        self.mix_history = history;
         if page != Screen::Cautions && self.settings.cautions_acknowledged {
             self.nav = nav;
         }
