@@ -146,7 +146,11 @@ impl LockerController {
     ) -> Result<Added, InputError> {
         let cylinders = CylindersFile::from_set(set);
         let name: String = name.trim().chars().take(MAX_SET_NAME_CHARS).collect();
-        let name = if name.is_empty() { set.describe() } else { name };
+        let name = if name.is_empty() {
+            set.describe()
+        } else {
+            name
+        };
         if let Some(e) = self
             .file
             .entries
@@ -205,7 +209,10 @@ mod tests {
             d.second = Some(232.0);
         });
         let id = l.save_draft().unwrap();
-        assert!(!l.file.entries[0].mine, "not even the first set is made mine");
+        assert!(
+            !l.file.entries[0].mine,
+            "not even the first set is made mine"
+        );
         assert!(l.mine().is_none());
         l.make_mine(id);
         l.start_edit(id);
@@ -236,7 +243,10 @@ mod tests {
         let add = |l: &mut LockerController, set| l.add_set("Twin 11.1 L", set, Material::Steel);
         assert_eq!(add(&mut l, &set), Ok(Added::New("Twin 11.1 L".into())));
         assert_eq!(add(&mut l, &set), Ok(Added::Already("Twin 11.1 L".into())));
-        assert_eq!(add(&mut l, &other), Ok(Added::New("Twin 11.1 L (2)".into())));
+        assert_eq!(
+            add(&mut l, &other),
+            Ok(Added::New("Twin 11.1 L (2)".into()))
+        );
         assert_eq!(l.entries().len(), 2);
         assert!(l.entries().iter().all(|e| !e.mine));
         let long = "x".repeat(60);

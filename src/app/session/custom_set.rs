@@ -180,6 +180,36 @@ mod tests {
     }
 
     #[test]
+    fn the_sizes_are_typed_on_our_keypad_and_checked_there() {
+        use crate::app::session::EntryTarget;
+        let dir = tempfile::tempdir().unwrap();
+        let mut s = Session::open(Store::new(dir.path()));
+        s.open_cylinder_picker(0);
+        s.open_custom_cylinders();
+        s.open_entry(EntryTarget::CustomFirst);
+        for k in ["clear", "4", "0"] {
+            s.key(k);
+        }
+        let why = s.entry.as_ref().unwrap().reason().to_string();
+        assert!(why.contains("water capacity per cylinder"), "{why}");
+        s.entry_done();
+        assert!(s.entry.is_some(), "an out-of-range size is not taken");
+        for k in ["clear", "1", "1", ".", "1"] {
+            s.key(k);
+        }
+        s.entry_done();
+        s.open_entry(EntryTarget::CustomSecond);
+        for k in ["clear", "2", "3", "2"] {
+            s.key(k);
+        }
+        s.entry_done();
+        let Picker::Custom { set, .. } = s.picker else {
+            panic!("the custom entry stays open");
+        };
+        assert_eq!((set.first, set.second), (Some(11.1), Some(232.0)));
+    }
+
+    #[test]
     fn labels_tell_twins_from_independent_pairs() {
         let mut c = CustomSet::from_set(&CylinderSet::twins(CylinderSpec::Stamped {
             water_l: 12.0,

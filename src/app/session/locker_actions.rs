@@ -95,7 +95,11 @@ mod tests {
         s.custom_done();
         assert_eq!(s.picker, Picker::None);
         s.save_diver_cylinders(0);
-        assert!(s.status.text().contains("Twin 11.1 L 232 bar"), "{:?}", s.status);
+        assert!(
+            s.status.text().contains("Twin 11.1 L 232 bar"),
+            "{:?}",
+            s.status
+        );
         s.dismiss_status();
         s.save_diver_cylinders(0);
         assert!(s.status.text().contains("already"), "{:?}", s.status);
@@ -108,7 +112,10 @@ mod tests {
         let again = Session::open(Store::new(dir.path()));
         assert_eq!(again.locker.entries().len(), 1);
         assert_eq!(
-            again.locker.entries()[0].cylinders.to_set("locker").unwrap(),
+            again.locker.entries()[0]
+                .cylinders
+                .to_set("locker")
+                .unwrap(),
             s.team.input().divers[0].cylinders
         );
     }

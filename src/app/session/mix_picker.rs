@@ -7,7 +7,11 @@ use super::{Picker, Session};
 
 /// Common mixes offered after the diver's own (common practice: air and the two
 /// usual nitrox blends).
-pub const COMMON_MIXES: [Mix; 3] = [Mix::AIR, Mix { o2: 0.32, he: 0.0 }, Mix { o2: 0.36, he: 0.0 }];
+pub const COMMON_MIXES: [Mix; 3] = [
+    Mix::AIR,
+    Mix { o2: 0.32, he: 0.0 },
+    Mix { o2: 0.36, he: 0.0 },
+];
 
 /// At most this many of the diver's and the team's mixes are offered (one row).
 pub const OWN_CHOICES: usize = 4;
@@ -148,11 +152,52 @@ mod tests {
         s.open_mix_picker(1);
         assert_eq!(labels(&s.mix_choices().own), ["EAN32", "Tx 18/45"]);
         s.pick_mix_choice(1);
-        assert_eq!(s.picker.mix().map(|m| m.label()).as_deref(), Some("Tx 18/45"));
+        assert_eq!(
+            s.picker.mix().map(|m| m.label()).as_deref(),
+            Some("Tx 18/45")
+        );
         s.pick_mix_choice(2);
         assert_eq!(s.picker.mix(), Some(Mix::AIR), "then the common ones");
         s.pick_mix_choice(99);
-        assert_eq!(s.picker.mix(), Some(Mix::AIR), "out of range changes nothing");
+        assert_eq!(
+            s.picker.mix(),
+            Some(Mix::AIR),
+            "out of range changes nothing"
+        );
+    }
+
+    #[test]
+    fn a_custom_mix_is_o2_then_he_on_the_keypad() {
+        use crate::app::session::EntryTarget;
+        let dir = tempfile::tempdir().unwrap();
+        let mut s = Session::open(Store::new(dir.path()));
+        s.open_mix_picker(2);
+        s.open_entry(EntryTarget::MixO2);
+        for k in ["clear", "1", "8"] {
+            s.key(k);
+        }
+        s.entry_done();
+        assert_eq!(
+            s.entry.as_ref().map(|e| e.target()),
+            Some(EntryTarget::MixHe)
+        );
+        for k in ["clear", "9", "9"] {
+            s.key(k);
+        }
+        let why = s.entry.as_ref().unwrap().reason().to_string();
+        assert!(why.contains("helium"), "{why}");
+        for k in ["del", "del", "4", "5"] {
+            s.key(k);
+        }
+        s.entry_done();
+        assert!(s.entry.is_none());
+        // Trimix is worded as the mix labels word it.
+        assert_eq!(
+            s.picker.mix().map(|m| m.label()).as_deref(),
+            Some("Tx 18/45")
+        );
+        s.mix_done();
+        assert_eq!(s.team.input().divers[2].mix, Mix::trimix(0.18, 0.45));
     }
 
     #[test]

@@ -261,7 +261,11 @@ mod tests {
         s.open_custom_cylinders();
         s.edit_custom(|c| c.set_rated(true));
         let c = picker(&s).custom.unwrap();
-        assert!(c.problem.contains("Rated volume per cylinder"), "{}", c.problem);
+        assert!(
+            c.problem.contains("Rated volume per cylinder"),
+            "{}",
+            c.problem
+        );
         assert_eq!(c.first_value, "—");
         s.edit_custom(|c| {
             c.first = Some(77.4);
@@ -271,6 +275,10 @@ mod tests {
         let c = picker(&s).custom.unwrap();
         assert_eq!(c.problem, "");
         // Trade fact, from memory: 77.4 cu ft at 3000 psi is about 11.1 L of water.
-        assert!(c.summary.starts_with("Single 77.4 cu ft 3000 psi · 11."), "{}", c.summary);
+        assert!(
+            c.summary.starts_with("Single 77.4 cu ft 3000 psi · 11."),
+            "{}",
+            c.summary
+        );
     }
 }
