@@ -178,7 +178,7 @@ fn mix_rows(s: &Session) -> Vec<MixRowVm> {
     let mut index = 0;
     for (heading, mixes) in [
         ("RECENT AND IN THIS TEAM", &choices.own),
-        ("COMMON", &choices.common),
+        ("COMMON MIXES", &choices.common),
     ] {
         for (n, chunk) in mixes.chunks(MIXES_PER_ROW).enumerate() {
             rows.push(MixRowVm {
