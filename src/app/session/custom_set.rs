@@ -102,7 +102,9 @@ impl Session {
     /// "Custom…" in the cylinder picker.
     pub fn open_custom_cylinders(&mut self) {
         if let Picker::Cylinders { diver, stage } = self.picker {
-            let d = &self.team.input().divers[diver];
+            let Some(d) = self.team.input().divers.get(diver) else {
+                return;
+            };
             let current = if stage {
                 d.stage.as_ref().map(|st| st.cylinders)
             } else {
@@ -190,8 +192,14 @@ mod tests {
         for k in ["clear", "4", "0"] {
             s.key(k);
         }
-        let why = s.entry.as_ref().unwrap().reason().to_string();
-        assert!(why.contains("water capacity per cylinder"), "{why}");
+        // The keypad's title names the field; its problem gives the allowed range.
+        let e = s.entry.as_ref().unwrap();
+        assert!(
+            e.title().contains("Water capacity per cylinder"),
+            "{}",
+            e.title()
+        );
+        assert!(e.reason().contains("allowed 0.5 to 30 L"), "{}", e.reason());
         s.entry_done();
         assert!(s.entry.is_some(), "an out-of-range size is not taken");
         for k in ["clear", "1", "1", ".", "1"] {

@@ -184,8 +184,9 @@ mod tests {
         for k in ["clear", "9", "9"] {
             s.key(k);
         }
-        let why = s.entry.as_ref().unwrap().reason().to_string();
-        assert!(why.contains("helium"), "{why}");
+        let e = s.entry.as_ref().unwrap();
+        assert!(e.title().contains("helium (He)"), "{}", e.title());
+        assert!(e.reason().contains("allowed 0 to 95 %"), "{}", e.reason());
         for k in ["del", "del", "4", "5"] {
             s.key(k);
         }

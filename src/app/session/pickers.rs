@@ -1,5 +1,6 @@
 //! The cylinder and mix pickers (main gas and stage): the open picker with its own
-//! methods, and the session actions that open it and apply the choice.
+//! methods, and the session actions that open it and apply the choice. The custom
+//! set is in `custom_set.rs`; the mix choices and Done in `mix_picker.rs`.
 
 use crate::plan::Mix;
 use crate::plan::catalogue::presets;
