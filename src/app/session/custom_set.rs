@@ -26,8 +26,10 @@ pub struct CustomSet {
 }
 
 impl CustomSet {
-    /// Starts from the set the diver has, so that changing one number is one entry.
-    pub fn from_set(set: &CylinderSet) -> Self {
+    /// Starts from the set the diver has, so that changing one number is one entry; a
+    /// pair whose name says sidemount or independent stays independent.
+    pub fn from_set(set: &CylinderSet, label: &str) -> Self {
+        let label = label.to_lowercase();
         let (rated, first, second) = match set.spec {
             CylinderSpec::Stamped {
                 water_l,
@@ -40,7 +42,7 @@ impl CustomSet {
         };
         CustomSet {
             count: set.count,
-            independent: false,
+            independent: label.contains("sidemount") || label.contains("independent"),
             rated,
             first: Some(first),
             second: Some(second),
@@ -105,14 +107,19 @@ impl Session {
             let Some(d) = self.team.input().divers.get(diver) else {
                 return;
             };
+            let labels = if stage {
+                self.team.stage_labels()
+            } else {
+                self.team.labels()
+            };
+            let label = labels.get(diver).map_or("", |l| l.as_str());
             let current = if stage {
                 d.stage.as_ref().map(|st| st.cylinders)
             } else {
                 Some(d.cylinders)
             };
-            let set = current
-                .map(|c| CustomSet::from_set(&c))
-                .unwrap_or_else(|| CustomSet::from_set(&crate::plan::catalogue::presets()[0].set));
+            let first = crate::plan::catalogue::presets()[0].set;
+            let set = CustomSet::from_set(&current.unwrap_or(first), label);
             self.picker = Picker::Custom { diver, stage, set };
         }
     }
@@ -219,10 +226,13 @@ mod tests {
 
     #[test]
     fn labels_tell_twins_from_independent_pairs() {
-        let mut c = CustomSet::from_set(&CylinderSet::twins(CylinderSpec::Stamped {
+        let twelves = CylinderSet::twins(CylinderSpec::Stamped {
             water_l: 12.0,
             working_bar: 232.0,
-        }));
+        });
+        let side = CustomSet::from_set(&twelves, "Sidemount 2 × 12 L");
+        assert_eq!(side.label(&twelves), "2 × 12 L 232 bar, independent");
+        let mut c = CustomSet::from_set(&twelves, "Twin 12 L 232 bar");
         let set = c.to_set().unwrap();
         assert_eq!(c.label(&set), "Twin 12 L 232 bar");
         c.set_count(1);
