@@ -65,7 +65,10 @@ pub struct PickerVm {
 pub fn picker(s: &Session) -> PickerVm {
     let list = matches!(s.picker, Picker::Cylinders { .. });
     let (singles, pairs) = if list {
-        preset_picks().into_iter().partition(|r| r.count == "1×")
+        let all = presets();
+        preset_picks()
+            .into_iter()
+            .partition(|r| all[r.index].set.count == 1)
     } else {
         (Vec::new(), Vec::new())
     };
