@@ -140,6 +140,20 @@ fn main() {
         s.go(Screen::Turns);
     });
     shot("15-buddy-imperial", &|s| s.go(Screen::Buddy));
+    // A set in neither list: Bram's two independent 11.1 L cylinders at 232 bar.
+    shot("18-custom-set", &|s| {
+        s.set_units(turnsheet::plan::UnitSystem::Metric);
+        s.back();
+        s.open_cylinder_picker(1);
+        s.open_custom_cylinders();
+        s.edit_custom(|c| {
+            c.set_rated(false);
+            c.set_count(2);
+            c.independent = true;
+            c.first = Some(11.1);
+            c.second = Some(232.0);
+        });
+    });
 
     // A small phone (360 × 640) with the system text size at 1.3.
     app.set_font_scale(1.3);

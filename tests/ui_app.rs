@@ -280,7 +280,10 @@ fn locker_add_edit_delete_survive_a_restart() {
     assert_eq!(locker.entries[0].name, "Deep");
     assert_eq!(locker.entries[0].cylinders.count, 1);
     assert_eq!(locker.entries[0].cylinders.water_l, Some(15.0));
-    assert!(locker.entries[0].mine);
+    assert!(
+        !locker.entries[0].mine,
+        "the first set is not made mine until the diver marks it"
+    );
 }
 
 #[test]
@@ -516,6 +519,11 @@ fn every_button_is_a_big_touch_target() {
     press(&app, "cancel mix");
     press(&app, "cylinders of Ines");
     check("cylinder picker");
+    press(&app, "custom set");
+    check("custom cylinder set");
+    press(&app, "custom water capacity per cylinder");
+    check("custom set keypad");
+    press(&app, "cancel entry");
     press(&app, "cancel pick");
     press(&app, "show turns");
     check("turns page");
@@ -585,7 +593,11 @@ fn stages_get_drop_pressures_matching_the_core() {
     press(&app, "stage of Ines");
     press(&app, "pick Aluminium 40");
     press(&app, "stage mix of Ines");
-    press(&app, "EAN50");
+    press(&app, "custom mix O2 percent");
+    press(&app, "clear");
+    type_keys(&app, "50");
+    press(&app, "done");
+    press(&app, "done");
     press(&app, "mix done");
     press(&app, "stage pressure of Ines");
     press(&app, "clear");
@@ -1044,4 +1056,173 @@ fn two_divers_swap_locker_sets_from_the_locker_page() {
     assert_eq!(value(&app, "locker entry"), "Aluminium 40");
     press(&app, "dismiss locker message");
     assert_eq!(count(&app, "message"), 0);
+}
+
+/// The quick mixes offered, row by row, as the mix picker shows them.
+fn quick_mixes(app: &App) -> Vec<String> {
+    use slint::Model;
+    let rows = app
+        .window
+        .global::<turnsheet::app::PickerAdapter>()
+        .get_mix_rows();
+    rows.iter()
+        .flat_map(|r| {
+            r.items
+                .iter()
+                .map(|i| i.text.to_string())
+                .collect::<Vec<_>>()
+        })
+        .collect()
+}
+
+#[test]
+fn a_custom_pair_entered_in_the_picker_plans_like_the_core() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_acknowledged(dir.path());
+    press(&app, "cylinders of Bram");
+    press(&app, "custom set");
+    press(&app, "cylinder count 2");
+    press(&app, "pair independent");
+    press(&app, "given as metric stamp");
+    // A field out of range is refused on the keypad with the field's name.
+    press(&app, "custom water capacity per cylinder");
+    press(&app, "clear");
+    type_keys(&app, "40");
+    // The keypad's title names the field; the problem gives the range.
+    assert_eq!(
+        app.session.borrow().entry.as_ref().unwrap().title(),
+        "Custom set: Water capacity per cylinder (L)"
+    );
+    assert!(
+        value(&app, "entry problem").contains("allowed 0.5 to 30 L"),
+        "{}",
+        value(&app, "entry problem")
+    );
+    press(&app, "clear");
+    type_keys(&app, "11");
+    press(&app, "decimal point");
+    type_keys(&app, "1");
+    press(&app, "done");
+    press(&app, "custom working pressure");
+    press(&app, "clear");
+    type_keys(&app, "232");
+    press(&app, "done");
+    assert!(
+        value(&app, "custom set summary").starts_with("2 × 11.1 L 232 bar, independent"),
+        "{}",
+        value(&app, "custom set summary")
+    );
+    press(&app, "use custom set");
+    assert_eq!(
+        app.session.borrow().team.labels()[1],
+        "2 × 11.1 L 232 bar, independent"
+    );
+    press(&app, "start pressure of Bram");
+    press(&app, "clear");
+    type_keys(&app, "220");
+    press(&app, "done");
+    press(&app, "show turns");
+
+    // The demo team with Bram's custom pair, built directly on the planning core.
+    let mut input = TeamFile::parse(turnsheet::app::session::DEMO_TEAM)
+        .unwrap()
+        .to_input()
+        .unwrap();
+    input.divers[1].cylinders = CylinderSet {
+        count: 2,
+        spec: CylinderSpec::Stamped {
+            water_l: 11.1,
+            working_bar: 232.0,
+        },
+    };
+    input.divers[1].start = Pressure::from_bar(220.0);
+    let plan = plan_team(&input).unwrap();
+    for d in &plan.divers {
+        assert_eq!(turn_number(&app, &d.name), d.turn_shown_value, "{}", d.name);
+    }
+}
+
+#[test]
+fn save_to_my_locker_adds_the_set_and_does_not_make_it_mine() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_acknowledged(dir.path());
+    press(&app, "save cylinders of Bram to my locker");
+    assert!(
+        value(&app, "message").contains("Sidemount 2 × aluminium 80"),
+        "{}",
+        value(&app, "message")
+    );
+    // A second tap does not add it twice.
+    press(&app, "save cylinders of Bram to my locker");
+    press(&app, "Locker");
+    assert_eq!(value(&app, "locker entry"), "Sidemount 2 × aluminium 80");
+    find(&app, "mark Sidemount 2 × aluminium 80 as mine");
+    assert!(app.session.borrow().locker.mine().is_none());
+    back_key(&app);
+    // Not mine: a new team starts with the first generic size, not Bram's set.
+    press(&app, "new team");
+    let s = app.session.borrow();
+    assert_eq!(s.locker.entries().len(), 1);
+    assert_eq!(s.team.labels()[0], "Twin 12 L 232 bar");
+    drop(s);
+    // It is offered in the picker, under my locker.
+    press(&app, "cylinders of Me");
+    press(&app, "pick from my locker Sidemount 2 × aluminium 80");
+    assert_eq!(
+        app.session.borrow().team.input().divers[0].cylinders.count,
+        2
+    );
+}
+
+#[test]
+fn a_recent_mix_is_offered_first() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_acknowledged(dir.path());
+    // The demo team breathes EAN32; common practice adds air and EAN36.
+    press(&app, "mix of Bram");
+    assert_eq!(quick_mixes(&app), ["EAN32", "Air", "EAN36"]);
+    // A custom mix on the keypad: O2, then He.
+    press(&app, "custom mix O2 percent");
+    press(&app, "clear");
+    type_keys(&app, "28");
+    press(&app, "done");
+    press(&app, "clear");
+    type_keys(&app, "0");
+    press(&app, "done");
+    assert_eq!(value(&app, "mix"), "EAN28");
+    press(&app, "mix done");
+    press(&app, "mix of Bram");
+    press(&app, "EAN32");
+    press(&app, "mix done");
+    // Bram's two recent mixes come first, newest first.
+    press(&app, "mix of Bram");
+    assert_eq!(quick_mixes(&app), ["EAN32", "EAN28", "Air", "EAN36"]);
+    press(&app, "EAN28");
+    assert_eq!(value(&app, "mix"), "EAN28");
+    press(&app, "cancel mix");
+    // Ines has no history: her own mix, then the team's.
+    press(&app, "mix of Ines");
+    assert_eq!(quick_mixes(&app), ["EAN32", "Air", "EAN36"]);
+    press(&app, "cancel mix");
+}
+
+#[test]
+fn the_pickers_cancel_is_one_touch_high() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open_acknowledged(dir.path());
+    press(&app, "cylinders of Ines");
+    // 64 px = 64 dp: the touch size of every big button. The window is 4000 px tall,
+    // so a Cancel that took the space left over would be far taller.
+    let one_touch = |h: f32| (63.9..=64.5).contains(&h);
+    let other = find(&app, "custom set").size().height;
+    let cancel = find(&app, "cancel pick").size().height;
+    assert!(one_touch(cancel) && one_touch(other), "{cancel} vs {other}");
+    press(&app, "custom set");
+    let cancel = find(&app, "cancel pick").size().height;
+    let other = find(&app, "cylinder count 1").size().height;
+    assert!(one_touch(cancel) && one_touch(other), "{cancel} vs {other}");
 }

@@ -2,13 +2,21 @@
 
 use crate::formats::team_file::CylindersFile;
 use crate::plan::CylinderSet;
-use crate::plan::catalogue::Preset;
+use crate::plan::catalogue::{Material, Preset};
 use crate::plan::error::InputError;
 use crate::storage::locker::{
-    LockerEntry, LockerFile, MAX_LOCKER_SETS, MAX_SET_NOTE_CHARS, check_set_name,
+    LockerEntry, LockerFile, MAX_LOCKER_SETS, MAX_SET_NAME_CHARS, MAX_SET_NOTE_CHARS,
+    check_set_name,
 };
 
 pub use super::locker_draft::Draft;
+
+/// What `add_set` did, with the name the set has in the locker.
+#[derive(Clone, Debug, PartialEq, Eq)]
+pub enum Added {
+    New(String),
+    Already(String),
+}
 
 #[derive(Clone, Debug, Default)]
 pub struct LockerController {
@@ -115,14 +123,14 @@ impl LockerController {
             }
             None => {
                 let id = self.file.next_id();
-                let first = self.file.entries.is_empty();
+                // Never mine by itself, not even the first: the diver marks it.
                 self.file.entries.push(LockerEntry {
                     id,
                     name,
                     cylinders,
                     material: d.material,
                     note,
-                    mine: first,
+                    mine: false,
                 });
                 id
             }
@@ -155,6 +163,53 @@ impl LockerController {
         }
     }
 
+    /// Add `set` under `name` (shortened to the name limit, `NAME (2)`... when taken),
+    /// never as mine. The same set under the same name is not added twice.
+    pub fn add_set(
+        &mut self,
+        name: &str,
+        set: &CylinderSet,
+        material: Material,
+    ) -> Result<Added, InputError> {
+        let cylinders = CylindersFile::from_set(set);
+        let name: String = name.trim().chars().take(MAX_SET_NAME_CHARS).collect();
+        let name = if name.is_empty() {
+            set.describe()
+        } else {
+            name
+        };
+        if let Some(e) = self
+            .file
+            .entries
+            .iter()
+            .find(|e| e.cylinders == cylinders && e.name == name)
+        {
+            return Ok(Added::Already(e.name.clone()));
+        }
+        if self.file.entries.len() >= MAX_LOCKER_SETS {
+            return Err(InputError::new(
+                "locker",
+                format!("the locker is full ({MAX_LOCKER_SETS} sets); delete one first"),
+            ));
+        }
+        let name = if self.file.find_by_name(&name).is_empty() {
+            name
+        } else {
+            self.file
+                .free_name(&name)
+                .ok_or_else(|| InputError::new("name", "no free variant of the name was found"))?
+        };
+        self.file.entries.push(LockerEntry {
+            id: self.file.next_id(),
+            name: name.clone(),
+            cylinders,
+            material,
+            note: String::new(),
+            mine: false,
+        });
+        Ok(Added::New(name))
+    }
+
     pub fn make_mine(&mut self, id: u64) {
         self.file.set_mine(id);
     }
@@ -183,7 +238,12 @@ mod tests {
             d.second = Some(232.0);
         });
         let id = l.save_draft().unwrap();
-        assert!(l.file.entries[0].mine, "the first set becomes mine");
+        assert!(
+            !l.file.entries[0].mine,
+            "not even the first set is made mine"
+        );
+        assert!(l.mine().is_none());
+        l.make_mine(id);
         l.start_edit(id);
         l.edit_draft(|d| d.first = Some(40.0));
         let e = l.save_draft().unwrap_err();
@@ -225,5 +285,32 @@ mod tests {
             l.file.within_limits().is_ok(),
             "the saved file would load again"
         );
+    }
+
+    #[test]
+    fn a_set_added_from_a_diver_gets_a_free_name_and_is_not_mine() {
+        let mut l = LockerController::default();
+        let set = CylinderSet::twins(crate::plan::CylinderSpec::Stamped {
+            water_l: 11.1,
+            working_bar: 232.0,
+        });
+        let other = CylinderSet::single(crate::plan::CylinderSpec::Stamped {
+            water_l: 15.0,
+            working_bar: 232.0,
+        });
+        let add = |l: &mut LockerController, set| l.add_set("Twin 11.1 L", set, Material::Steel);
+        assert_eq!(add(&mut l, &set), Ok(Added::New("Twin 11.1 L".into())));
+        assert_eq!(add(&mut l, &set), Ok(Added::Already("Twin 11.1 L".into())));
+        assert_eq!(
+            add(&mut l, &other),
+            Ok(Added::New("Twin 11.1 L (2)".into()))
+        );
+        assert_eq!(l.entries().len(), 2);
+        assert!(l.entries().iter().all(|e| !e.mine));
+        let long = "x".repeat(60);
+        let Ok(Added::New(n)) = l.add_set(&long, &set, Material::Steel) else {
+            panic!("a long label is shortened, not refused");
+        };
+        assert_eq!(n.chars().count(), MAX_SET_NAME_CHARS);
     }
 }

@@ -244,7 +244,7 @@ impl LockerFile {
     }
 
     /// `NAME (2)`, `NAME (3)`... the first not in use, shortened to fit the name limit.
-    fn free_name(&self, name: &str) -> Option<String> {
+    pub fn free_name(&self, name: &str) -> Option<String> {
         (2..=MAX_LOCKER_SETS + 2).find_map(|n| {
             let candidate = numbered_name(name, n);
             self.find_by_name(&candidate)

@@ -59,6 +59,8 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
             x.open_entry(EntryTarget::StageStart(i as usize))
         })
     });
+    let (w, st) = handles(ui, s);
+    a.on_save_to_locker(move |i| act(&w, &st, |x| x.save_diver_cylinders(i as usize)));
 }
 
 pub fn refresh(ui: &AppWindow, s: &Session) {

@@ -1,9 +1,10 @@
 //! Session actions of the cylinder locker: open the editor, save, delete, undo, mine.
 //! Changes to the open draft go straight to `LockerController::edit_draft`.
 
-use crate::plan::catalogue::presets;
+use crate::plan::catalogue::{Material, presets};
 use crate::plan::error::InputError;
 
+use super::super::locker_controller::Added;
 use super::super::nav::Screen;
 use super::Session;
 
@@ -38,11 +39,84 @@ impl Session {
         self.locker.make_mine(id);
         self.save_locker();
     }
+    /// "Save to my locker" on a diver's card: the diver's cylinders as a new set named
+    /// after their label (never made mine). The material is the generic size's when
+    /// the set is one, else steel (the default); it can be changed in the editor.
+    pub fn save_diver_cylinders(&mut self, i: usize) {
+        let Some(d) = self.team.input().divers.get(i) else {
+            return;
+        };
+        let set = d.cylinders;
+        let label = self.team.labels().get(i).cloned().unwrap_or_default();
+        let material = presets()
+            .iter()
+            .find(|p| p.set == set)
+            .map_or(Material::default(), |p| p.material);
+        match self.locker.add_set(&label, &set, material) {
+            Ok(Added::New(name)) => {
+                self.save_locker();
+                self.status.push(format!(
+                    "Saved “{name}” ({}) to your locker. It is not marked mine.",
+                    set.describe()
+                ));
+            }
+            Ok(Added::Already(name)) => self
+                .status
+                .push(format!("“{name}” is already in your locker.")),
+            Err(e) => self.status.push(e.to_string()),
+        }
+    }
+
     /// Save the draft and leave the editor; on error the editor stays open.
     pub fn locker_save(&mut self) -> Result<(), InputError> {
         self.locker.save_draft()?;
         self.save_locker();
         self.nav.back();
         Ok(())
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use crate::app::session::{Picker, Session};
+    use crate::storage::Store;
+
+    #[test]
+    fn a_divers_cylinders_go_to_the_locker_once_and_not_as_mine() {
+        let dir = tempfile::tempdir().unwrap();
+        let mut s = Session::open(Store::new(dir.path()));
+        s.open_cylinder_picker(0);
+        s.open_custom_cylinders();
+        s.edit_custom(|c| {
+            c.set_count(2);
+            c.first = Some(11.1);
+            c.second = Some(232.0);
+        });
+        s.custom_done();
+        assert_eq!(s.picker, Picker::None);
+        s.save_diver_cylinders(0);
+        assert!(
+            s.status.text().contains("Twin 11.1 L 232 bar"),
+            "{:?}",
+            s.status
+        );
+        s.dismiss_status();
+        s.save_diver_cylinders(0);
+        assert!(s.status.text().contains("already"), "{:?}", s.status);
+        assert_eq!(s.locker.entries().len(), 1);
+        let e = &s.locker.entries()[0];
+        assert_eq!(e.name, "Twin 11.1 L 232 bar");
+        assert!(!e.mine);
+        assert!(s.locker.mine().is_none());
+        // On disk too.
+        let again = Session::open(Store::new(dir.path()));
+        assert_eq!(again.locker.entries().len(), 1);
+        assert_eq!(
+            again.locker.entries()[0]
+                .cylinders
+                .to_set("locker")
+                .unwrap(),
+            s.team.input().divers[0].cylinders
+        );
     }
 }

@@ -6,7 +6,8 @@
 //!   `team_actions.rs`;
 //! - the cylinder locker and its draft (`LockerController`), actions in `locker_actions.rs`;
 //! - navigation and status (`NavController`, `Status`), here;
-//! - the open keypad entry (`entry/`) and picker (`pickers.rs`);
+//! - the open keypad entry (`entry/`) and picker (`pickers.rs`, with the custom set in
+//!   `custom_set.rs` and the mix choices in `mix_picker.rs`);
 //! - the fill-to-water check and the wet-notes chart selection (`tools.rs`).
 
 use crate::plan::UnitSystem;
@@ -19,9 +20,11 @@ use super::nav::{NavController, Screen, Status};
 use super::team_controller::TeamController;
 
 mod card;
+mod custom_set;
 mod entry;
 mod locker_actions;
 mod locker_exchange;
+mod mix_picker;
 mod pickers;
 mod prompts;
 mod saving;
@@ -29,8 +32,10 @@ mod team_actions;
 mod tools;
 mod undo;
 
+pub use custom_set::CustomSet;
 pub use entry::{Entry, EntryTarget};
 pub use locker_exchange::Exchange;
+pub use mix_picker::{MixChoices, MixHistory};
 pub use pickers::Picker;
 pub use prompts::{AfterPrompt, Answer, Prompt};
 pub use saving::{SavedFile, Unsaved};
@@ -45,6 +50,8 @@ pub struct Session {
     pub nav: NavController,
     pub entry: Option<Entry>,
     pub picker: Picker,
+    /// The mixes each diver chose since the app started (the mix picker offers them).
+    pub mix_history: MixHistory,
     pub fill: FillCheck,
     pub chart: ChartPair,
     pub status: Status,
@@ -105,6 +112,7 @@ impl Session {
             nav: NavController::new(first),
             entry: None,
             picker: Picker::None,
+            mix_history: MixHistory::default(),
             status: Status::new(messages),
             undo: None,
             unsaved: Unsaved::default(),
@@ -128,8 +136,10 @@ impl Session {
         let fresh = Session::open(Store::new(dir));
         let nav = self.nav.clone();
         let exchange = std::mem::take(&mut self.exchange);
+        let history = std::mem::take(&mut self.mix_history);
         *self = fresh;
         self.exchange = exchange;
+        self.mix_history = history;
         if page != Screen::Cautions && self.settings.cautions_acknowledged {
             self.nav = nav;
         }

@@ -1,11 +1,13 @@
 //! The cylinder and mix pickers (main gas and stage): the open picker with its own
-//! methods, and the session actions that open it and apply the choice.
+//! methods, and the session actions that open it and apply the choice. The custom
+//! set is in `custom_set.rs`; the mix choices and Done in `mix_picker.rs`.
 
 use crate::plan::Mix;
 use crate::plan::catalogue::presets;
 use crate::plan::team::validate_mix;
 
 use super::Session;
+use super::custom_set::CustomSet;
 
 /// An open picker, for a diver's main gas or stage.
 #[derive(Clone, Copy, Debug, PartialEq)]
@@ -15,6 +17,12 @@ pub enum Picker {
         diver: usize,
         stage: bool,
     },
+    /// "Custom…": a set typed on the keypad (see `custom_set.rs`).
+    Custom {
+        diver: usize,
+        stage: bool,
+        set: CustomSet,
+    },
     /// O2 and He in percent.
     Mix {
         diver: usize,
@@ -23,9 +31,6 @@ pub enum Picker {
         he: i32,
     },
 }
-
-/// The quick choices of the mix picker: air, EAN32, EAN50, Tx 21/35, Tx 18/45.
-const QUICK_MIXES: [(i32, i32); 5] = [(21, 0), (32, 0), (50, 0), (21, 35), (18, 45)];
 
 impl Picker {
     /// The mix picker, starting from `mix`.
@@ -60,19 +65,11 @@ impl Picker {
         }
     }
 
-    /// Change O2 and He by whole percents, within 5–100 % O2 and 0–95 % He.
-    pub fn nudge_mix(&mut self, o2_delta: i32, he_delta: i32) {
+    /// Set O2 and/or He in whole percents, kept within 5–100 % O2 and 0–95 % He.
+    pub fn set_mix_percent(&mut self, new_o2: Option<i32>, new_he: Option<i32>) {
         if let Picker::Mix { o2, he, .. } = self {
-            *o2 = (*o2 + o2_delta).clamp(5, 100);
-            *he = (*he + he_delta).clamp(0, 95);
-        }
-    }
-
-    /// One of the quick choices (see `QUICK_MIXES`).
-    pub fn quick_mix(&mut self, idx: usize) {
-        if let (Picker::Mix { o2, he, .. }, Some((q_o2, q_he))) = (self, QUICK_MIXES.get(idx)) {
-            *o2 = *q_o2;
-            *he = *q_he;
+            *o2 = new_o2.unwrap_or(*o2).clamp(5, 100);
+            *he = new_he.unwrap_or(*he).clamp(0, 95);
         }
     }
 
@@ -131,7 +128,7 @@ impl Session {
         }
     }
 
-    fn apply_cylinders(
+    pub(super) fn apply_cylinders(
         &mut self,
         i: usize,
         stage: bool,
@@ -176,24 +173,6 @@ impl Session {
             self.picker = Picker::for_mix(i, true, st.mix);
         }
     }
-
-    /// Use the mix picked; a mix the team refuses keeps the picker open.
-    pub fn mix_done(&mut self) {
-        if let (Picker::Mix { diver, stage, .. }, Some(mix)) = (self.picker, self.picker.mix()) {
-            let r = if stage {
-                self.team.set_stage_mix(diver, mix)
-            } else {
-                self.team.set_mix(diver, mix)
-            };
-            match r {
-                Ok(()) => {
-                    self.save_team();
-                    self.picker = Picker::None;
-                }
-                Err(e) => self.status.push(e.to_string()),
-            }
-        }
-    }
 }
 
 #[cfg(test)]
@@ -204,7 +183,7 @@ mod tests {
     fn the_mix_picker_stays_in_range_and_explains_a_bad_mix() {
         let mut p = Picker::for_mix(0, false, Mix::AIR);
         assert_eq!(p.mix_reason(), "");
-        p.nudge_mix(0, 200);
+        p.set_mix_percent(None, Some(200));
         assert_eq!(
             p,
             Picker::Mix {
@@ -215,7 +194,7 @@ mod tests {
             }
         );
         assert_ne!(p.mix_reason(), "", "21 + 95 is more than 100 %");
-        p.quick_mix(2);
+        p.set_mix_percent(Some(50), Some(0));
         assert_eq!(p.mix(), Some(Mix { o2: 0.5, he: 0.0 }));
         p.close();
         assert_eq!(p.mix(), None);

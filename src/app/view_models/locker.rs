@@ -1,6 +1,6 @@
-//! The cylinder locker, its editor and the pickers.
+//! The cylinder locker and its editor.
 
-use super::super::session::{Picker, Session};
+use super::super::session::Session;
 use crate::plan::ModelKind;
 use crate::plan::catalogue::{Material, presets};
 use crate::plan::error::fmt_num;
@@ -93,22 +93,6 @@ pub fn locker_edit(s: &Session) -> Option<LockerEditVm> {
     })
 }
 
-/// (title, detail, mine) for the locker rows of the cylinder picker.
-pub fn locker_pick_rows(s: &Session) -> Vec<(String, String, bool)> {
-    s.locker
-        .entries()
-        .iter()
-        .map(|e| {
-            let detail = e
-                .cylinders
-                .to_set("locker")
-                .map(|set| set.describe())
-                .unwrap_or_else(|err| err.to_string());
-            (e.name.clone(), detail, e.mine)
-        })
-        .collect()
-}
-
 pub fn preset_rows() -> Vec<(String, String)> {
     presets()
         .iter()
@@ -124,56 +108,4 @@ pub fn preset_rows() -> Vec<(String, String)> {
             )
         })
         .collect()
-}
-
-/// The open picker: which one, for what, and the mix being picked.
-pub struct PickerVm {
-    pub cylinders_open: bool,
-    pub stage_mode: bool,
-    pub mix_open: bool,
-    pub title: String,
-    /// O2 and He in percent, the mix's name and why it cannot be used (mix picker only).
-    pub mix: Option<(i32, i32, String, String)>,
-}
-
-pub fn picker(s: &Session) -> PickerVm {
-    PickerVm {
-        cylinders_open: matches!(s.picker, Picker::Cylinders { .. }),
-        stage_mode: matches!(s.picker, Picker::Cylinders { stage: true, .. }),
-        mix_open: matches!(s.picker, Picker::Mix { .. }),
-        title: picker_title(s),
-        mix: match (s.picker, s.picker.mix()) {
-            (Picker::Mix { o2, he, .. }, Some(mix)) => {
-                Some((o2, he, mix.label(), s.picker.mix_reason()))
-            }
-            _ => None,
-        },
-    }
-}
-
-pub fn picker_title(s: &Session) -> String {
-    let name = |i: usize| {
-        s.team
-            .input()
-            .divers
-            .get(i)
-            .map(|d| d.name.clone())
-            .unwrap_or_default()
-    };
-    match s.picker {
-        Picker::Cylinders {
-            diver,
-            stage: false,
-        } => format!("Cylinders for {}", name(diver)),
-        Picker::Cylinders { diver, stage: true } => format!("Stage for {}", name(diver)),
-        Picker::Mix {
-            diver,
-            stage: false,
-            ..
-        } => format!("Gas for {}", name(diver)),
-        Picker::Mix {
-            diver, stage: true, ..
-        } => format!("Stage gas for {}", name(diver)),
-        Picker::None => String::new(),
-    }
 }

@@ -3,7 +3,8 @@
 //! times down. Adapters copy these texts into the Slint globals and do no arithmetic.
 //!
 //! `mod.rs` has the number helpers; the pages' view models are in `team.rs`,
-//! `turns.rs`, `tools.rs` (fill check, chart), `locker.rs` (locker, pickers),
+//! `turns.rs`, `tools.rs` (fill check, chart), `locker.rs` (locker),
+//! `pickers.rs` (cylinder and mix pickers),
 //! `settings.rs` and `keypad.rs`.
 
 use crate::plan::error::{first_upper, fmt_num};
@@ -13,16 +14,15 @@ use super::team_controller::step_options;
 
 mod keypad;
 mod locker;
+mod pickers;
 mod settings;
 mod team;
 mod tools;
 mod turns;
 
 pub use keypad::{KeypadVm, keypad};
-pub use locker::{
-    LockerEditVm, LockerRowVm, PickerVm, locker_edit, locker_pick_rows, locker_rows, picker,
-    picker_title, preset_rows, undo_text,
-};
+pub use locker::{LockerEditVm, LockerRowVm, locker_edit, locker_rows, preset_rows, undo_text};
+pub use pickers::{CustomVm, MixRowVm, PickRowVm, PickerVm, picker, picker_title};
 pub use settings::{SettingsVm, cautions, settings};
 pub use team::{
     DiverCardVm, TeamPageVm, demo_note, depth_label, diver_cards, status, team_page, team_summary,

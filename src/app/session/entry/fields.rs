@@ -10,7 +10,7 @@ use crate::plan::team::validate_start;
 use crate::plan::{Pressure, PressureUnit, Temperature, UnitSystem, Volume};
 
 use super::super::Session;
-use super::{Field, Typed, apply, check, no_check};
+use super::{Field, Typed, apply, check, no_check, sizes};
 
 /// What the open keypad is entering.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
@@ -28,6 +28,14 @@ pub enum EntryTarget {
     LockerNote,
     LockerFirst,
     LockerSecond,
+    /// One cylinder's water litres or rated cu ft, in the picker's custom set.
+    CustomFirst,
+    /// One cylinder's working bar or rated psi, in the picker's custom set.
+    CustomSecond,
+    /// O2 % of the mix being picked (Done goes on to He).
+    MixO2,
+    /// He % of the mix being picked.
+    MixHe,
     FillPressure,
     FillTemp,
 }
@@ -247,43 +255,12 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             }),
             on_done: None,
         },
-        EntryTarget::LockerFirst | EntryTarget::LockerSecond => {
-            let first = target == EntryTarget::LockerFirst;
-            let which = usize::from(!first);
-            let d = draft?;
-            let (caption, unit, _, _) = d.field_specs()[which];
-            let value = if first { d.first } else { d.second };
-            Field {
-                buffer: KeypadBuffer::digits(
-                    &value.map(fmt_num).unwrap_or_default(),
-                    unit == "L" || unit == "cu ft",
-                ),
-                title: format!("{} ({unit})", vm::capitalised(caption)),
-                unit: unit.to_string(),
-                live: false,
-                step: None,
-                revert: None,
-                check: check(move |s, t| match s.locker.draft() {
-                    None => Ok(()),
-                    Some(d) => {
-                        let (caption, unit, lo, hi) = d.field_specs()[which];
-                        let name = caption.to_lowercase();
-                        check_range(&name, t.number(&name, "enter a value")?, lo, hi, unit)
-                    }
-                }),
-                apply: apply(move |s, t| {
-                    s.locker.edit_draft(|d| {
-                        if first {
-                            d.first = t.value;
-                        } else {
-                            d.second = t.value;
-                        }
-                    });
-                    Ok(())
-                }),
-                on_done: None,
-            }
-        }
+        EntryTarget::LockerFirst => sizes::locker(s, true)?,
+        EntryTarget::LockerSecond => sizes::locker(s, false)?,
+        EntryTarget::CustomFirst => sizes::custom(s, true)?,
+        EntryTarget::CustomSecond => sizes::custom(s, false)?,
+        EntryTarget::MixO2 => sizes::mix_percent(s, false)?,
+        EntryTarget::MixHe => sizes::mix_percent(s, true)?,
         EntryTarget::FillPressure => Field {
             buffer: KeypadBuffer::digits(&vm::start_text(u, s.fill.pressure), false),
             title: "Pressure read at the fill station, cylinder still warm".to_string(),

@@ -11,6 +11,7 @@ use crate::plan::rounding::next_step;
 use super::Session;
 
 mod fields;
+mod sizes;
 
 pub use fields::EntryTarget;
 
