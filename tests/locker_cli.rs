@@ -58,8 +58,9 @@ fn add_list_remove() {
         r.out
     );
     assert!(
-        r.out.contains("starts with this set"),
-        "the first set is mine"
+        !r.out.contains("mine"),
+        "the first set is not made mine without asking: {}",
+        r.out
     );
     let r = locker(
         dir,
@@ -71,6 +72,7 @@ fn add_list_remove() {
             "aluminium",
             "--note",
             "blue bands",
+            "--mine",
         ],
     );
     assert_eq!(r.code, 0, "{}", r.err);
@@ -78,15 +80,15 @@ fn add_list_remove() {
     let sets = v["sets"].as_array().unwrap();
     assert_eq!(sets.len(), 2);
     assert_eq!(sets[0]["spec"], "2x12L@232bar");
-    assert_eq!(sets[0]["mine"], true);
+    assert_eq!(sets[0]["mine"], false);
     assert_eq!(sets[1]["spec"], "2x80cuft@3000psi");
     assert_eq!(sets[1]["material"], "aluminium");
     assert_eq!(sets[1]["note"], "blue bands");
-    assert_eq!(sets[1]["mine"], false);
+    assert_eq!(sets[1]["mine"], true, "asked for with --mine");
     assert!(v["file"].as_str().unwrap().ends_with("locker.json"));
     let text = locker(dir, &["list"]).out;
     assert!(text.contains("2 sets in"), "{text}");
-    assert!(text.contains("* Twin 12s"), "{text}");
+    assert!(text.contains("* Side 80s"), "{text}");
 
     // The same name again (any case) is refused; so is a bad SPEC, showing the form.
     let r = locker(dir, &["add", "twin 12S", "2x10L@300bar"]);
@@ -125,10 +127,10 @@ fn add_list_remove() {
     let r = locker(dir, &["remove", "nobody"]);
     assert_eq!(r.code, 2);
     assert!(r.err.contains("Twin 12s, Side 80s"), "{}", r.err);
-    let r = locker(dir, &["remove", "TWIN 12s"]);
+    let r = locker(dir, &["remove", "SIDE 80s"]);
     assert_eq!(r.code, 0, "{}", r.err);
     assert!(r.out.contains("No set is marked as yours"), "{}", r.out);
-    assert_eq!(names(dir), vec!["Side 80s"]);
+    assert_eq!(names(dir), vec!["Twin 12s"]);
 }
 
 #[test]
@@ -142,9 +144,14 @@ fn export_then_import_between_two_divers() {
     ] {
         assert_eq!(locker(a.path(), &["add", name, spec]).code, 0);
     }
-    for (name, spec) in [("Twin 12s", "2x12L@232bar"), ("Deco 7", "1x5.5L@232bar")] {
-        assert_eq!(locker(b.path(), &["add", name, spec]).code, 0);
-    }
+    assert_eq!(
+        locker(b.path(), &["add", "Twin 12s", "2x12L@232bar", "--mine"]).code,
+        0
+    );
+    assert_eq!(
+        locker(b.path(), &["add", "Deco 7", "1x5.5L@232bar"]).code,
+        0
+    );
     let swap = tempfile::tempdir().unwrap();
     let file = swap.path().join("a-sets.json");
     let f = file.to_str().unwrap();

@@ -38,7 +38,8 @@ pub enum LockerAction {
         /// A note (serial, test date...), at most 60 characters.
         #[arg(long, default_value = "")]
         note: String,
-        /// Make this the set a new team starts with (the first set added is, anyway).
+        /// Make this "mine": the set a new team and an added diver start with. No set is
+        /// made mine without asking, not even the first.
         #[arg(long)]
         mine: bool,
     },
@@ -269,9 +270,8 @@ fn add(
         }
     })?;
     let id = entry.id;
-    let first = locker.entries.is_empty();
     locker.entries.push(entry);
-    if mine || first {
+    if mine {
         locker.set_mine(id);
     }
     save(store, &locker)?;
@@ -281,8 +281,8 @@ fn add(
         path.display(),
         sets_word(locker.entries.len())
     );
-    if mine || first {
-        s.push_str("A new team starts with this set.\n");
+    if mine {
+        s.push_str("It is now mine: a new team and an added diver start with this set.\n");
     }
     Ok(s)
 }

@@ -141,6 +141,10 @@ mod tests {
             });
             s.locker_save().unwrap();
         }
+        // The first set is theirs: marked mine on purpose (saving never does it).
+        if let Some(id) = s.locker.entries().first().map(|e| e.id) {
+            s.locker_make_mine(id);
+        }
         s
     }
 
