@@ -183,7 +183,8 @@ impl Session {
         let current = u.temperature_value(Temperature::from_celsius(self.settings.water_temp_c));
         let t = u.temperature(current.round() + f64::from(dir.signum()));
         let c = t.celsius();
-        if (-2.0..=40.0).contains(&c) || (c > 40.0 && dir < 0) || (c < -2.0 && dir > 0) {
+        let (lo, hi) = crate::plan::team::WATER_TEMP_RANGE_C;
+        if (lo..=hi).contains(&c) || (c > hi && dir < 0) || (c < lo && dir > 0) {
             self.remember_water_temp(t);
         }
     }

@@ -5,12 +5,10 @@ use crate::formats::team_file::TeamFile;
 use crate::plan::error::InputError;
 use crate::plan::rounding::next_step;
 use crate::plan::rounding::round_down_to_step;
-use crate::plan::{
-    Gauge, Mix, Pressure, PressureUnit, Rule, TeamInput, TeamPlan, UnitSystem, plan_team,
-};
+use crate::plan::{Gauge, Mix, Pressure, Rule, TeamInput, TeamPlan, UnitSystem, plan_team};
 use crate::storage::team_state::{TEAM_SCHEMA, TeamState};
 
-use super::readings::{Readings, Source, StartStatus};
+use super::readings::Readings;
 
 /// The gauge steps offered, per unit system.
 pub fn step_options(units: UnitSystem) -> [f64; 2] {
@@ -90,85 +88,6 @@ impl TeamController {
     /// Whether this is the demo team of invented divers.
     pub fn is_demo(&self) -> bool {
         self.demo
-    }
-
-    /// Whether each start is a reading taken today.
-    pub fn readings(&self) -> &Readings {
-        &self.readings
-    }
-
-    /// Diver `i`'s start status at `now` (unix seconds).
-    pub fn start_status(&self, i: usize, now: i64) -> StartStatus {
-        self.readings.status(i, now)
-    }
-
-    /// Whether every start may make turns at `now`.
-    pub fn turns_ready(&self, now: i64) -> bool {
-        self.readings.all_usable(now)
-    }
-
-    /// Diver `i`'s start was just read on the gauge (typed, nudged or confirmed).
-    pub fn mark_read(&mut self, i: usize, now: i64) {
-        self.readings.mark(i, now, Source::Gauge);
-    }
-
-    /// Diver `i`'s start was set from a fill prediction.
-    pub fn mark_predicted(&mut self, i: usize, now: i64) {
-        self.readings.mark(i, now, Source::Prediction);
-    }
-
-    /// Every start unread (a new team, the demo).
-    pub fn forget_readings(&mut self) {
-        self.readings = Readings::unread(self.len());
-    }
-
-    /// Give diver `i` a gauge. A change of unit makes the start unread (a reading on
-    /// one unit is not a reading on the other); it is kept as a placeholder rounded down
-    /// to the new graduation. A change of graduation keeps the reading.
-    pub fn set_gauge(&mut self, i: usize, gauge: Gauge) -> Result<(), InputError> {
-        let old = self.input.gauge_of(i);
-        let start = self.input.divers[i].start;
-        let placeholder =
-            gauge.pressure(round_down_to_step(gauge.value(start), gauge.step).max(gauge.step));
-        let unit_changed = old.unit != gauge.unit;
-        self.try_update(|t| {
-            t.divers[i].gauge = Some(gauge);
-            if unit_changed {
-                t.divers[i].start = placeholder;
-            }
-        })?;
-        if unit_changed {
-            self.readings.clear(i);
-        }
-        Ok(())
-    }
-
-    /// The next gauge in the card's cycle: 10 bar, 5 bar, 100 psi, 50 psi, then 10 bar.
-    pub fn cycle_gauge(&mut self, i: usize) -> Result<(), InputError> {
-        let g = self.input.gauge_of(i);
-        let cycle = [
-            Gauge {
-                unit: PressureUnit::Bar,
-                step: 10.0,
-            },
-            Gauge {
-                unit: PressureUnit::Bar,
-                step: 5.0,
-            },
-            Gauge {
-                unit: PressureUnit::Psi,
-                step: 100.0,
-            },
-            Gauge {
-                unit: PressureUnit::Psi,
-                step: 50.0,
-            },
-        ];
-        let at = cycle
-            .iter()
-            .position(|c| *c == g)
-            .map_or(0, |k| (k + 1) % cycle.len());
-        self.set_gauge(i, cycle[at])
     }
 
     pub fn input(&self) -> &TeamInput {
@@ -311,6 +230,7 @@ impl TeamController {
     }
 }
 
+mod gauges;
 mod roster;
 
 #[cfg(test)]

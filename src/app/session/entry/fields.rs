@@ -7,10 +7,10 @@ use crate::app::keypad::KeypadBuffer;
 use crate::app::view_models as vm;
 use crate::plan::error::{InputError, check_range, fmt_num};
 use crate::plan::team::validate_start;
-use crate::plan::{Pressure, PressureUnit, Temperature, UnitSystem, Volume};
+use crate::plan::{Pressure, PressureUnit, Volume};
 
 use super::super::Session;
-use super::{Field, Typed, apply, check, no_check, sizes};
+use super::{Field, Typed, apply, check, no_check, sizes, temperatures};
 
 /// What the open keypad is entering.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
@@ -153,42 +153,8 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             apply: apply(move |s, t| s.team.set_depth(t.value.map(|v| u.depth(v)))),
             on_done: None,
         },
-        EntryTarget::WaterTemp => Field {
-            buffer: KeypadBuffer::digits(&vm::degrees(u, input.water_temp), false),
-            title: "Water temperature of this dive: the gas cools to it, and every diver's plan uses it".to_string(),
-            unit: u.temperature_label().to_string(),
-            live: true,
-            step: None,
-            revert: None,
-            check: check(|_, t| {
-                t.number("water temperature", "enter a temperature")
-                    .map(|_| ())
-            }),
-            apply: apply(move |s, t| s.team.set_water_temp(temperature(u, t)?)),
-            on_done: None,
-        },
-        EntryTarget::DefaultWaterTemp => Field {
-            buffer: KeypadBuffer::digits(
-                &vm::degrees(u, Temperature::from_celsius(s.settings.water_temp_c)),
-                false,
-            ),
-            title: "Water temperature a new team starts with (each dive sets its own on the Team page)".to_string(),
-            unit: u.temperature_label().to_string(),
-            live: false,
-            step: None,
-            revert: None,
-            check: check(move |_, t| {
-                let v = u.temperature_value(temperature(u, t)?);
-                let lo = u.temperature_value(Temperature::from_celsius(-2.0)).floor();
-                let hi = u.temperature_value(Temperature::from_celsius(40.0)).ceil();
-                check_range("water temperature", v, lo, hi, u.temperature_label())
-            }),
-            apply: apply(move |s, t| {
-                s.remember_water_temp(temperature(u, t)?);
-                Ok(())
-            }),
-            on_done: None,
-        },
+        EntryTarget::WaterTemp => temperatures::dive_water(s),
+        EntryTarget::DefaultWaterTemp => temperatures::default_water(s),
         EntryTarget::DiverName(i) => Field {
             buffer: KeypadBuffer::letters(&input.divers.get(i)?.name, 32),
             title: format!("Name for diver {}", i + 1),
@@ -279,34 +245,11 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             }),
             on_done: None,
         },
-        EntryTarget::FillTemp => Field {
-            buffer: KeypadBuffer::digits(&vm::degrees(u, s.fill.temperature), false),
-            title: "Cylinder temperature when that pressure was read: your estimate (hand on the cylinder)".to_string(),
-            unit: u.temperature_label().to_string(),
-            live: false,
-            step: None,
-            revert: None,
-            check: check(move |_, t| {
-                let v = t.number("fill temperature", "enter a temperature")?;
-                let lo = u.temperature_value(Temperature::from_celsius(0.0)).ceil();
-                let hi = u.temperature_value(Temperature::from_celsius(60.0)).floor();
-                check_range("fill temperature", v, lo, hi, u.temperature_label())
-            }),
-            apply: apply(move |s, t| {
-                s.fill.temperature = temperature(u, t)?;
-                Ok(())
-            }),
-            on_done: None,
-        },
+        EntryTarget::FillTemp => temperatures::fill(s),
     })
 }
 
 /// The typed pressure, read in `unit`.
 fn pressure(unit: PressureUnit, t: Typed) -> Result<Pressure, InputError> {
     Ok(unit.pressure(t.number("pressure", "enter a pressure")?))
-}
-
-/// The typed temperature, in the team's unit.
-fn temperature(u: UnitSystem, t: Typed) -> Result<Temperature, InputError> {
-    Ok(u.temperature(t.number("temperature", "enter a temperature")?))
 }

@@ -12,6 +12,7 @@ use super::Session;
 
 mod fields;
 mod sizes;
+mod temperatures;
 
 pub use fields::EntryTarget;
 
