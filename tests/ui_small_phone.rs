@@ -153,7 +153,12 @@ fn every_page_works_on_a_small_phone_with_large_text() {
         s.picker.close();
         s.open_cylinder_picker(1);
     });
+    state("custom-set", false, &|s| s.open_custom_cylinders());
+    state("keypad-custom-size", true, &|s| {
+        s.open_entry(EntryTarget::CustomFirst)
+    });
     state("turns", false, &|s| {
+        s.cancel_entry();
         s.picker.close();
         s.go(Screen::Turns);
     });
@@ -176,6 +181,13 @@ fn every_page_works_on_a_small_phone_with_large_text() {
     state("keypad-locker-name", true, &|s| {
         s.open_entry(EntryTarget::LockerName)
     });
+    // Leaving the changed set asks first.
+    state("prompt-discard", false, &|s| {
+        s.key("A");
+        s.entry_done();
+        s.back();
+        assert_ne!(s.prompt, turnsheet::app::session::Prompt::None);
+    });
 
     // Everything below the fold of each scrolling page, in a window as narrow but
     // tall enough to show it all.
@@ -187,9 +199,13 @@ fn every_page_works_on_a_small_phone_with_large_text() {
         refresh_all(&app.window, &app.session.borrow());
         all.extend(problems(&app, name, false));
     };
-    tall("locker-edit (whole page)", &|s| s.cancel_entry());
+    tall("locker-edit (whole page)", &|s| {
+        s.back();
+    });
     tall("locker (whole page)", &|s| {
         s.back();
+        s.answer_prompt(1);
+        assert_eq!(s.page(), Screen::Locker);
     });
     tall("settings (whole page)", &|s| {
         s.back();
