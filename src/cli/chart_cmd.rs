@@ -87,11 +87,19 @@ pub fn chart_text(
             buddy.mix.label()
         ));
         let (mu, bu) = (c.my_gauge.label(), c.buddy_gauge.label());
+        // "Me" (the pairing chart of two sets) reads "my start", not "Me's start".
+        let whose = |name: &str| {
+            if name == "Me" {
+                "my".to_string()
+            } else {
+                format!("{name}'s")
+            }
+        };
         s.push_str(&format!(
-            "rows: {}'s start ({mu}); columns: {}'s start ({bu}); cells: {}'s turn ({mu}, on {} {mu})\n",
-            me.name,
-            buddy.name,
-            me.name,
+            "rows: {} start ({mu}); columns: {} start ({bu}); cells: {} turn ({mu}, on {} {mu})\n",
+            whose(&me.name),
+            whose(&buddy.name),
+            whose(&me.name),
             fmt_num(c.my_gauge.step)
         ));
         s.push_str(&format!("{:>w$} │", format!("{mu}\\{bu}"), w = width + 2));

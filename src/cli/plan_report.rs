@@ -175,12 +175,12 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
     let c = plan.controlling_diver();
     s.push_str(&format!(
         "\n* controlling diver: {}. {} has the least usable gas, so {} allowance sets everyone's: \
-each diver may use {:.0} {vu} going in (real gas; {:.0} {vu} by hand).\n",
+each diver may use {:.0} {vu} going in by hand ({:.0} {vu} by real gas).\n",
         c.name,
         c.name,
         possessive(&c.name),
-        u.volume_value(plan.team_allowance_real).floor(),
-        u.volume_value(plan.team_allowance_hand).floor()
+        u.volume_value(plan.team_allowance_hand).floor(),
+        u.volume_value(plan.team_allowance_real).floor()
     ));
     s.push_str(
         "Turn the dive when the FIRST diver reaches their turn pressure, or at any other limit.\n",

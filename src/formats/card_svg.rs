@@ -210,15 +210,15 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
     let mut y = y + block * n + 4.0;
     let c = plan.controlling_diver();
     let mut notes = vec![format!(
-        "{} controls: least usable gas, so {} allowance sets everyone's turn. Each diver may use {} {vu} going in (real gas; {} {vu} by hand).",
+        "{} controls: least usable gas, so {} allowance sets everyone's turn. Each diver may use {} {vu} going in by hand ({} {vu} by real gas).",
         c.name,
         if c.name.ends_with('s') {
             format!("{}'", c.name)
         } else {
             format!("{}'s", c.name)
         },
-        fmt_num(u.volume_value(plan.team_allowance_real).floor()),
         fmt_num(u.volume_value(plan.team_allowance_hand).floor()),
+        fmt_num(u.volume_value(plan.team_allowance_real).floor()),
         vu = u.volume_label()
     )];
     if plan.stress.margin.is_finite() {

@@ -113,7 +113,9 @@ pub fn hand_working(team: &TeamInput, plan: &TeamPlan, i: usize) -> HandWorking 
             let (psi, read) = match g.unit {
                 PressureUnit::Psi => (start, String::new()),
                 PressureUnit::Bar => {
-                    let psi = (start / BAR_PER_PSI + 1e-6).floor();
+                    // To a hundredth (rounded down), so the sums that follow agree with
+                    // the plan's own hand content to the decimal shown.
+                    let psi = ((start / BAR_PER_PSI) * 100.0 + 1e-6).floor() / 100.0;
                     (
                         psi,
                         format!("{} bar = {} psi; ", fmt_num(start), fmt_num(psi)),

@@ -412,8 +412,9 @@ pub fn validate_start(
         return Err(InputError::new(
             field,
             format!(
-                "{} {unit} is above 1.5 × the working pressure ({} {unit})",
+                "{} {unit} is more than 1.5 × the {} {unit} working pressure (limit {} {unit}): check the gauge and bar or psi",
                 fmt_num(v.round()),
+                fmt_num((g.value(working) * 10.0).floor() / 10.0),
                 fmt_num(g.value(Pressure::from_bar(cap)).floor())
             ),
         ));

@@ -93,6 +93,7 @@ mod tests {
     fn pause_and_stop_save_everything() {
         let dir = tempfile::tempdir().unwrap();
         let mut s = Session::open(Store::new(dir.path()));
+        s.confirm_start(0);
         s.nudge_start(0, 1);
         std::fs::remove_file(dir.path().join("last-team.json")).unwrap();
         for ev in [Lifecycle::SaveState, Lifecycle::Pause, Lifecycle::Stop] {

@@ -26,6 +26,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
     a.set_diver(c.diver.into());
     a.set_teammate(c.teammate.into());
     a.set_unit(c.unit.into());
+    a.set_column_unit(c.column_unit.into());
     a.set_columns(strings(c.columns));
     a.set_planned_column(c.planned_column);
     a.set_rows(model(

@@ -30,6 +30,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
                 hand: r.hand.clone().into(),
                 minutes: r.minutes.clone().into(),
                 controlling: r.controlling,
+                predicted: r.predicted,
                 stage: r.stage.clone().into(),
             })
             .collect(),

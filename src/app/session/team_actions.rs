@@ -60,9 +60,19 @@ impl Session {
     }
 
     /// The − and + beside a start pressure: one graduation down or up. Setting the
-    /// start by hand is entering a reading.
+    /// start by hand is entering a reading. A start not read today (never, or entered
+    /// earlier) is not stepped from: the keypad opens, so the number comes from the
+    /// gauge ("Still reads N" confirms an earlier one as it is).
     pub fn nudge_start(&mut self, i: usize, dir: i32) {
+        use crate::app::readings::StartStatus;
         if i < self.team.len() {
+            if matches!(
+                self.team.start_status(i, crate::app::readings::now()),
+                StartStatus::Missing | StartStatus::Old { .. }
+            ) {
+                self.open_entry(super::EntryTarget::Start(i));
+                return;
+            }
             let r = self.team.nudge_start(i, dir);
             if r.is_ok() {
                 self.team.mark_read(i, crate::app::readings::now());
@@ -210,6 +220,7 @@ mod tests {
     #[test]
     fn a_refused_edit_is_reported_and_the_plan_stays() {
         let (_dir, mut s) = session();
+        s.confirm_start(0);
         // Step Ines's start up until it passes 1.5 × the working pressure.
         let mut last = s.team.plan().clone();
         for _ in 0..40 {
@@ -237,6 +248,32 @@ mod tests {
         s.new_team();
         assert!(!s.team.is_demo());
         assert_eq!(crate::app::view_models::demo_note(&s), "");
+    }
+
+    #[test]
+    fn the_steppers_of_a_start_not_read_today_open_the_keypad() {
+        let (_dir, mut s) = session();
+        let before = s.team.input().divers[1].start;
+        s.nudge_start(1, 1);
+        assert_eq!(
+            s.team.input().divers[1].start,
+            before,
+            "no number stepped from"
+        );
+        assert_eq!(
+            s.entry.as_ref().map(|e| e.target()),
+            Some(crate::app::session::EntryTarget::Start(1))
+        );
+        assert_eq!(
+            s.entry.as_ref().unwrap().buffer().text(),
+            "",
+            "the keypad opens empty: read the gauge"
+        );
+        s.cancel_entry();
+        s.confirm_start(1);
+        s.nudge_start(1, 1);
+        assert!(s.entry.is_none());
+        assert!(s.team.input().divers[1].start.bar() > before.bar());
     }
 
     #[test]

@@ -83,7 +83,7 @@ mod tests {
         assert_eq!(s.team.to_state().team, before.team);
 
         s.new_team();
-        s.nudge_start(0, 1);
+        s.toggle_water();
         assert_eq!(s.undo_text(), "", "an edit after the change ends the offer");
         let edited = s.team.to_state();
         s.undo();

@@ -67,7 +67,10 @@ pub struct ChartRowVm {
 pub struct ChartVm {
     pub diver: String,
     pub teammate: String,
+    /// The unit of the rows and cells (my gauge).
     pub unit: String,
+    /// The unit of the columns (the teammate's gauge).
+    pub column_unit: String,
     pub columns: Vec<String>,
     /// The column of the teammate's planned start, or −1.
     pub planned_column: i32,
@@ -79,17 +82,18 @@ pub struct ChartVm {
 pub fn chart(s: &Session) -> Option<ChartVm> {
     let input = s.team.input();
     let chart = s.chart.chart(input)?;
-    let u = input.units;
+    // Rows and cells on my gauge, columns on the teammate's, each in its own unit.
     // Conservative reading: own start rounded UP to a row, the teammate's DOWN to a column
     // (a higher own start or a lower teammate start never lowers the turn).
-    let mine = u.pressure_value(input.divers[chart.me].start);
-    let theirs = u.pressure_value(input.divers[chart.buddy].start);
+    let mine = chart.my_gauge.value(input.divers[chart.me].start);
+    let theirs = chart.buddy_gauge.value(input.divers[chart.buddy].start);
     let my_row = chart.my_starts.iter().rposition(|x| *x >= mine - 1e-9);
     let their_col = chart.buddy_starts.iter().position(|x| *x <= theirs + 1e-9);
     Some(ChartVm {
         diver: input.divers[chart.me].name.clone(),
         teammate: input.divers[chart.buddy].name.clone(),
-        unit: u.pressure_label().to_string(),
+        unit: chart.my_gauge.label().to_string(),
+        column_unit: chart.buddy_gauge.label().to_string(),
         columns: chart.buddy_starts.iter().map(|v| fmt_num(*v)).collect(),
         planned_column: their_col.map(|c| c as i32).unwrap_or(-1),
         rows: chart
@@ -138,5 +142,35 @@ mod tests {
         assert_eq!(c.rows.iter().filter(|r| r.planned).count(), 1);
         assert!(c.planned_column >= 0);
         assert_eq!(c.rows[0].cells.len(), c.columns.len());
+    }
+
+    #[test]
+    fn a_chart_across_bar_and_psi_boxes_both_planned_starts_in_their_units() {
+        let dir = tempfile::tempdir().unwrap();
+        let mut s = Session::open(Store::new(dir.path()));
+        // Bram (the teammate of Ines's chart) reads psi.
+        s.cycle_gauge(1);
+        s.cycle_gauge(1);
+        let c = chart(&s).unwrap();
+        assert_eq!((c.unit.as_str(), c.column_unit.as_str()), ("bar", "psi"));
+        let bram = s
+            .team
+            .input()
+            .gauge_of(1)
+            .value(s.team.input().divers[1].start);
+        let col = c.planned_column;
+        assert!(col >= 0, "Bram's planned column is boxed");
+        let v: f64 = c.columns[col as usize].parse().unwrap();
+        assert!(v <= bram + 1e-9, "the column read is at or below his start");
+        // Bram's own chart: rows in psi, the boxed row at or above his start.
+        s.chart.cycle(3, false, 1);
+        let c = chart(&s).unwrap();
+        assert_eq!((c.unit.as_str(), c.column_unit.as_str()), ("psi", "bar"));
+        let row = c.rows.iter().position(|r| r.planned).unwrap();
+        let v: f64 = c.rows[row].start.parse().unwrap();
+        assert!(
+            v >= bram - 1e-9 && v - bram < 100.0,
+            "{v} for a start of {bram}"
+        );
     }
 }

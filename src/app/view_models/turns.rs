@@ -43,8 +43,10 @@ pub struct TurnRowVm {
     pub hand: String,
     pub minutes: String,
     pub controlling: bool,
+    /// The turn comes from a start predicted from the fill, not read in the water.
+    pub predicted: bool,
     pub stage: String,
-    /// Short form for the buddy view: "drop stage 160".
+    /// Short form for the buddy view: "drop stage at 160 bar".
     pub stage_short: String,
 }
 
@@ -117,7 +119,8 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
         .enumerate()
         .map(|(i, d)| {
             let g = d.gauge;
-            let predicted = s.team.start_status(i, now) == StartStatus::Predicted;
+            let status = s.team.start_status(i, now);
+            let predicted = status == StartStatus::Predicted;
             let hand = hand_working(input, plan, i);
             TurnRowVm {
                 name: d.name.clone(),
@@ -128,13 +131,18 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
                 },
                 unit: g.label().to_string(),
                 detail: format!(
-                    "Start {} {}{} · {} · {} · gauge {}",
-                    reading(g, d.start),
-                    g.label(),
-                    if predicted {
-                        " (predicted, not read)"
-                    } else {
-                        ""
+                    "{} · {} · {} · gauge {}",
+                    match status {
+                        StartStatus::Missing => "Start not read today".to_string(),
+                        StartStatus::Old { at } =>
+                            format!("Start entered {}: check the gauge", when_text(at, now)),
+                        StartStatus::Predicted => format!(
+                            "Start {} {} (predicted from the fill, not read)",
+                            reading(g, d.start),
+                            g.label()
+                        ),
+                        StartStatus::Fresh =>
+                            format!("Start {} {}", reading(g, d.start), g.label()),
                     },
                     s.team.labels()[i],
                     input.divers[i].mix.label(),
@@ -157,7 +165,9 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
                     ),
                     _ => String::new(),
                 },
-                controlling: d.controlling,
+                // Who controls follows from the starts: only once every one is read.
+                controlling: ready && d.controlling,
+                predicted: ready && predicted,
                 stage: if ready {
                     stage_text(s, i)
                 } else {
@@ -169,7 +179,11 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
                         parts.push("start predicted".to_string());
                     }
                     if let (Some(st), true) = (&d.stage, ready) {
-                        parts.push(format!("drop stage {}", turn_text(st.drop_shown_value)));
+                        parts.push(format!(
+                            "drop stage at {} {}",
+                            turn_text(st.drop_shown_value),
+                            g.label()
+                        ));
                     }
                     parts.join(" · ")
                 },
@@ -178,24 +192,38 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
         .collect()
 }
 
-/// The rule line: the rule, the water and what each diver may use going in.
+/// The rule line: the rule, the water and what each diver may use going in. While a
+/// start is not read today, only the rule and the water: who controls and how much each
+/// may use follow from the starts.
 pub fn rule_text(s: &Session) -> String {
     let input = s.team.input();
     let u = input.units;
     let plan = s.team.plan();
     let c = plan.controlling_diver();
-    format!(
-        "Rule of {} · water {} · each diver may use {} going in (real gas; {} by hand). {} controls: {} has the least usable gas, and that sets everyone's allowance.",
+    let head = format!(
+        "Rule of {} · water {}",
         input.rule.name(),
-        temperature_text(u, input.water_temp),
-        volume_down_text(u, plan.team_allowance_real),
+        temperature_text(u, input.water_temp)
+    );
+    if starts_blocking(s).is_some() {
+        return format!(
+            "{head}. Who controls and how much each diver may use need every start read in the water."
+        );
+    }
+    format!(
+        "{head} · each diver may use {} going in by hand ({} by real gas; the turns take the more careful of the two). {} controls: {} has the least usable gas, and that sets everyone's allowance.",
         volume_down_text(u, plan.team_allowance_hand),
+        volume_down_text(u, plan.team_allowance_real),
         c.name,
         c.name,
     )
 }
 
+/// The out-of-gas check, once every start is read today.
 pub fn margin_text(s: &Session) -> String {
+    if starts_blocking(s).is_some() {
+        return "Needs every start read in the water.".to_string();
+    }
     let plan = s.team.plan();
     let at_turn = plan.margin_at_first_turn_text();
     if at_turn.is_empty() {
@@ -206,6 +234,9 @@ pub fn margin_text(s: &Session) -> String {
 }
 
 pub fn first_text(s: &Session) -> String {
+    if starts_blocking(s).is_some() {
+        return String::new();
+    }
     let plan = s.team.plan();
     match plan.first_to_turn {
         Some(i) => format!(

@@ -61,11 +61,20 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                     },
                     false,
                 ),
-                title: format!(
-                    "Start pressure for {} ({}), read in the water",
-                    d.name,
-                    s.team.labels()[i]
-                ),
+                title: {
+                    let label = &s.team.labels()[i];
+                    // Two or more cylinders not on a manifold each have a gauge.
+                    let separate = d.cylinders.count > 1 && !label.starts_with("Twin");
+                    format!(
+                        "Start pressure for {} ({label}), read in the water{}",
+                        d.name,
+                        if separate {
+                            ". Balance the cylinders first; enter what every gauge reads"
+                        } else {
+                            ""
+                        }
+                    )
+                },
                 unit: g.label().to_string(),
                 live: true,
                 step: Some(g.step),
