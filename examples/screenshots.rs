@@ -61,6 +61,9 @@ fn main() {
         s.back();
         for i in 0..s.team.len() {
             s.confirm_start(i);
+            if s.team.input().divers[i].stage.is_some() {
+                s.team.mark_stage_read(i, turnsheet::app::readings::now());
+            }
         }
     });
     shot("03-keypad", &|s| {

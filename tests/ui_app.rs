@@ -88,6 +88,27 @@ fn read_every_start(app: &App) {
         type_keys(app, &digits);
         press(app, "done");
     }
+    // Each stage's gauge too: its drop pressure needs a stage start read today.
+    let stages: Vec<(String, String)> = {
+        let s = app.session.borrow();
+        let input = s.team.input();
+        (0..input.divers.len())
+            .filter_map(|i| {
+                let st = input.divers[i].stage.as_ref()?;
+                let g = input.gauge_of(i);
+                Some((
+                    input.divers[i].name.clone(),
+                    format!("{}", (g.value(st.start) + 1e-6).floor() as i64),
+                ))
+            })
+            .collect()
+    };
+    for (name, digits) in stages {
+        press(app, &format!("stage pressure of {name}"));
+        press(app, "clear");
+        type_keys(app, &digits);
+        press(app, "done");
+    }
 }
 
 fn open_acknowledged(dir: &std::path::Path) -> App {

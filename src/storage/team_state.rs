@@ -23,6 +23,9 @@ pub struct TeamState {
     /// files have none, so their starts count as unread.
     #[serde(default)]
     pub start_readings: Vec<Option<StartReading>>,
+    /// The same for each diver's stage start (null: no stage, or not read).
+    #[serde(default)]
+    pub stage_readings: Vec<Option<StartReading>>,
     /// The bundled demo team with invented divers, until the user starts a team of
     /// their own or names a diver.
     #[serde(default, skip_serializing_if = "std::ops::Not::not")]

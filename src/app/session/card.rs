@@ -19,6 +19,18 @@ impl Session {
             self.status.push(format!("No card yet. {why}"));
             return None;
         }
+        let stages = self.team.stages_blocking(now);
+        if !stages.is_empty() {
+            let names: Vec<&str> = stages
+                .iter()
+                .map(|&i| self.team.input().divers[i].name.as_str())
+                .collect();
+            self.status.push(format!(
+                "No card yet: read the stage gauge of {} in the water.",
+                names.join(", ")
+            ));
+            return None;
+        }
         let input = self.team.input();
         let charts = match team_charts(input, 2, 7) {
             Ok(c) => c,
@@ -73,6 +85,17 @@ mod tests {
         );
         for i in 0..s.team.len() {
             s.confirm_start(i);
+        }
+        assert_eq!(s.save_card(), None, "the demo's stage starts are unread");
+        assert!(
+            s.status.text().contains("stage gauge"),
+            "{}",
+            s.status.text()
+        );
+        for i in 0..s.team.len() {
+            if s.team.input().divers[i].stage.is_some() {
+                s.team.mark_stage_read(i, crate::app::readings::now());
+            }
         }
         let path = s.save_card().expect("a card");
         let svg = std::fs::read_to_string(&path).unwrap();

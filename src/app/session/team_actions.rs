@@ -28,6 +28,7 @@ pub(super) fn demo_team(settings: &Settings) -> TeamController {
         stage_labels: DEMO_STAGE_LABELS.iter().map(|s| s.to_string()).collect(),
         // The demo's starts were read by nobody.
         start_readings: Vec::new(),
+        stage_readings: Vec::new(),
         demo: true,
     };
     let mut t = TeamController::from_state(&state).expect("the bundled demo team plans");
@@ -274,6 +275,37 @@ mod tests {
         s.nudge_start(1, 1);
         assert!(s.entry.is_none());
         assert!(s.team.input().divers[1].start.bar() > before.bar());
+    }
+
+    #[test]
+    fn a_stage_drop_needs_the_stage_gauge_read_today() {
+        use crate::app::readings::StartStatus;
+        use crate::app::session::EntryTarget;
+        let (dir, mut s) = session();
+        for i in 0..s.team.len() {
+            s.confirm_start(i);
+        }
+        // Ines carries a stage in the demo; nobody has read its gauge.
+        let now = crate::app::readings::now();
+        assert_eq!(s.team.stage_status(0, now), Some(StartStatus::Missing));
+        assert_eq!(s.team.stage_status(1, now), None, "Bram has no stage");
+        let text = crate::app::view_models::stage_text(&s, 0);
+        assert!(text.contains("read Ines's stage gauge"), "{text}");
+        s.open_entry(EntryTarget::StageStart(0));
+        assert_eq!(s.entry.as_ref().unwrap().buffer().text(), "", "opens empty");
+        for k in ["1", "9", "0"] {
+            s.key(k);
+        }
+        s.entry_done();
+        assert_eq!(s.team.stage_status(0, now), Some(StartStatus::Fresh));
+        let text = crate::app::view_models::stage_text(&s, 0);
+        assert!(text.starts_with("Drop stage at"), "{text}");
+        // Kept with the team; a new stage set is unread again.
+        let again = Session::open(Store::new(dir.path()));
+        assert_eq!(again.team.stage_status(0, now), Some(StartStatus::Fresh));
+        let set = s.team.input().divers[0].stage.as_ref().unwrap().cylinders;
+        s.team.set_stage_cylinders(0, Some(set), "Another").unwrap();
+        assert_eq!(s.team.stage_status(0, now), Some(StartStatus::Missing));
     }
 
     #[test]

@@ -34,9 +34,28 @@ impl TeamController {
         self.readings.mark(i, now, Source::Prediction);
     }
 
+    /// Diver `i`'s stage start status at `now`; None without a stage.
+    pub fn stage_status(&self, i: usize, now: i64) -> Option<StartStatus> {
+        self.input.divers.get(i)?.stage.as_ref()?;
+        Some(self.stage_readings.status(i, now))
+    }
+
+    /// Diver `i`'s stage start was just read on the gauge.
+    pub fn mark_stage_read(&mut self, i: usize, now: i64) {
+        self.stage_readings.mark(i, now, Source::Gauge);
+    }
+
+    /// The divers whose stage start is not a reading taken today, in team order.
+    pub fn stages_blocking(&self, now: i64) -> Vec<usize> {
+        (0..self.len())
+            .filter(|&i| self.stage_status(i, now).is_some_and(|st| !st.usable()))
+            .collect()
+    }
+
     /// Every start unread (a new team, the demo).
     pub fn forget_readings(&mut self) {
         self.readings = Readings::unread(self.len());
+        self.stage_readings = Readings::unread(self.len());
     }
 
     /// Give diver `i` a gauge. A change of unit makes the start unread (a reading on
@@ -56,6 +75,7 @@ impl TeamController {
         })?;
         if unit_changed {
             self.readings.clear(i);
+            self.stage_readings.clear(i);
         }
         Ok(())
     }

@@ -26,6 +26,8 @@ pub struct TeamController {
     plan: TeamPlan,
     /// Whether each start is a reading taken today.
     readings: Readings,
+    /// The same for each diver's stage start.
+    stage_readings: Readings,
     /// The demo team of invented divers (until a new team or a diver is named).
     demo: bool,
 }
@@ -57,6 +59,7 @@ impl TeamController {
             labels,
             stage_labels,
             plan,
+            stage_readings: readings.clone(),
             readings,
             demo: false,
         })
@@ -65,6 +68,7 @@ impl TeamController {
     pub fn from_state(state: &TeamState) -> Result<Self, InputError> {
         let mut t = Self::new(state.team.to_input()?, state.cylinder_labels.clone())?;
         t.readings = Readings::from_saved(&state.start_readings, t.len());
+        t.stage_readings = Readings::from_saved(&state.stage_readings, t.len());
         t.demo = state.demo;
         for (i, l) in state.stage_labels.iter().enumerate() {
             if i < t.stage_labels.len() && !l.is_empty() && t.input.divers[i].stage.is_some() {
@@ -81,6 +85,7 @@ impl TeamController {
             cylinder_labels: self.labels.clone(),
             stage_labels: self.stage_labels.clone(),
             start_readings: self.readings.saved().to_vec(),
+            stage_readings: self.stage_readings.saved().to_vec(),
             demo: self.demo,
         }
     }

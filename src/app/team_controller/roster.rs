@@ -69,6 +69,7 @@ impl TeamController {
             None => {
                 self.try_update(|t| t.divers[i].stage = None)?;
                 self.stage_labels[i].clear();
+                self.stage_readings.clear(i);
             }
             Some(set) => {
                 let u = self.input.units;
@@ -89,6 +90,8 @@ impl TeamController {
                     })
                 })?;
                 self.stage_labels[i] = label.to_string();
+                // Another stage: its gauge has not been read.
+                self.stage_readings.clear(i);
             }
         }
         Ok(())
@@ -137,6 +140,7 @@ impl TeamController {
         self.stage_labels.push(String::new());
         // The start is a placeholder until someone reads the gauge in the water.
         self.readings.push_unread();
+        self.stage_readings.push_unread();
         Ok(())
     }
 
@@ -153,6 +157,7 @@ impl TeamController {
         self.labels.remove(i);
         self.stage_labels.remove(i);
         self.readings.remove(i);
+        self.stage_readings.remove(i);
         Ok(())
     }
 

@@ -114,11 +114,12 @@ pub fn diver_cards(s: &Session) -> Vec<DiverCardVm> {
                     .as_ref()
                     .map(|st| st.mix.label())
                     .unwrap_or_default(),
-                stage_start: d
-                    .stage
-                    .as_ref()
-                    .map(|st| reading(g, st.start))
-                    .unwrap_or_default(),
+                // A stage start nobody read shows "—", as a main start does.
+                stage_start: match (&d.stage, s.team.stage_status(i, now)) {
+                    (Some(_), Some(StartStatus::Missing)) => "—".to_string(),
+                    (Some(st), _) => reading(g, st.start),
+                    _ => String::new(),
+                },
             }
         })
         .collect()

@@ -12,6 +12,20 @@ use crate::plan::hand_check::{hand_working, turn_sentence};
 pub fn stage_text(s: &Session, i: usize) -> String {
     let plan = s.team.plan();
     let g = plan.divers[i].gauge;
+    let name = &plan.divers[i].name;
+    // A drop pressure only from a stage start read today.
+    match s.team.stage_status(i, now()) {
+        Some(StartStatus::Missing) => {
+            return format!("Stage drop: read {name}'s stage gauge in the water first.");
+        }
+        Some(StartStatus::Old { at }) => {
+            return format!(
+                "Stage drop: the stage start was entered {}; read the stage gauge again.",
+                when_text(at, now())
+            );
+        }
+        _ => {}
+    }
     match (&plan.divers[i].stage, &s.team.input().divers[i].stage) {
         (Some(st), Some(si)) => format!(
             "Drop stage at {} {u} ({}, {}, start {} {u}; set by {}){}",
@@ -178,7 +192,11 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
                     if predicted {
                         parts.push("start predicted".to_string());
                     }
-                    if let (Some(st), true) = (&d.stage, ready) {
+                    let stage_read = s.team.stage_status(i, now).is_some_and(|st| st.usable());
+                    if d.stage.is_some() && ready && !stage_read {
+                        parts.push("stage: read its gauge".to_string());
+                    }
+                    if let (Some(st), true) = (&d.stage, ready && stage_read) {
                         parts.push(format!(
                             "drop stage at {} {}",
                             turn_text(st.drop_shown_value),

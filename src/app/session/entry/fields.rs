@@ -98,8 +98,18 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             let d = input.divers.get(i)?;
             let st = d.stage.as_ref()?;
             let g = input.gauge_of(i);
+            // A stage nobody read today opens empty, as a main start does.
+            let unread = s.team.stage_status(i, crate::app::readings::now())
+                == Some(crate::app::readings::StartStatus::Missing);
             Field {
-                buffer: KeypadBuffer::digits(&vm::reading(g, st.start), false),
+                buffer: KeypadBuffer::digits(
+                    &if unread {
+                        String::new()
+                    } else {
+                        vm::reading(g, st.start)
+                    },
+                    false,
+                ),
                 title: format!(
                     "Stage pressure for {} ({}), read in the water",
                     d.name,
@@ -108,7 +118,6 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                 unit: g.label().to_string(),
                 live: true,
                 step: None,
-                revert: None,
                 check: check(move |s, t| {
                     let v =
                         t.number("stage start", "enter the stage pressure read in the water")?;
@@ -119,7 +128,13 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                     validate_start(g, "stage start", g.pressure(v), working)
                 }),
                 apply: apply(move |s, t| s.team.set_stage_start(i, pressure(g.unit, t)?)),
-                on_done: None,
+                // The plan goes back to the stage start it had, even when the keypad
+                // opened empty. Done is reading the stage gauge now.
+                revert: Some(vm::reading(g, st.start)),
+                on_done: Some(apply(move |s, _| {
+                    s.team.mark_stage_read(i, crate::app::readings::now());
+                    Ok(())
+                })),
             }
         }
         EntryTarget::Sac(i) => {
