@@ -30,11 +30,13 @@ fn press(app: &App, label: &str) {
     find(app, label).invoke_accessible_default_action();
 }
 
+/// The accessible value, with no-break spaces (kept between numbers and units) read as
+/// spaces.
 fn value(app: &App, label: &str) -> String {
     find(app, label)
         .accessible_value()
         .unwrap_or_default()
-        .to_string()
+        .replace('\u{a0}', " ")
 }
 
 fn type_keys(app: &App, keys: &str) {

@@ -30,7 +30,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
         Some(k) => {
             a.set_open(true);
             a.set_letters(k.letters);
-            a.set_title(k.title.into());
+            a.set_title(vm::keep_units_together(&k.title).into());
             a.set_display(k.display.into());
             a.set_unit(k.unit.into());
             a.set_reason(k.reason.into());

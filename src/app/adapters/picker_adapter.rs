@@ -54,7 +54,7 @@ fn rows(rows: Vec<vm::PickRowVm>) -> slint::ModelRc<PickRow> {
         rows.into_iter()
             .map(|r| PickRow {
                 title: r.title.into(),
-                detail: r.detail.into(),
+                detail: vm::keep_units_together(&r.detail).into(),
                 mine: r.mine,
                 count: r.count.into(),
                 index: r.index as i32,
@@ -87,7 +87,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
             second_name: c.second_name.into(),
             first_value: c.first_value.into(),
             second_value: c.second_value.into(),
-            summary: c.summary.into(),
+            summary: vm::keep_units_together(&c.summary).into(),
             problem: c.problem.into(),
         });
     }

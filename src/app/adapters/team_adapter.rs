@@ -69,7 +69,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
         .into_iter()
         .map(|c| DiverCard {
             name: c.name.into(),
-            cylinders: c.cylinders.into(),
+            cylinders: vm::keep_units_together(&c.cylinders).into(),
             mix: c.mix.into(),
             start: c.start.into(),
             unit: c.unit.into(),
@@ -95,6 +95,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
     a.set_depth_text(p.depth_text.into());
     a.set_water_text(p.water_text.into());
     a.set_water_temp(p.water_temp.into());
+    a.set_settings_summary(vm::keep_units_together(&p.settings_summary).into());
     a.set_undo_text(p.undo.into());
     a.set_can_add(p.can_add);
     a.set_can_remove(p.can_remove);

@@ -25,18 +25,18 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
                 name: r.name.clone().into(),
                 turn: r.turn.clone().into(),
                 unit: r.unit.clone().into(),
-                detail: r.detail.clone().into(),
-                set_by: r.set_by.clone().into(),
-                hand: r.hand.clone().into(),
-                minutes: r.minutes.clone().into(),
+                detail: vm::keep_units_together(&r.detail).into(),
+                set_by: vm::keep_units_together(&r.set_by).into(),
+                hand: vm::keep_units_together(&r.hand).into(),
+                minutes: vm::keep_units_together(&r.minutes).into(),
                 controlling: r.controlling,
                 predicted: r.predicted,
-                stage: r.stage.clone().into(),
+                stage: vm::keep_units_together(&r.stage).into(),
             })
             .collect(),
     ));
-    a.set_rule_text(vm::rule_text(s).into());
-    a.set_margin_text(vm::margin_text(s).into());
+    a.set_rule_text(vm::keep_units_together(&vm::rule_text(s)).into());
+    a.set_margin_text(vm::keep_units_together(&vm::margin_text(s)).into());
     a.set_warnings(strings(vm::warnings(s)));
     a.set_first_text(vm::first_text(s).into());
     let blocking = vm::starts_blocking(s).unwrap_or_default();
@@ -51,7 +51,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
                 turn: r.turn.clone().into(),
                 unit: r.unit.clone().into(),
                 controlling: r.controlling,
-                stage: r.stage_short.clone().into(),
+                stage: vm::keep_units_together(&r.stage_short).into(),
             })
             .collect(),
     ));

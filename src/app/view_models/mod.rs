@@ -37,6 +37,40 @@ pub use turns::{
 /// Float noise tolerated when a value is read as whole units.
 const NOISE: f64 = 1e-6;
 
+/// Units that must stay on the line of their number.
+const UNITS: [&str; 12] = [
+    "L/min", "cu ft", "bar", "psi", "min", "°C", "°F", "L", "m", "ft", "×", "%",
+];
+
+/// The same text with a no-break space between each number and its unit (and inside
+/// "cu ft"), so a narrow screen never puts "232" on one line and "bar" on the next.
+pub fn keep_units_together(text: &str) -> String {
+    const NBSP: char = '\u{a0}';
+    let text = text.replace("cu ft", "cu\u{a0}ft");
+    let chars: Vec<char> = text.chars().collect();
+    let mut out = String::with_capacity(text.len());
+    for (k, &c) in chars.iter().enumerate() {
+        let after_number = k > 0 && chars[k - 1].is_ascii_digit();
+        if c == ' ' && after_number {
+            let rest: String = chars[k + 1..].iter().take(8).collect();
+            let rest = rest.replace('\u{a0}', " ");
+            let unit = UNITS.iter().any(|u| {
+                rest.starts_with(u)
+                    && rest[u.len()..]
+                        .chars()
+                        .next()
+                        .is_none_or(|n| !n.is_alphanumeric())
+            });
+            if unit {
+                out.push(NBSP);
+                continue;
+            }
+        }
+        out.push(c);
+    }
+    out
+}
+
 /// A value rounded down to a whole unit, counting float noise just below a whole
 /// number as that number (a gauge reading of 217.9999999 bar is 218).
 pub fn whole_down(value: f64) -> f64 {
@@ -184,6 +218,19 @@ pub fn capitalised(s: &str) -> String {
 #[cfg(test)]
 mod tests {
     use super::*;
+
+    #[test]
+    fn numbers_keep_their_units() {
+        let t = keep_units_together("Twin 12 L 232 bar · 2 × 77.4 cu ft 3000 psi; 12 Liters");
+        assert_eq!(
+            t,
+            "Twin 12\u{a0}L 232\u{a0}bar · 2\u{a0}× 77.4\u{a0}cu\u{a0}ft 3000\u{a0}psi; 12 Liters"
+        );
+        assert_eq!(
+            keep_units_together("about 23 min to turn"),
+            "about 23\u{a0}min to turn"
+        );
+    }
 
     #[test]
     fn display_rounding_is_conservative() {

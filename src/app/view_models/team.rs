@@ -19,6 +19,8 @@ pub struct TeamPageVm {
     pub water_text: String,
     /// The water temperature of this dive.
     pub water_temp: String,
+    /// The dive's settings in one line, for the folded settings button.
+    pub settings_summary: String,
     /// "Bram removed." while the last removal or new team can be undone; else empty.
     pub undo: String,
     pub can_add: bool,
@@ -36,6 +38,17 @@ pub fn team_page(s: &Session) -> TeamPageVm {
         depth_text: depth_label(s),
         water_text: water_text(s),
         water_temp: water_temp_text(s),
+        settings_summary: format!(
+            "{} · {} steps · {} {} · {}",
+            super::rule_symbols()[rule_index(input.rule) as usize],
+            step_labels(input.units)
+                .get(step_index(input.units, input.gauge_step) as usize)
+                .cloned()
+                .unwrap_or_else(|| format!("{}", input.gauge_step)),
+            depth_label(s),
+            water_text(s).to_lowercase(),
+            water_temp_text(s)
+        ),
         undo: s.undo_text().to_string(),
         can_add: s.team.can_add(),
         can_remove: s.team.can_remove(),
