@@ -521,3 +521,22 @@ fn a_byte_order_mark_is_not_an_error() {
     assert_eq!(code, 0, "{err}");
     assert!(out.contains("Ines"), "{out}");
 }
+
+#[test]
+fn a_card_without_a_date_says_when_it_was_made() {
+    let out = bin().arg("card").arg(demo_path()).output().unwrap();
+    assert_eq!(out.status.code(), Some(0));
+    let svg = String::from_utf8_lossy(&out.stdout);
+    let year = chrono::Local::now().format("%Y").to_string();
+    assert!(svg.contains("made "), "no date on the card");
+    assert!(svg.contains(&year), "no year on the card");
+    let out = bin()
+        .args(["card", demo_str().as_str(), "--date", "5 Dec"])
+        .output()
+        .unwrap();
+    let svg = String::from_utf8_lossy(&out.stdout);
+    assert!(
+        svg.contains("5 Dec") && !svg.contains("made "),
+        "the date given is kept"
+    );
+}

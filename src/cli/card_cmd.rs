@@ -24,7 +24,8 @@ pub struct CardArgs {
     /// The dive's name, printed on top.
     #[arg(long)]
     pub dive: Option<String>,
-    /// The date, printed on top as written.
+    /// The date, printed on top as written (default: when the card is made, so an old
+    /// card never looks current).
     #[arg(long)]
     pub date: Option<String>,
 }
@@ -43,10 +44,13 @@ pub fn card_text(args: &CardArgs) -> Result<String, InputError> {
             return Err(InputError::new(flag, "at most 40 characters"));
         }
     }
-    let heading = CardHeading {
-        dive: args.dive.clone(),
-        date: args.date.clone(),
-    };
+    let heading =
+        CardHeading {
+            dive: args.dive.clone(),
+            date: Some(args.date.clone().unwrap_or_else(|| {
+                format!("made {}", chrono::Local::now().format("%-d %b %Y %H:%M"))
+            })),
+        };
     Ok(card_svg(&heading, &team, &plan, &charts))
 }
 
