@@ -688,6 +688,15 @@ fn stages_get_drop_pressures_matching_the_core() {
             .any(|w| w.contains("Only one diver carries a stage")),
         "{warnings:?}"
     );
+    // Warnings come before the turn cards, where nobody can miss them.
+    let first_warning = ElementHandle::find_by_accessible_label(&app.window, "warning")
+        .map(|w| w.absolute_position().y)
+        .fold(f32::INFINITY, f32::min);
+    let first_card = find(&app, "turn of Ines").absolute_position().y;
+    assert!(
+        first_warning < first_card,
+        "{first_warning} vs {first_card}"
+    );
 }
 
 #[test]
