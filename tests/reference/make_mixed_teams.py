@@ -119,14 +119,19 @@ def match(supplies, fraction, t_k):
     return out
 
 
-def plan(team):
+FRACTIONS = {"halves": 1 / 2, "thirds": 1 / 3, "quarters": 1 / 4, "fifths": 1 / 5, "sixths": 1 / 6}
+
+
+def team_supplies(team):
+    """The team file read for matching: water temperature (K), the rule's fraction, each
+    diver's main supply, the stages and whose each stage is (index into the divers)."""
     units = team["units"]
     team_unit = "bar" if units == "metric" else "psi"
     team_step = team.get("gauge_step", 10 if units == "metric" else 100)
     wt = team.get("water_temp", 20 if units == "metric" else 68)
     t_c = wt if units == "metric" else (wt - 32.0) * 5.0 / 9.0
     t_k = t_c + 273.15
-    fraction = {"thirds": 1 / 3, "quarters": 1 / 4, "fifths": 1 / 5, "sixths": 1 / 6, "halves": 1 / 2}[team["rule"]]
+    fraction = FRACTIONS[team["rule"]]
     mains, stages, stage_of = [], [], []
     for i, d in enumerate(team["divers"]):
         g = d.get("gauge")
@@ -139,6 +144,11 @@ def plan(team):
             stages.append({"cyl": st["cylinders"], "mix": st.get("mix", {}), "start_bar": to_bar(st["start"], unit),
                            "unit": unit, "step": step})
             stage_of.append(i)
+    return t_k, fraction, mains, stages, stage_of
+
+
+def plan(team):
+    t_k, fraction, mains, stages, stage_of = team_supplies(team)
     main = match(mains, fraction, t_k)
     result = []
     for i, d in enumerate(team["divers"]):

@@ -24,9 +24,7 @@ sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
 
 import CoolProp.CoolProp as CP  # noqa: E402
 
-from make_mixed_teams import ATM, composition, fluid, from_bar, lpl, to_bar, water  # noqa: E402
-
-FRACTIONS = {"halves": 1 / 2, "thirds": 1 / 3, "quarters": 1 / 4, "fifths": 1 / 5, "sixths": 1 / 6}
+from make_mixed_teams import ATM, composition, fluid, from_bar, lpl, team_supplies, water  # noqa: E402
 
 
 def turn_real(w, comp, content_left, t_k):
@@ -64,24 +62,7 @@ def main(path):
 
     with open(path) as f:
         team = json.load(f)
-    metric = team["units"] == "metric"
-    team_unit = "bar" if metric else "psi"
-    team_step = team.get("gauge_step", 10 if metric else 100)
-    wt = team.get("water_temp", 20 if metric else 68)
-    t_k = (wt if metric else (wt - 32.0) * 5.0 / 9.0) + 273.15
-    fraction = FRACTIONS[team["rule"]]
-    mains, stages, stage_of = [], [], []
-    for i, d in enumerate(team["divers"]):
-        g = d.get("gauge")
-        unit = g["unit"] if g else team_unit
-        step = (g.get("step") if g else None) or (team_step if unit == team_unit else (10 if unit == "bar" else 100))
-        mains.append({"cyl": d["cylinders"], "mix": d.get("mix", {}), "start_bar": to_bar(d["start"], unit),
-                      "unit": unit, "step": step})
-        if "stage" in d:
-            st = d["stage"]
-            stages.append({"cyl": st["cylinders"], "mix": st.get("mix", {}), "start_bar": to_bar(st["start"], unit),
-                           "unit": unit, "step": step})
-            stage_of.append(i)
+    t_k, fraction, mains, stages, stage_of = team_supplies(team)
     turns = match(mains, fraction, t_k)
     drops = dict(zip(stage_of, match(stages, fraction, t_k))) if stages else {}
     for i, d in enumerate(team["divers"]):
