@@ -132,13 +132,13 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
     let vu = u.volume_label();
     let mut s = String::new();
     s.push_str(&format!(
-        "Turn pressures, rule of {}, water {:.0} {}; each diver's pressures on their own gauge\n\n",
+        "Turn pressures, rule of {}, water {:.0} {}; each diver's start and TURN on their own gauge, in the unit shown\n\n",
         input.rule.name(),
         u.temperature_value(input.water_temp),
         u.temperature_label()
     ));
     s.push_str(&format!(
-        "  {:<16} {:<26} {:<10} {:>7} {:>7} {:<4} {:<9} {:<12} {:>9} {:>8}\n",
+        "  {:<16} {:<26} {:<10} {:>7} {:>7} {:<4} {:<9} {:<12} {:>14} {:>8}\n",
         "diver",
         "cylinders",
         "mix",
@@ -147,7 +147,7 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
         "unit",
         "gauge",
         "set by",
-        format!("gas {vu}"),
+        format!("real gas {vu}"),
         "min"
     ));
     for (i, d) in plan.divers.iter().enumerate() {
@@ -159,7 +159,7 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
             .map(|m| format!("{}", m.floor() as i64))
             .unwrap_or_else(|| "-".into());
         s.push_str(&format!(
-            "{mark} {:<16} {:<26} {:<10} {:>7} {:>7} {:<4} {:<9} {:<12} {:>9} {:>8}\n",
+            "{mark} {:<16} {:<26} {:<10} {:>7} {:>7} {:<4} {:<9} {:<12} {:>14} {:>8}\n",
             d.name,
             inp.cylinders.describe(),
             inp.mix.label(),
