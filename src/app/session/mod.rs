@@ -216,6 +216,14 @@ impl Session {
     }
 }
 
+/// A session over a fresh temporary data directory (the demo team), for unit tests.
+#[cfg(test)]
+pub(crate) fn test_session() -> (tempfile::TempDir, Session) {
+    let dir = tempfile::tempdir().unwrap();
+    let s = Session::open(Store::new(dir.path()));
+    (dir, s)
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;

@@ -212,11 +212,7 @@ mod tests {
     use super::*;
     use crate::storage::Store;
 
-    fn session() -> (tempfile::TempDir, Session) {
-        let dir = tempfile::tempdir().unwrap();
-        let s = Session::open(Store::new(dir.path()));
-        (dir, s)
-    }
+    use crate::app::session::test_session as session;
 
     #[test]
     fn a_refused_edit_is_reported_and_the_plan_stays() {

@@ -47,11 +47,7 @@ mod tests {
     use crate::app::session::Session;
     use crate::storage::Store;
 
-    fn session() -> (tempfile::TempDir, Session) {
-        let dir = tempfile::tempdir().unwrap();
-        let s = Session::open(Store::new(dir.path()));
-        (dir, s)
-    }
+    use crate::app::session::test_session as session;
 
     #[test]
     fn removing_a_diver_can_be_undone_with_the_reading_kept() {

@@ -3,13 +3,8 @@
 use super::*;
 use crate::app::nav::Screen;
 use crate::plan::{Pressure, UnitSystem};
-use crate::storage::Store;
 
-fn session() -> (tempfile::TempDir, Session) {
-    let dir = tempfile::tempdir().unwrap();
-    let s = Session::open(Store::new(dir.path()));
-    (dir, s)
-}
+use crate::app::session::test_session as session;
 
 fn keys(s: &mut Session, keys: &[&str]) {
     for k in keys {
