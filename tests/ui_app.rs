@@ -328,10 +328,7 @@ fn corrupt_locker_is_kept_aside_and_the_app_starts() {
     assert_eq!(kept.len(), 1);
     assert!(std::fs::read_to_string(&kept[0]).unwrap().contains("oops"));
     press(&app, "dismiss message");
-    assert_eq!(
-        ElementHandle::find_by_accessible_label(&app.window, "message").count(),
-        0
-    );
+    assert_eq!(count(&app, "message"), 0);
 }
 
 #[test]
@@ -818,10 +815,7 @@ fn removing_a_diver_offers_undo_that_puts_the_diver_back() {
     assert_eq!(value(&app, "undo note"), "Bram removed.");
     press(&app, "undo");
     assert_eq!(app.session.borrow().team.to_state().team, before.team);
-    assert!(
-        ElementHandle::find_by_accessible_label(&app.window, "undo").count() == 0,
-        "the offer is gone once used"
-    );
+    assert!(count(&app, "undo") == 0, "the offer is gone once used");
     // Bram's start still counts as read today: his turn is back at once.
     press(&app, "show turns");
     assert_eq!(turn_number(&app, "Bram"), bram_turn);
@@ -902,10 +896,7 @@ fn the_demo_says_so_on_every_page_until_a_team_of_ones_own() {
         back_key(&app);
     }
     press(&app, "new team");
-    assert_eq!(
-        ElementHandle::find_by_accessible_label(&app.window, "demo note").count(),
-        0
-    );
+    assert_eq!(count(&app, "demo note"), 0);
 }
 
 #[test]
