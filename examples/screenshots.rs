@@ -133,8 +133,7 @@ fn main() {
         s.back();
         s.back();
         s.set_units(turnsheet::plan::UnitSystem::Imperial);
-        s.cycle_gauge(1);
-        s.cycle_gauge(1);
+        s.set_gauge(1, turnsheet::app::session::GAUGES[2]);
         s.open_entry(EntryTarget::Start(1));
         for k in ["clear", "2", "9", "5", "0"] {
             s.key(k);

@@ -24,6 +24,7 @@ fn heading() -> CardHeading {
     CardHeading {
         dive: Some("Hollowmere spring, upstream".into()),
         date: Some("2026-12-05".into()),
+        read_at: Vec::new(),
     }
 }
 

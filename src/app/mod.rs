@@ -3,6 +3,7 @@
 
 pub mod adapters;
 pub mod cautions;
+pub mod clock;
 pub mod keypad;
 pub mod locker_controller;
 pub mod locker_draft;

@@ -1,12 +1,13 @@
-//! Whether each diver's start pressure is a reading taken in the water today.
+//! Whether each diver's start pressure is a reading taken in the water for this dive.
 //!
-//! A turn pressure is only as good as its start. A start nobody read, one typed on an
-//! earlier day or more than three hours ago, or one taken from a fill prediction must
-//! never look like a fresh gauge reading. The team's plan still needs a number for every
+//! A turn pressure is only as good as its start. A start nobody read, one typed more
+//! than three hours ago, or one taken from a fill prediction must never look like a
+//! fresh gauge reading. Age is elapsed time only: a start read at 23:58 is still fresh
+//! at 00:05. The team's plan still needs a number for every
 //! start, so the team keeps one; this record says what that number is worth, and the
 //! views show turns only when every start is fresh (a prediction is shown, marked).
 
-use chrono::{DateTime, Local, TimeZone};
+use chrono::{Local, TimeZone};
 
 pub use crate::storage::team_state::{Source, StartReading};
 
@@ -15,11 +16,12 @@ pub use crate::storage::team_state::{Source, StartReading};
 pub enum StartStatus {
     /// Nobody has entered a start for this diver.
     Missing,
-    /// Read on the gauge today, within the last three hours.
+    /// Read on the gauge within the last three hours.
     Fresh,
-    /// Predicted from a fill, today, within the last three hours: usable, marked.
+    /// Predicted from a fill within the last three hours: usable, marked.
     Predicted,
-    /// Entered at `at`, on an earlier day or more than three hours ago: check it.
+    /// Entered at `at`, more than three hours ago (or after `now`: a clock set back):
+    /// check it.
     Old {
         /// Unix time, seconds.
         at: i64,
@@ -33,7 +35,7 @@ impl StartStatus {
     }
 }
 
-/// How long a start stays fresh on the same day (seconds).
+/// How long a start stays fresh (seconds of elapsed time).
 pub const FRESH_FOR_S: i64 = 3 * 3600;
 
 /// The starts of a team, one entry per diver in team order.
@@ -99,9 +101,16 @@ impl Readings {
         self.starts.get(i).copied().flatten()
     }
 
-    /// Diver `i`'s status at `now` (unix seconds), judged on the local calendar.
+    /// Diver `i`'s status at `now` (unix seconds).
     pub fn status(&self, i: usize, now: i64) -> StartStatus {
-        status_in(&Local, self.get(i), now)
+        status_of(self.get(i), now)
+    }
+
+    /// Every record unread (the next dive of the same team).
+    pub fn clear_all(&mut self) {
+        for s in &mut self.starts {
+            *s = None;
+        }
     }
 
     /// Whether every start may make turns at `now`.
@@ -117,25 +126,27 @@ impl Readings {
     }
 }
 
-/// The status of one record at `now` in time zone `tz`: fresh only on the same local
-/// calendar day and within three hours.
-pub fn status_in<Tz: TimeZone>(tz: &Tz, r: Option<StartReading>, now: i64) -> StartStatus {
+/// The status of one record at `now`: fresh for three hours of elapsed time, whatever
+/// the calendar says; a record from the future (a clock set back) is old.
+pub fn status_of(r: Option<StartReading>, now: i64) -> StartStatus {
     let Some(r) = r else {
         return StartStatus::Missing;
     };
-    let day = |t: i64| {
-        tz.timestamp_opt(t, 0)
-            .single()
-            .map(|d: DateTime<Tz>| d.date_naive())
-    };
-    let same_day = matches!((day(r.at), day(now)), (Some(a), Some(b)) if a == b);
-    let age = now - r.at;
-    if !same_day || !(0..=FRESH_FOR_S).contains(&age) {
+    let age = now.saturating_sub(r.at);
+    if !(0..=FRESH_FOR_S).contains(&age) {
         return StartStatus::Old { at: r.at };
     }
     match r.source {
         Source::Gauge => StartStatus::Fresh,
         Source::Prediction => StartStatus::Predicted,
+    }
+}
+
+/// "09:42": the local time of a reading, for "read 09:42".
+pub fn clock_text(at: i64) -> String {
+    match Local.timestamp_opt(at, 0).single() {
+        Some(t) => t.format("%H:%M").to_string(),
+        None => "--:--".to_string(),
     }
 }
 
@@ -155,61 +166,44 @@ pub fn when_text(at: i64, now: i64) -> String {
     }
 }
 
-/// Now, unix seconds.
-pub fn now() -> i64 {
-    std::time::SystemTime::now()
-        .duration_since(std::time::UNIX_EPOCH)
-        .map(|d| d.as_secs() as i64)
-        .unwrap_or(0)
-}
-
 #[cfg(test)]
 mod tests {
     use super::*;
-    use chrono::FixedOffset;
 
+    /// 2 December 2026 at h:m, UTC (elapsed time does not depend on the zone).
     fn at(h: u32, m: u32, day: u32) -> i64 {
-        FixedOffset::east_opt(3600)
-            .unwrap()
+        chrono::Utc
             .with_ymd_and_hms(2026, 12, day, h, m, 0)
             .unwrap()
             .timestamp()
     }
 
     #[test]
-    fn fresh_only_the_same_day_and_within_three_hours() {
-        let tz = FixedOffset::east_opt(3600).unwrap();
+    fn fresh_for_three_hours_of_elapsed_time_across_midnight() {
         let r = |t, source| Some(StartReading { at: t, source });
-        assert_eq!(status_in(&tz, None, at(9, 0, 2)), StartStatus::Missing);
+        assert_eq!(status_of(None, at(9, 0, 2)), StartStatus::Missing);
         let read = r(at(9, 0, 2), Source::Gauge);
-        assert_eq!(status_in(&tz, read, at(11, 59, 2)), StartStatus::Fresh);
+        assert_eq!(status_of(read, at(11, 59, 2)), StartStatus::Fresh);
+        assert_eq!(status_of(read, at(12, 0, 2)), StartStatus::Fresh, "exactly 3 h");
         assert_eq!(
-            status_in(&tz, read, at(12, 1, 2)),
+            status_of(read, at(12, 1, 2)),
             StartStatus::Old { at: at(9, 0, 2) }
         );
-        // Late evening, read again after midnight: a new day.
-        let late = r(at(23, 30, 2), Source::Gauge);
-        assert!(matches!(
-            status_in(&tz, late, at(0, 15, 3)),
-            StartStatus::Old { .. }
-        ));
+        // Read at 23:58, diving at 00:05: the same dive.
+        let late = r(at(23, 58, 2), Source::Gauge);
+        assert_eq!(status_of(late, at(0, 5, 3)), StartStatus::Fresh);
+        assert!(matches!(status_of(late, at(2, 59, 3)), StartStatus::Old { .. }));
         let predicted = r(at(9, 0, 2), Source::Prediction);
-        assert_eq!(
-            status_in(&tz, predicted, at(9, 30, 2)),
-            StartStatus::Predicted
-        );
+        assert_eq!(status_of(predicted, at(9, 30, 2)), StartStatus::Predicted);
         assert!(StartStatus::Predicted.usable() && !StartStatus::Missing.usable());
         // A clock set back before the entry is not fresh either.
-        assert!(matches!(
-            status_in(&tz, read, at(8, 0, 2)),
-            StartStatus::Old { .. }
-        ));
+        assert!(matches!(status_of(read, at(8, 0, 2)), StartStatus::Old { .. }));
     }
 
     #[test]
     fn records_follow_the_divers() {
         let mut r = Readings::unread(2);
-        let now = super::now();
+        let now = at(10, 0, 2);
         assert_eq!(r.blocking(now), vec![0, 1]);
         r.mark(0, now, Source::Gauge);
         r.mark(1, now, Source::Prediction);
@@ -225,5 +219,8 @@ mod tests {
         assert_eq!(r.status(0, now), StartStatus::Missing);
         let back = Readings::from_saved(r.saved(), 4);
         assert_eq!(back.blocking(now), vec![0, 2, 3]);
+        r.mark(0, now, Source::Gauge);
+        r.clear_all();
+        assert_eq!(r.blocking(now), vec![0, 1, 2]);
     }
 }

@@ -50,6 +50,7 @@ pub fn card_text(args: &CardArgs) -> Result<String, InputError> {
             date: Some(args.date.clone().unwrap_or_else(|| {
                 format!("made {}", chrono::Local::now().format("%-d %b %Y %H:%M"))
             })),
+            read_at: Vec::new(),
         };
     Ok(card_svg(&heading, &team, &plan, &charts))
 }

@@ -22,6 +22,9 @@ pub struct CardHeading {
     pub dive: Option<String>,
     /// The date, as the user wrote it, if given.
     pub date: Option<String>,
+    /// When each diver's start was read ("read 09:42"), in team order; empty when not
+    /// known (the command line plans from a file).
+    pub read_at: Vec<String>,
 }
 
 /// Escape text for XML.
@@ -173,11 +176,18 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
             2.8,
             false,
             "start",
-            &format!(
-                "start {} {}",
-                fmt_num((g.value(d.start) + 1e-9).floor()),
-                g.label()
-            ),
+            &match heading.read_at.get(i).filter(|r| !r.is_empty()) {
+                Some(read) => format!(
+                    "start {} {} ({read})",
+                    fmt_num((g.value(d.start) + 1e-9).floor()),
+                    g.label()
+                ),
+                None => format!(
+                    "start {} {}",
+                    fmt_num((g.value(d.start) + 1e-9).floor()),
+                    g.label()
+                ),
+            },
         );
         p.text(right - 38.0, top + 4.3, 2.6, false, "end", "TURN");
         p.text(

@@ -40,39 +40,52 @@ pub fn up1(x: f64) -> f64 {
     ((x * 10.0) - 1e-6).ceil() / 10.0
 }
 
-/// The team's hand allowance sentence, e.g. "a third of the smallest hand content:
-/// 3920 L ÷ 3 = 1306.6 L (Tomas)".
+/// The team's hand allowance as the pencil gets it: the smallest of the divers' pencil
+/// contents (each as `hand_working` prints it), and that content × the rule's fraction,
+/// rounded down to one decimal. Every figure is the one printed elsewhere on the page.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct PencilAllowance {
+    /// The diver whose content is smallest (the first on a tie).
+    pub diver: usize,
+    /// That content, in the team's volume unit, as printed.
+    pub content: f64,
+    /// The allowance, in the team's volume unit, as printed.
+    pub allowance: f64,
+}
+
+/// The pencil allowance of the team.
+pub fn pencil_allowance(team: &TeamInput, plan: &TeamPlan) -> PencilAllowance {
+    let (diver, content) = (0..plan.divers.len())
+        .map(|i| (i, pencil_content(team, plan, i).1))
+        .fold((0, f64::INFINITY), |best, c| if c.1 < best.1 { c } else { best });
+    let content = if content.is_finite() { content } else { 0.0 };
+    PencilAllowance {
+        diver,
+        content,
+        allowance: down1(content / f64::from(team.rule.denominator())),
+    }
+}
+
+/// The team's hand allowance sentence, e.g. "Allowance by hand: the smallest content
+/// 3920 L (Tomas) ÷ 3 = 1306.6 L".
 pub fn allowance_sentence(team: &TeamInput, plan: &TeamPlan) -> String {
-    let u = team.units;
-    let vu = u.volume_label();
-    let (ci, c) = plan
-        .divers
-        .iter()
-        .enumerate()
-        .min_by(|a, b| {
-            a.1.content_hand
-                .litres()
-                .total_cmp(&b.1.content_hand.litres())
-        })
-        .map(|(i, d)| (i, d.content_hand))
-        .unwrap_or((0, plan.divers[0].content_hand));
+    let vu = team.units.volume_label();
+    let a = pencil_allowance(team, plan);
     format!(
         "Allowance by hand: the smallest content {} {vu} ({}) ÷ {} = {} {vu}",
-        fmt_num(down1(u.volume_value(c))),
-        plan.divers[ci].name,
+        fmt_num(a.content),
+        plan.divers[a.diver].name,
         team.rule.denominator(),
-        fmt_num(down1(u.volume_value(plan.team_allowance_hand)))
+        fmt_num(a.allowance)
     )
 }
 
-/// Diver `i`'s pencil sums.
-pub fn hand_working(team: &TeamInput, plan: &TeamPlan, i: usize) -> HandWorking {
+/// Diver `i`'s content sum and its result in the team's volume unit, as printed (one
+/// decimal, rounded down).
+fn pencil_content(team: &TeamInput, plan: &TeamPlan, i: usize) -> (String, f64) {
     let u = team.units;
-    let vu = u.volume_label();
     let d = &team.divers[i];
-    let p = &plan.divers[i];
-    let g = p.gauge;
-    let gu = g.label();
+    let g = plan.divers[i].gauge;
     let start = g.value(d.start);
     let n = d.cylinders.count;
     let count = if n == 1 {
@@ -80,7 +93,7 @@ pub fn hand_working(team: &TeamInput, plan: &TeamPlan, i: usize) -> HandWorking 
     } else {
         format!("{n} × ")
     };
-    let content = match d.cylinders.spec {
+    match d.cylinders.spec {
         CylinderSpec::Stamped { water_l, .. } => {
             let (bar, read) = match g.unit {
                 PressureUnit::Bar => (start, String::new()),
@@ -92,18 +105,22 @@ pub fn hand_working(team: &TeamInput, plan: &TeamPlan, i: usize) -> HandWorking 
                     )
                 }
             };
-            let litres = f64::from(n) * water_l * bar;
-            let tail = match u {
-                UnitSystem::Metric => String::new(),
+            let litres = down1(f64::from(n) * water_l * bar);
+            let (tail, value) = match u {
+                UnitSystem::Metric => (String::new(), litres),
                 UnitSystem::Imperial => {
-                    format!(" = {} cu ft", fmt_num(down1(litres / LITRES_PER_CUFT)))
+                    let cuft = down1(litres / LITRES_PER_CUFT);
+                    (format!(" = {} cu ft", fmt_num(cuft)), cuft)
                 }
             };
-            format!(
-                "{read}{count}{} L × {} bar = {} L{tail}",
-                fmt_num(water_l),
-                fmt_num(bar),
-                fmt_num(down1(litres))
+            (
+                format!(
+                    "{read}{count}{} L × {} bar = {} L{tail}",
+                    fmt_num(water_l),
+                    fmt_num(bar),
+                    fmt_num(litres)
+                ),
+                value,
             )
         }
         CylinderSpec::Rated {
@@ -122,41 +139,55 @@ pub fn hand_working(team: &TeamInput, plan: &TeamPlan, i: usize) -> HandWorking 
                     )
                 }
             };
-            let cuft = f64::from(n) * rated_cuft * psi / rated_psi;
-            let tail = match u {
-                UnitSystem::Imperial => String::new(),
+            let cuft = down1(f64::from(n) * rated_cuft * psi / rated_psi);
+            let (tail, value) = match u {
+                UnitSystem::Imperial => (String::new(), cuft),
                 UnitSystem::Metric => {
-                    format!(" = {} L", fmt_num(down1(cuft * LITRES_PER_CUFT)))
+                    let litres = down1(cuft * LITRES_PER_CUFT);
+                    (format!(" = {} L", fmt_num(litres)), litres)
                 }
             };
-            format!(
-                "{read}{count}{} cu ft × {} psi ÷ {} psi = {} cu ft{tail}",
-                fmt_num(rated_cuft),
-                fmt_num(psi),
-                fmt_num(rated_psi),
-                fmt_num(down1(cuft))
+            (
+                format!(
+                    "{read}{count}{} cu ft × {} psi ÷ {} psi = {} cu ft{tail}",
+                    fmt_num(rated_cuft),
+                    fmt_num(psi),
+                    fmt_num(rated_psi),
+                    fmt_num(cuft)
+                ),
+                value,
             )
         }
-    };
-    let c = u.volume_value(p.content_hand);
-    let a = u.volume_value(plan.team_allowance_hand);
-    let drop = if c > 0.0 { start * a / c } else { 0.0 };
-    let exact = g.value(p.turn_hand);
+    }
+}
+
+/// Diver `i`'s pencil sums. Each figure is written once and used as written: the turn
+/// sum divides by the content the content sum ends with, and by the allowance the
+/// allowance sentence ends with.
+pub fn hand_working(team: &TeamInput, plan: &TeamPlan, i: usize) -> HandWorking {
+    let vu = team.units.volume_label();
+    let g = plan.divers[i].gauge;
+    let gu = g.label();
+    let start = g.value(team.divers[i].start);
+    let (content, c) = pencil_content(team, plan, i);
+    let a = pencil_allowance(team, plan).allowance;
+    let drop = if c > 0.0 { down1(start * a / c) } else { 0.0 };
+    let exact = up1(start - drop);
     let rounded = round_up_to_step(exact, g.step).min(start);
     let turn = format!(
         "{} {gu} × {} {vu} ÷ {} {vu} = {} {gu} to spend; {} − {} = {} {gu}",
         fmt_num(start),
-        fmt_num(down1(a)),
-        fmt_num(down1(c)),
-        fmt_num(down1(drop)),
+        fmt_num(a),
+        fmt_num(c),
+        fmt_num(drop),
         fmt_num(start),
-        fmt_num(down1(drop)),
-        fmt_num(up1(exact)),
+        fmt_num(drop),
+        fmt_num(exact),
     );
     HandWorking {
         content,
         turn,
-        hand_exact: up1(exact),
+        hand_exact: exact,
         hand_rounded: rounded,
     }
 }
@@ -191,6 +222,75 @@ pub fn turn_sentence(plan: &TeamPlan, i: usize) -> String {
             fmt_num(up1(hand))
         ),
     }
+}
+
+/// The one plain line under a turn: how it was found, without figures (the sums are
+/// in `hand_working` and `turn_sentence`).
+pub fn turn_how(plan: &TeamPlan, i: usize) -> String {
+    let p = &plan.divers[i];
+    let g = p.gauge;
+    if p.turn_shown_value >= g.value(p.start) - 1e-9 {
+        return "The turn is the start itself: almost no gas to spend before turning."
+            .to_string();
+    }
+    let mark = format!("rounded up to the next {} {} mark", fmt_num(g.step), g.label());
+    match p.set_by {
+        super::gas_model::ModelKind::Hand => format!("By hand (tank factor), {mark}."),
+        super::gas_model::ModelKind::Real => {
+            format!("By real gas, more careful here than the hand method, {mark}.")
+        }
+    }
+}
+
+/// Whose gas sets the allowance that a group of shown turns uses.
+#[derive(Clone, Debug, PartialEq)]
+pub struct AllowanceSource {
+    /// The model whose allowance these turns use.
+    pub model: super::gas_model::ModelKind,
+    /// The diver with the least gas in that model.
+    pub diver: usize,
+    /// The smallest content, in the team's volume unit, rounded down.
+    pub content: f64,
+    /// The allowance, in the team's volume unit, rounded down.
+    pub allowance: f64,
+    /// The divers whose shown turn this allowance sets, in team order.
+    pub turns: Vec<usize>,
+}
+
+/// The allowances the shown turns use: one entry per model that sets at least one
+/// shown turn (hand first). The hand entry's figures are the pencil figures.
+pub fn allowance_sources(team: &TeamInput, plan: &TeamPlan) -> Vec<AllowanceSource> {
+    use super::gas_model::ModelKind;
+    let u = team.units;
+    let by = |m: ModelKind| -> Vec<usize> {
+        (0..plan.divers.len())
+            .filter(|&i| plan.divers[i].set_by == m)
+            .collect()
+    };
+    let mut out = Vec::new();
+    let hand = by(ModelKind::Hand);
+    if !hand.is_empty() {
+        let a = pencil_allowance(team, plan);
+        out.push(AllowanceSource {
+            model: ModelKind::Hand,
+            diver: a.diver,
+            content: a.content,
+            allowance: a.allowance,
+            turns: hand,
+        });
+    }
+    let real = by(ModelKind::Real);
+    if !real.is_empty() {
+        let c = plan.controlling;
+        out.push(AllowanceSource {
+            model: ModelKind::Real,
+            diver: c,
+            content: down1(u.volume_value(plan.divers[c].content_real)),
+            allowance: down1(u.volume_value(plan.team_allowance_real)),
+            turns: real,
+        });
+    }
+    out
 }
 
 #[cfg(test)]
@@ -257,6 +357,14 @@ mod tests {
         );
         assert_eq!(w.hand_rounded, 170.0);
         assert!(allowance_sentence(&t, &plan).contains("3920 L (Tomas) ÷ 3 = 1306.6 L"));
+        let sources = allowance_sources(&t, &plan);
+        let hand = sources
+            .iter()
+            .find(|a| a.model == crate::plan::gas_model::ModelKind::Hand)
+            .expect("at 220 and 280 bar the hand method sets a turn");
+        assert_eq!((hand.diver, hand.content, hand.allowance), (1, 3920.0, 1306.6));
+        let used: usize = sources.iter().map(|a| a.turns.len()).sum();
+        assert_eq!(used, 2, "every shown turn has one source");
         let s = turn_sentence(&plan, 0);
         assert!(
             s.starts_with("hand 165.6 → 170 bar (rounded up to 10 bar)"),
@@ -299,5 +407,44 @@ mod tests {
         );
         assert_eq!(w.hand_rounded % 50.0, 0.0);
         assert!(turn_sentence(&plan, 0).contains(" psi "));
+        // One figure per quantity: the turn sum divides by the content as printed.
+        assert!(w.turn.contains("÷ 2265.3 L"), "{}", w.turn);
+    }
+
+    #[test]
+    fn a_psi_gauge_on_stamped_twins_uses_the_printed_content_once() {
+        // 2950 psi on twin 12 L: 2950 × 0.0689476 = 203.39 bar (NIST SP 811 psi factor),
+        // written 203.3 bar; 2 × 12 × 203.3 = 4879.2 L. The turn sum divides by 4879.2 L,
+        // not by the unrounded 4881.4 L.
+        let t = metric_team(vec![
+            diver(
+                "Bram",
+                CylinderSet::twins(CylinderSpec::Stamped {
+                    water_l: 12.0,
+                    working_bar: 232.0,
+                }),
+                Pressure::from_psi(2950.0),
+                Some(Gauge {
+                    unit: PressureUnit::Psi,
+                    step: 100.0,
+                }),
+            ),
+            diver(
+                "Sol",
+                CylinderSet::twins(CylinderSpec::Stamped {
+                    water_l: 10.0,
+                    working_bar: 300.0,
+                }),
+                Pressure::from_bar(230.0),
+                None,
+            ),
+        ]);
+        let plan = plan_team(&t).unwrap();
+        let w = hand_working(&t, &plan, 0);
+        assert!(w.content.ends_with("= 4879.2 L"), "{}", w.content);
+        assert!(w.turn.contains("÷ 4879.2 L"), "{}", w.turn);
+        // Sol holds the smallest content: 2 × 10 × 230 = 4600 L, ÷ 3 = 1533.3 L.
+        assert!(w.turn.contains("× 1533.3 L"), "{}", w.turn);
+        assert!(allowance_sentence(&t, &plan).contains("4600 L (Sol) ÷ 3 = 1533.3 L"));
     }
 }

@@ -3,6 +3,7 @@
 
 mod chart_adapter;
 mod fill_adapter;
+mod gauge_chooser_adapter;
 mod keypad_adapter;
 mod locker_adapter;
 mod nav_adapter;
@@ -24,7 +25,11 @@ pub type Shared = Rc<RefCell<Session>>;
 
 /// Run an action on the session, then refresh every view.
 pub(crate) fn act(w: &slint::Weak<AppWindow>, s: &Shared, f: impl FnOnce(&mut Session)) {
-    f(&mut s.borrow_mut());
+    {
+        let mut x = s.borrow_mut();
+        x.begin_action();
+        f(&mut x);
+    }
     if let Some(ui) = w.upgrade() {
         refresh_all(&ui, &s.borrow());
     }
@@ -51,6 +56,7 @@ pub fn connect_all(ui: &AppWindow, s: &Shared) {
     locker_adapter::connect(ui, s);
     settings_adapter::connect(ui, s);
     fill_adapter::connect(ui, s);
+    gauge_chooser_adapter::connect(ui, s);
     chart_adapter::connect(ui, s);
     turns_adapter::connect(ui, s);
     prompt_adapter::connect(ui, s);
@@ -65,6 +71,7 @@ pub fn refresh_all(ui: &AppWindow, s: &Session) {
     locker_adapter::refresh(ui, s);
     settings_adapter::refresh(ui, s);
     fill_adapter::refresh(ui, s);
+    gauge_chooser_adapter::refresh(ui, s);
     chart_adapter::refresh(ui, s);
     prompt_adapter::refresh(ui, s);
 }

@@ -24,7 +24,7 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
     let (w, st) = handles(ui, s);
     a.on_nudge_start(move |i, d| act(&w, &st, |x| x.nudge_start(i as usize, d)));
     let (w, st) = handles(ui, s);
-    a.on_cycle_gauge(move |i| act(&w, &st, |x| x.cycle_gauge(i as usize)));
+    a.on_choose_gauge(move |i| act(&w, &st, |x| x.open_gauge_chooser(i as usize)));
     let (w, st) = handles(ui, s);
     a.on_confirm_start(move |i| act(&w, &st, |x| x.confirm_start(i as usize)));
     let (w, st) = handles(ui, s);

@@ -3,6 +3,8 @@
 
 use std::path::PathBuf;
 
+use chrono::TimeZone;
+
 use crate::formats::card_svg::{CardHeading, card_svg};
 use crate::plan::chart::team_charts;
 
@@ -13,7 +15,7 @@ impl Session {
     /// card of unread starts would carry turns nobody can trust. Says what happened in
     /// the status and returns the file written.
     pub fn save_card(&mut self) -> Option<PathBuf> {
-        let now = crate::app::readings::now();
+        let now = self.now;
         if !self.team.turns_ready(now) {
             let why = super::super::view_models::starts_blocking(self).unwrap_or_default();
             self.status.push(format!("No card yet. {why}"));
@@ -39,10 +41,16 @@ impl Session {
                 return None;
             }
         };
-        let stamp = chrono::Local::now();
+        let stamp = chrono::Local
+            .timestamp_opt(self.now, 0)
+            .single()
+            .unwrap_or_else(chrono::Local::now);
         let heading = CardHeading {
             dive: None,
             date: Some(stamp.format("%-d %b %Y %H:%M").to_string()),
+            read_at: (0..input.divers.len())
+                .map(|i| self.read_text(i))
+                .collect(),
         };
         let svg = card_svg(&heading, input, self.team.plan(), &charts);
         let path = self
@@ -94,7 +102,7 @@ mod tests {
         );
         for i in 0..s.team.len() {
             if s.team.input().divers[i].stage.is_some() {
-                s.team.mark_stage_read(i, crate::app::readings::now());
+                s.team.mark_stage_read(i, s.now());
             }
         }
         let path = s.save_card().expect("a card");

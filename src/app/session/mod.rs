@@ -15,13 +15,19 @@ use crate::plan::error::InputError;
 use crate::storage::settings::Settings;
 use crate::storage::{LoadReport, Store};
 
+use std::rc::Rc;
+
+use super::clock::{Clock, SystemClock};
 use super::locker_controller::LockerController;
 use super::nav::{NavController, Screen, Status};
 use super::team_controller::TeamController;
 
 mod card;
+mod changes;
 mod custom_set;
+mod dives;
 mod entry;
+mod gauge_chooser;
 mod locker_actions;
 mod locker_exchange;
 mod mix_picker;
@@ -34,6 +40,7 @@ mod undo;
 
 pub use custom_set::CustomSet;
 pub use entry::{Entry, EntryTarget};
+pub use gauge_chooser::GAUGES;
 pub use locker_exchange::Exchange;
 pub use mix_picker::{MixChoices, MixHistory};
 pub use pickers::Picker;
@@ -44,12 +51,18 @@ pub use tools::{CHART_ROWS, ChartPair, FillCheck, chart_columns};
 
 pub struct Session {
     store: Store,
+    /// The wall clock, handed in (tests and the robot use a `ManualClock`).
+    clock: Rc<dyn Clock>,
+    /// The clock's reading for the action under way (`begin_action`).
+    now: i64,
     pub settings: Settings,
     pub team: TeamController,
     pub locker: LockerController,
     pub nav: NavController,
     pub entry: Option<Entry>,
     pub picker: Picker,
+    /// The diver whose gauge chooser is open.
+    pub gauge_chooser: Option<usize>,
     /// The mixes each diver chose since the app started (the mix picker offers them).
     pub mix_history: MixHistory,
     pub fill: FillCheck,
@@ -69,6 +82,12 @@ impl Session {
     /// Load everything from the data directory; unreadable files are set aside and
     /// reported; the first launch gets the demo team and the cautions page.
     pub fn open(store: Store) -> Session {
+        Session::open_with_clock(store, Rc::new(SystemClock))
+    }
+
+    /// The same, reading the time from `clock`.
+    pub fn open_with_clock(store: Store, clock: Rc<dyn Clock>) -> Session {
+        let now = clock.now();
         let mut store = store;
         let loaded = store.load();
         let LoadReport {
@@ -102,6 +121,8 @@ impl Session {
             Screen::Team
         };
         let mut session = Session {
+            clock,
+            now,
             exchange: Exchange::for_data_dir(store.dir()),
             store,
             settings,
@@ -112,6 +133,7 @@ impl Session {
             nav: NavController::new(first),
             entry: None,
             picker: Picker::None,
+            gauge_chooser: None,
             mix_history: MixHistory::default(),
             status: Status::new(messages),
             undo: None,
@@ -133,7 +155,7 @@ impl Session {
         }
         let page = self.nav.current();
         let dir = self.store.dir().to_path_buf();
-        let fresh = Session::open(Store::new(dir));
+        let fresh = Session::open_with_clock(Store::new(dir), self.clock.clone());
         let nav = self.nav.clone();
         let exchange = std::mem::take(&mut self.exchange);
         let history = std::mem::take(&mut self.mix_history);
@@ -144,6 +166,17 @@ impl Session {
             self.nav = nav;
         }
         true
+    }
+
+    /// Read the clock for the action that starts now; every decision and text of the
+    /// action uses this one reading.
+    pub fn begin_action(&mut self) {
+        self.now = self.clock.now();
+    }
+
+    /// The time of the action under way (unix seconds).
+    pub fn now(&self) -> i64 {
+        self.now
     }
 
     pub fn units(&self) -> UnitSystem {
@@ -197,6 +230,10 @@ impl Session {
         }
         if self.picker != Picker::None {
             self.picker = Picker::None;
+            return true;
+        }
+        if self.gauge_chooser.is_some() {
+            self.gauge_chooser = None;
             return true;
         }
         if self.nav.current() == Screen::LockerEdit {

@@ -13,6 +13,8 @@ pub enum Prompt {
     Close,
     /// Leaving the locker editor with changes: keep editing, discard.
     Discard,
+    /// A rule that does not suit an overhead dive was chosen: keep the rule, use it.
+    LooseRule(crate::plan::Rule),
 }
 
 /// An answer to a prompt: its text, accessible label, and whether it is the one to stress.
@@ -65,6 +67,17 @@ impl Session {
                     ("Stay", "stay", false),
                 ],
             )),
+            Prompt::LooseRule(rule) => Some((
+                format!(
+                    "{} is an open-water rule: it keeps no gas to bring a teammate out of an overhead. Every turn goes down. Keep the rule of {}?",
+                    crate::plan::error::first_upper(rule.name()),
+                    self.team.input().rule.name()
+                ),
+                vec![
+                    ("Keep the rule", "keep the rule", true),
+                    ("Use it anyway", "use the open-water rule", false),
+                ],
+            )),
             Prompt::Discard => {
                 let name = self
                     .locker
@@ -94,6 +107,10 @@ impl Session {
                 } else {
                     AfterPrompt::Stay
                 }
+            }
+            (Prompt::LooseRule(rule), 1) => {
+                self.apply_rule(rule);
+                AfterPrompt::Stay
             }
             (Prompt::Discard, 1) => {
                 self.locker.drop_draft();

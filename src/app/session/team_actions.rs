@@ -41,23 +41,31 @@ pub(super) fn demo_team(settings: &Settings) -> TeamController {
 impl Session {
     // ---- team page ---------------------------------------------------------------
 
-    pub fn set_rule(&mut self, idx: usize) {
-        if let Some(rule) = Rule::ALL.get(idx).copied() {
-            let r = self.team.set_rule(rule);
-            self.team_result(r);
-        }
-    }
-
     pub fn set_step(&mut self, idx: usize) {
         if let Some(step) = step_options(self.units()).get(idx).copied() {
-            let r = self.team.set_gauge_step(step);
-            self.team_result(r);
+            self.change_plan(
+                |t| t.set_gauge_step(step),
+                |s| {
+                    format!(
+                        "Gauge step now {} {}",
+                        crate::plan::error::fmt_num(step),
+                        s.units().pressure_label()
+                    )
+                },
+            );
         }
     }
 
     pub fn toggle_water(&mut self) {
-        let r = self.team.toggle_water();
-        self.team_result(r);
+        self.change_plan(
+            |t| t.toggle_water(),
+            |s| {
+                format!(
+                    "Water now {}",
+                    crate::app::view_models::water_text(s).to_lowercase()
+                )
+            },
+        );
     }
 
     /// The − and + beside a start pressure: one graduation down or up. Setting the
@@ -68,7 +76,7 @@ impl Session {
         use crate::app::readings::StartStatus;
         if i < self.team.len() {
             if matches!(
-                self.team.start_status(i, crate::app::readings::now()),
+                self.team.start_status(i, self.now),
                 StartStatus::Missing | StartStatus::Old { .. }
             ) {
                 self.open_entry(super::EntryTarget::Start(i));
@@ -76,7 +84,7 @@ impl Session {
             }
             let r = self.team.nudge_start(i, dir);
             if r.is_ok() {
-                self.team.mark_read(i, crate::app::readings::now());
+                self.team.mark_read(i, self.now);
             }
             self.team_result(r);
         }
@@ -85,16 +93,28 @@ impl Session {
     /// "Still reads N": the diver's gauge shows the start that was entered earlier.
     pub fn confirm_start(&mut self, i: usize) {
         if i < self.team.len() {
-            self.team.mark_read(i, crate::app::readings::now());
+            self.team.mark_read(i, self.now);
             self.save_team();
         }
     }
 
-    /// The gauge button on a diver's card: the next unit and graduation.
-    pub fn cycle_gauge(&mut self, i: usize) {
+    /// A gauge chosen in the gauge chooser of diver `i`'s card.
+    pub fn set_gauge(&mut self, i: usize, gauge: crate::plan::Gauge) {
         if i < self.team.len() {
-            let r = self.team.cycle_gauge(i);
-            self.team_result(r);
+            self.gauge_chooser = None;
+            if self.team.input().gauge_of(i) == gauge {
+                return;
+            }
+            let name = self.team.input().divers[i].name.clone();
+            self.change_plan(
+                |t| t.set_gauge(i, gauge),
+                |_| {
+                    format!(
+                        "Gauge of {name} now {}",
+                        crate::app::view_models::gauge_text(gauge)
+                    )
+                },
+            );
         }
     }
 
@@ -113,7 +133,9 @@ impl Session {
 
     pub fn remove_diver(&mut self, i: usize) {
         if i < self.team.len() {
-            let before = self.team.to_state();
+            let before = self.before_change();
+            let state = self.team.to_state();
+            let shown = self.team.turns_ready(self.now);
             let name = self.team.input().divers[i].name.clone();
             let r = self.team.remove_diver(i);
             let removed = r.is_ok();
@@ -121,7 +143,11 @@ impl Session {
             self.fill.keep_within(self.team.len());
             self.chart = ChartPair::default();
             if removed {
-                self.offer_undo(format!("{name} removed."), before);
+                if shown {
+                    self.after_change(format!("{name} removed"), before);
+                } else {
+                    self.offer_undo(format!("{name} removed."), state);
+                }
             }
         }
     }
@@ -156,8 +182,10 @@ impl Session {
     pub fn set_units(&mut self, units: UnitSystem) {
         self.settings.units = units;
         self.save_settings();
-        let r = self.team.set_units(units);
-        self.team_result(r);
+        self.change_plan(
+            |t| t.set_units(units),
+            |s| format!("Team units now {}", s.units().pressure_label()),
+        );
     }
 
     pub fn set_default_rule(&mut self, idx: usize) {
@@ -183,8 +211,10 @@ impl Session {
         let u = self.units();
         let current = u.temperature_value(self.team.input().water_temp);
         let t = u.temperature(current.round() + f64::from(dir.signum()));
-        let r = self.team.set_water_temp(t);
-        self.team_result(r);
+        self.change_plan(
+            |team| team.set_water_temp(t),
+            |s| format!("Water now {}", crate::app::view_models::water_temp_text(s)),
+        );
     }
 
     /// One degree colder or warmer: the water a new team starts with (Settings page).
@@ -282,7 +312,7 @@ mod tests {
             s.confirm_start(i);
         }
         // Ines carries a stage in the demo; nobody has read its gauge.
-        let now = crate::app::readings::now();
+        let now = s.now();
         assert_eq!(s.team.stage_status(0, now), Some(StartStatus::Missing));
         assert_eq!(s.team.stage_status(1, now), None, "Bram has no stage");
         let text = crate::app::view_models::stage_text(&s, 0);

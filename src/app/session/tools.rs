@@ -148,7 +148,7 @@ impl Session {
         let start = self.fill.usable_start(self.team.input());
         let r = self.team.set_start(d, start);
         if r.is_ok() {
-            self.team.mark_predicted(d, crate::app::readings::now());
+            self.team.mark_predicted(d, self.now);
             let name = self.team.input().divers[d].name.clone();
             let g = self.team.input().gauge_of(d);
             self.status.push(format!(

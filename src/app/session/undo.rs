@@ -61,7 +61,7 @@ mod tests {
         s.undo();
         assert_eq!(s.team.to_state().team, before.team);
         assert_eq!(s.team.input().divers[1].name, name);
-        let now = crate::app::readings::now();
+        let now = s.now();
         assert_eq!(s.team.start_status(1, now), StartStatus::Fresh);
         assert_eq!(s.undo_text(), "", "one undo only");
         // What is on disk is the team as it was.

@@ -4,7 +4,7 @@
 use crate::app::readings::{Readings, Source, StartStatus};
 use crate::plan::error::InputError;
 use crate::plan::rounding::round_down_to_step;
-use crate::plan::{Gauge, PressureUnit};
+use crate::plan::Gauge;
 
 use super::TeamController;
 
@@ -78,33 +78,5 @@ impl TeamController {
             self.stage_readings.clear(i);
         }
         Ok(())
-    }
-
-    /// The next gauge in the card's cycle: 10 bar, 5 bar, 100 psi, 50 psi, then 10 bar.
-    pub fn cycle_gauge(&mut self, i: usize) -> Result<(), InputError> {
-        let g = self.input.gauge_of(i);
-        let cycle = [
-            Gauge {
-                unit: PressureUnit::Bar,
-                step: 10.0,
-            },
-            Gauge {
-                unit: PressureUnit::Bar,
-                step: 5.0,
-            },
-            Gauge {
-                unit: PressureUnit::Psi,
-                step: 100.0,
-            },
-            Gauge {
-                unit: PressureUnit::Psi,
-                step: 50.0,
-            },
-        ];
-        let at = cycle
-            .iter()
-            .position(|c| *c == g)
-            .map_or(0, |k| (k + 1) % cycle.len());
-        self.set_gauge(i, cycle[at])
     }
 }

@@ -5,8 +5,9 @@ use super::{
     depth_text, gauge_text, rate_text, reading, rule_index, rule_warning, step_index, step_labels,
     temperature_text, turn_text,
 };
-use crate::app::readings::{StartStatus, now, when_text};
+use crate::app::readings::{StartStatus, when_text};
 use crate::plan::Water;
+use crate::plan::error::fmt_num;
 
 /// The Team page besides the cards.
 pub struct TeamPageVm {
@@ -82,7 +83,7 @@ pub fn diver_cards(s: &Session) -> Vec<DiverCardVm> {
     let input = s.team.input();
     let u = input.units;
     let warnings = &s.team.plan().warnings;
-    let now = now();
+    let now = s.now();
     input
         .divers
         .iter()
@@ -203,4 +204,40 @@ pub fn demo_note(s: &Session) -> String {
 /// The messages for the person, one a line; empty when there are none.
 pub fn status(s: &Session) -> String {
     s.status.text()
+}
+
+/// The gauge chooser of a diver's card while it is open.
+pub struct GaugeChooserVm {
+    pub title: String,
+    pub note: String,
+    /// Text, accessible label ("gauge psi 100"), whether it is the diver's gauge now.
+    pub choices: Vec<(String, String, bool)>,
+}
+
+pub fn gauge_chooser(s: &Session) -> Option<GaugeChooserVm> {
+    let i = s.gauge_chooser?;
+    let d = s.team.input().divers.get(i)?;
+    let now = s.team.input().gauge_of(i);
+    let read = s.team.start_status(i, s.now()) != StartStatus::Missing;
+    Some(GaugeChooserVm {
+        title: format!("Gauge of {}", d.name),
+        note: if read {
+            format!(
+                "The gauge {} reads in the water. A gauge in the other unit makes the start unread: read it again on that gauge.",
+                d.name
+            )
+        } else {
+            format!("The gauge {} reads in the water.", d.name)
+        },
+        choices: crate::app::session::GAUGES
+            .iter()
+            .map(|g| {
+                (
+                    format!("{}, {} {} steps", g.label(), fmt_num(g.step), g.label()),
+                    format!("gauge {} {}", g.label(), fmt_num(g.step)),
+                    *g == now,
+                )
+            })
+            .collect(),
+    })
 }

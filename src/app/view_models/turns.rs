@@ -3,7 +3,7 @@
 
 use super::super::session::Session;
 use super::{gauge_text, reading, temperature_text, turn_text, volume_down_text};
-use crate::app::readings::{StartStatus, now, when_text};
+use crate::app::readings::{StartStatus, when_text};
 use crate::plan::error::first_upper;
 use crate::plan::hand_check::{hand_working, turn_sentence};
 
@@ -14,14 +14,14 @@ pub fn stage_text(s: &Session, i: usize) -> String {
     let g = plan.divers[i].gauge;
     let name = &plan.divers[i].name;
     // A drop pressure only from a stage start read today.
-    match s.team.stage_status(i, now()) {
+    match s.team.stage_status(i, s.now()) {
         Some(StartStatus::Missing) => {
             return format!("Stage drop: read {name}'s stage gauge in the water first.");
         }
         Some(StartStatus::Old { at }) => {
             return format!(
                 "Stage drop: the stage start was entered {}; read the stage gauge again.",
-                when_text(at, now())
+                when_text(at, s.now())
             );
         }
         _ => {}
@@ -67,7 +67,7 @@ pub struct TurnRowVm {
 /// Why there are no turns yet, naming each diver whose start is not a reading taken
 /// today; None when every start is.
 pub fn starts_blocking(s: &Session) -> Option<String> {
-    let now = now();
+    let now = s.now();
     let input = s.team.input();
     let why: Vec<String> = s
         .team
@@ -98,7 +98,7 @@ pub fn starts_blocking(s: &Session) -> Option<String> {
 /// The same in a few words, for the Team page's one-line summary: "No turns yet. Read
 /// in the water: Ines, Bram. Check the gauge: Sol."
 pub fn starts_blocking_short(s: &Session) -> Option<String> {
-    let now = now();
+    let now = s.now();
     let input = s.team.input();
     let (mut read, mut check) = (Vec::new(), Vec::new());
     for i in s.team.readings().blocking(now) {
@@ -127,7 +127,7 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
     let plan = s.team.plan();
     let input = s.team.input();
     let ready = starts_blocking(s).is_none();
-    let now = now();
+    let now = s.now();
     plan.divers
         .iter()
         .enumerate()

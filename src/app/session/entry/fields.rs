@@ -50,7 +50,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             let d = input.divers.get(i)?;
             let g = input.gauge_of(i);
             // A start nobody read opens empty: the number must come from the gauge.
-            let unread = s.team.start_status(i, crate::app::readings::now())
+            let unread = s.team.start_status(i, s.now())
                 == crate::app::readings::StartStatus::Missing;
             Field {
                 buffer: KeypadBuffer::digits(
@@ -89,7 +89,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                 apply: apply(move |s, t| s.team.set_start(i, pressure(g.unit, t)?)),
                 // Done on a start is entering a reading taken now.
                 on_done: Some(apply(move |s, _| {
-                    s.team.mark_read(i, crate::app::readings::now());
+                    s.team.mark_read(i, s.now());
                     Ok(())
                 })),
             }
@@ -99,7 +99,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             let st = d.stage.as_ref()?;
             let g = input.gauge_of(i);
             // A stage nobody read today opens empty, as a main start does.
-            let unread = s.team.stage_status(i, crate::app::readings::now())
+            let unread = s.team.stage_status(i, s.now())
                 == Some(crate::app::readings::StartStatus::Missing);
             Field {
                 buffer: KeypadBuffer::digits(
@@ -132,7 +132,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                 // opened empty. Done is reading the stage gauge now.
                 revert: Some(vm::reading(g, st.start)),
                 on_done: Some(apply(move |s, _| {
-                    s.team.mark_stage_read(i, crate::app::readings::now());
+                    s.team.mark_stage_read(i, s.now());
                     Ok(())
                 })),
             }

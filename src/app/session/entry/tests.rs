@@ -183,7 +183,7 @@ fn opening_and_cancelling_an_imperial_start_changes_nothing() {
     let (_dir, mut s) = session();
     s.set_units(UnitSystem::Imperial);
     s.team.set_start(0, Pressure::from_psi(3000.0)).unwrap();
-    s.team.mark_read(0, crate::app::readings::now());
+    s.team.mark_read(0, s.now());
     let plan = s.team.plan().clone();
     s.open_entry(EntryTarget::Start(0));
     assert_eq!(s.entry.as_ref().unwrap().buffer().text(), "3000");
@@ -204,7 +204,7 @@ fn an_unread_start_opens_empty_and_a_bad_key_restores_the_placeholder() {
     s.cancel_entry();
     assert_eq!(start_bar(&s, 1), before);
     assert_eq!(
-        s.team.start_status(1, crate::app::readings::now()),
+        s.team.start_status(1, s.now()),
         crate::app::readings::StartStatus::Missing
     );
 }
