@@ -47,16 +47,22 @@ pub fn describe_margin(check: &StressCheck, names: &[String]) -> String {
         None => "No gas is spent before the turn, so there is nothing to share.".to_string(),
         Some((fail, donor)) => {
             let m = margin_for_display(check.margin);
-            let tail = if m < 1.0 {
-                " That is less than a normal-breathing exit: do not dive this plan."
+            let verdict = if m < 1.0 {
+                format!(
+                    "Not enough to bring a teammate out even at normal breathing (only {m:.2} ×): do not dive this plan."
+                )
             } else if m < 1.5 {
-                " Stressed breathing of 1.5–2× normal is common; consider a stricter rule."
+                format!(
+                    "Enough to bring a teammate out at {m:.2} × normal breathing; at 1.5 × it is not: consider a stricter rule."
+                )
             } else {
-                ""
+                format!(
+                    "Enough to bring a teammate out at up to {m:.2} × normal breathing (1.5 to 2 × is common under stress)."
+                )
             };
             format!(
-                "Worst case: {} out of gas at the turn, sharing with {}. The reserve covers both exits at up to {:.2}× normal breathing.{}",
-                names[fail], names[donor], m, tail
+                "{verdict} Worst case: {} out of gas at the turn, sharing with {}.",
+                names[fail], names[donor]
             )
         }
     }
@@ -71,7 +77,7 @@ pub fn describe_margin_at_first_turn(
 ) -> String {
     match (at_turn, first, minutes) {
         (Some(check), Some(i), Some(m)) if check.margin.is_finite() => format!(
-            "With the breathing rates entered, the team turns when {} does, after about {} min; the others have used less by then, and the reserve covers both exits at up to {:.2}× normal breathing.",
+            "With the breathing rates entered, the team turns when {} does, after about {} min; the others have used less by then, so it is enough at up to {:.2} × normal breathing.",
             names[i],
             m.floor() as i64,
             margin_for_display(check.margin)
@@ -93,6 +99,28 @@ mod tests {
         assert!((s.margin - 1.0).abs() < 1e-12);
         assert_eq!(margin_for_display(0.99999999999), 1.0);
         assert_eq!(margin_for_display(1.239), 1.23);
+    }
+
+    #[test]
+    fn the_verdict_comes_first() {
+        // Thirds on identical divers: exactly 1 × (common practice), enough at normal
+        // breathing and not at 1.5 ×.
+        let c = vec![Volume::from_litres(3000.0); 2];
+        let u = vec![Volume::from_litres(1000.0); 2];
+        let names = vec!["A".to_string(), "B".to_string()];
+        let text = describe_margin(&stress_check(&c, &u), &names);
+        assert!(
+            text.starts_with("Enough to bring a teammate out at 1.00 × normal breathing; at 1.5 × it is not"),
+            "{text}"
+        );
+        // Sixths: (1 − 1/6) / (2/6) = 2.5 ×.
+        let u = vec![Volume::from_litres(500.0); 2];
+        let text = describe_margin(&stress_check(&c, &u), &names);
+        assert!(text.starts_with("Enough to bring a teammate out at up to 2.50 ×"), "{text}");
+        // Halves: (1 − 1/2) / 1 = 0.5 ×.
+        let u = vec![Volume::from_litres(1500.0); 2];
+        let text = describe_margin(&stress_check(&c, &u), &names);
+        assert!(text.starts_with("Not enough"), "{text}");
     }
 
     #[test]

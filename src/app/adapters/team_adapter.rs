@@ -50,6 +50,8 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
     let (w, st) = handles(ui, s);
     a.on_new_team(move || act(&w, &st, |x| x.new_team()));
     let (w, st) = handles(ui, s);
+    a.on_next_dive(move || act(&w, &st, |x| x.next_dive()));
+    let (w, st) = handles(ui, s);
     a.on_pick_stage(move |i| act(&w, &st, |x| x.open_stage_picker(i as usize)));
     let (w, st) = handles(ui, s);
     a.on_pick_stage_mix(move |i| act(&w, &st, |x| x.open_stage_mix_picker(i as usize)));
@@ -76,6 +78,8 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
             gauge: c.gauge.into(),
             start_note: c.start_note.into(),
             confirm: c.confirm.into(),
+            read: c.read.into(),
+            start_ok: c.start_ok,
             sac: c.sac.into(),
             error: c.error.into(),
             has_stage: c.has_stage,

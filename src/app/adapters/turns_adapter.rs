@@ -25,9 +25,10 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
                 name: r.name.clone().into(),
                 turn: r.turn.clone().into(),
                 unit: r.unit.clone().into(),
+                read: vm::keep_units_together(&r.read).into(),
+                how: vm::keep_units_together(&r.how).into(),
+                sums: vm::keep_units_together(&r.sums).into(),
                 detail: vm::keep_units_together(&r.detail).into(),
-                set_by: vm::keep_units_together(&r.set_by).into(),
-                hand: vm::keep_units_together(&r.hand).into(),
                 minutes: vm::keep_units_together(&r.minutes).into(),
                 controlling: r.controlling,
                 predicted: r.predicted,
@@ -43,6 +44,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
     a.set_error(blocking.clone().into());
     let b = ui.global::<BuddyAdapter>();
     b.set_unit(vm::pressure_unit(s).into());
+    b.set_heading(vm::keep_units_together(&vm::buddy_heading(s)).into());
     b.set_note(blocking.into());
     b.set_rows(model(
         rows.iter()
@@ -52,6 +54,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
                 unit: r.unit.clone().into(),
                 controlling: r.controlling,
                 stage: vm::keep_units_together(&r.stage_short).into(),
+                read: r.read_short.clone().into(),
             })
             .collect(),
     ));

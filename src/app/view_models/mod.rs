@@ -30,8 +30,8 @@ pub use team::{
 };
 pub use tools::{ChartRowVm, ChartVm, FillVm, chart, fill};
 pub use turns::{
-    TurnRowVm, first_text, margin_text, pressure_unit, rule_text, stage_text, starts_blocking,
-    turn_rows, warnings,
+    TurnRowVm, buddy_heading, controllers, first_text, margin_text, pressure_unit, rule_head,
+    rule_text, stage_text, starts_blocking, turn_rows, warnings,
 };
 
 /// Float noise tolerated when a value is read as whole units.

@@ -71,6 +71,10 @@ pub struct DiverCardVm {
     pub start_note: String,
     /// "Still reads 220 bar" for a start entered earlier; empty otherwise.
     pub confirm: String,
+    /// Beside the gauge when there is nothing to confirm: "read 09:42", "not read".
+    pub read: String,
+    /// The start is a usable reading of this dive.
+    pub start_ok: bool,
     pub sac: String,
     pub error: String,
     pub has_stage: bool,
@@ -103,7 +107,16 @@ pub fn diver_cards(s: &Session) -> Vec<DiverCardVm> {
                 },
                 unit: g.label().to_string(),
                 gauge: gauge_text(g),
-                start_note: start_note(status, now),
+                start_note: match status {
+                    StartStatus::Fresh => format!("Start {}", s.read_text(i)),
+                    _ => start_note(status, now),
+                },
+                read: match status {
+                    StartStatus::Missing => "not read".to_string(),
+                    StartStatus::Old { .. } => String::new(),
+                    _ => s.read_text(i),
+                },
+                start_ok: status == StartStatus::Fresh,
                 confirm: match status {
                     StartStatus::Old { .. } => format!("Still reads {read} {}", g.label()),
                     _ => String::new(),
@@ -168,10 +181,16 @@ pub fn team_summary(s: &Session) -> String {
             )
         })
         .collect();
+    let who: Vec<&str> = super::controllers(s)
+        .into_iter()
+        .map(|i| plan.divers[i].name.as_str())
+        .collect();
     format!(
-        "Turns: {} · {} controls (least usable gas)",
+        "Turns: {} · {} control{} (least usable gas) · {}",
         turns.join(" · "),
-        plan.controlling_diver().name
+        who.join(" and "),
+        if who.len() == 1 { "s" } else { "" },
+        super::rule_head(s)
     )
 }
 

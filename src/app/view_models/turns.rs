@@ -2,10 +2,13 @@
 //! rule line, the stress margin and who turns first.
 
 use super::super::session::Session;
-use super::{gauge_text, reading, temperature_text, turn_text, volume_down_text};
+use super::{gauge_text, reading, temperature_text, turn_text, whole_down};
 use crate::app::readings::{StartStatus, when_text};
-use crate::plan::error::first_upper;
-use crate::plan::hand_check::{hand_working, turn_sentence};
+use crate::plan::error::fmt_num;
+use crate::plan::gas_model::ModelKind;
+use crate::plan::hand_check::{
+    AllowanceSource, allowance_sentence, allowance_sources, hand_working, turn_how, turn_sentence,
+};
 
 /// "Drop stage at 140 bar (Aluminium 40, EAN32, start 200 bar)" for a diver with a
 /// stage, else empty.
@@ -47,14 +50,17 @@ pub fn stage_text(s: &Session, i: usize) -> String {
 
 pub struct TurnRowVm {
     pub name: String,
-    /// The turn on the diver's gauge, or "—" while a start is not read today.
+    /// The turn on the diver's gauge, or "—" while a start is not read.
     pub turn: String,
     pub unit: String,
+    /// "Start 218 bar, read 09:42" (or why there is no usable start).
+    pub read: String,
+    /// One plain line: how the turn was found.
+    pub how: String,
+    /// The pencil sums and the real-gas comparison, one tap away.
+    pub sums: String,
+    /// Cylinders, mix and gauge.
     pub detail: String,
-    /// How the shown turn follows from the hand and real-gas figures, in one reading.
-    pub set_by: String,
-    /// The pencil sums behind the hand figure.
-    pub hand: String,
     pub minutes: String,
     pub controlling: bool,
     /// The turn comes from a start predicted from the fill, not read in the water.
@@ -62,6 +68,8 @@ pub struct TurnRowVm {
     pub stage: String,
     /// Short form for the buddy view: "drop stage at 160 bar".
     pub stage_short: String,
+    /// "read 09:42" for the buddy view.
+    pub read_short: String,
 }
 
 /// Why there are no turns yet, naming each diver whose start is not a reading taken
@@ -123,11 +131,22 @@ pub fn starts_blocking_short(s: &Session) -> Option<String> {
     Some(text)
 }
 
+/// The divers whose gas sets an allowance that a shown turn uses.
+pub fn controllers(s: &Session) -> Vec<usize> {
+    let mut v: Vec<usize> = allowance_sources(s.team.input(), s.team.plan())
+        .iter()
+        .map(|a| a.diver)
+        .collect();
+    v.dedup();
+    v
+}
+
 pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
     let plan = s.team.plan();
     let input = s.team.input();
     let ready = starts_blocking(s).is_none();
     let now = s.now();
+    let controllers = controllers(s);
     plan.divers
         .iter()
         .enumerate()
@@ -136,6 +155,7 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
             let status = s.team.start_status(i, now);
             let predicted = status == StartStatus::Predicted;
             let hand = hand_working(input, plan, i);
+            let start = format!("{} {}", reading(g, d.start), g.label());
             TurnRowVm {
                 name: d.name.clone(),
                 turn: if ready {
@@ -144,34 +164,38 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
                     "—".to_string()
                 },
                 unit: g.label().to_string(),
+                read: match status {
+                    StartStatus::Missing => "Start not read".to_string(),
+                    StartStatus::Old { at } => {
+                        format!("Start entered {}: check the gauge", when_text(at, now))
+                    }
+                    StartStatus::Predicted => {
+                        format!("Start {start}, {} from the fill, not read", s.read_text(i))
+                    }
+                    StartStatus::Fresh => format!("Start {start}, {}", s.read_text(i)),
+                },
+                how: if ready {
+                    turn_how(plan, i)
+                } else {
+                    String::new()
+                },
+                sums: if ready {
+                    format!(
+                        "By hand: {}. {}. {}. Exact figures: {}.",
+                        hand.content,
+                        allowance_sentence(input, plan),
+                        hand.turn,
+                        turn_sentence(plan, i)
+                    )
+                } else {
+                    String::new()
+                },
                 detail: format!(
-                    "{} · {} · {} · gauge {}",
-                    match status {
-                        StartStatus::Missing => "Start not read today".to_string(),
-                        StartStatus::Old { at } =>
-                            format!("Start entered {}: check the gauge", when_text(at, now)),
-                        StartStatus::Predicted => format!(
-                            "Start {} {} (predicted from the fill, not read)",
-                            reading(g, d.start),
-                            g.label()
-                        ),
-                        StartStatus::Fresh =>
-                            format!("Start {} {}", reading(g, d.start), g.label()),
-                    },
+                    "{} · {} · gauge {}",
                     s.team.labels()[i],
                     input.divers[i].mix.label(),
                     gauge_text(g)
                 ),
-                set_by: if ready {
-                    first_upper(&turn_sentence(plan, i))
-                } else {
-                    String::new()
-                },
-                hand: if ready {
-                    format!("By hand: {}; {}", hand.content, hand.turn)
-                } else {
-                    String::new()
-                },
                 minutes: match (ready, d.minutes_to_turn) {
                     (true, Some(m)) => format!(
                         "About {} min to turn at the planned depth",
@@ -180,7 +204,7 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
                     _ => String::new(),
                 },
                 // Who controls follows from the starts: only once every one is read.
-                controlling: ready && d.controlling,
+                controlling: ready && controllers.contains(&i),
                 predicted: ready && predicted,
                 stage: if ready {
                     stage_text(s, i)
@@ -205,36 +229,99 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
                     }
                     parts.join(" · ")
                 },
+                read_short: s.read_text(i),
             }
         })
         .collect()
 }
 
-/// The rule line: the rule, the water and what each diver may use going in. While a
-/// start is not read today, only the rule and the water: who controls and how much each
-/// may use follow from the starts.
+/// The rule and water the turns are made with: "Rule of thirds · fresh water 12 °C".
+pub fn rule_head(s: &Session) -> String {
+    let input = s.team.input();
+    format!(
+        "Rule of {} · {} water {}",
+        input.rule.name(),
+        super::water_text(s).to_lowercase(),
+        temperature_text(input.units, input.water_temp)
+    )
+}
+
+/// The buddy view's top line: what the turns were made with.
+pub fn buddy_heading(s: &Session) -> String {
+    let demo = if s.team.is_demo() {
+        "DEMO, invented divers · "
+    } else {
+        ""
+    };
+    format!("{demo}TURNS · {} · own gauges · tap to close", rule_head(s))
+}
+
+/// The rule line: the rule, the water and where each shown turn's allowance comes from.
+/// While a start is not read, only the rule and the water.
 pub fn rule_text(s: &Session) -> String {
     let input = s.team.input();
     let u = input.units;
+    let vu = u.volume_label();
     let plan = s.team.plan();
-    let c = plan.controlling_diver();
-    let head = format!(
-        "Rule of {} · water {}",
-        input.rule.name(),
-        temperature_text(u, input.water_temp)
-    );
+    let head = rule_head(s);
     if starts_blocking(s).is_some() {
         return format!(
             "{head}. Who controls and how much each diver may use need every start read in the water."
         );
     }
-    format!(
-        "{head} · each diver may use {} going in by hand ({} by real gas; the turns take the more careful of the two). {} controls: {} has the least usable gas, and that sets everyone's allowance.",
-        volume_down_text(u, plan.team_allowance_hand),
-        volume_down_text(u, plan.team_allowance_real),
-        c.name,
-        c.name,
-    )
+    let sources = allowance_sources(input, plan);
+    let n = input.rule.denominator();
+    let line = |a: &AllowanceSource| {
+        format!(
+            "{} {vu} ({}) ÷ {n} = {} {vu}",
+            fmt_num(whole_down(a.content)),
+            plan.divers[a.diver].name,
+            fmt_num(whole_down(a.allowance)),
+        )
+    };
+    let names = |v: &[usize]| {
+        v.iter()
+            .map(|&i| plan.divers[i].name.as_str())
+            .collect::<Vec<_>>()
+            .join(", ")
+    };
+    match sources.as_slice() {
+        [a] => format!(
+            "{head}. Each diver may use {} {vu} going in: {} ({}). {} controls: least usable gas.",
+            fmt_num(whole_down(a.allowance)),
+            line(a),
+            model_words(a.model),
+            plan.divers[a.diver].name,
+        ),
+        _ => {
+            let parts: Vec<String> = sources
+                .iter()
+                .map(|a| {
+                    format!(
+                        "Turns of {} use the allowance {}: {}.",
+                        names(&a.turns),
+                        model_words(a.model),
+                        line(a)
+                    )
+                })
+                .collect();
+            let mut who: Vec<usize> = sources.iter().map(|a| a.diver).collect();
+            who.dedup();
+            let verb = if who.len() == 1 { "controls" } else { "control" };
+            format!(
+                "{head}. {} {} {verb}: least usable gas in each method.",
+                parts.join(" "),
+                names(&who).replace(", ", " and "),
+            )
+        }
+    }
+}
+
+fn model_words(m: ModelKind) -> &'static str {
+    match m {
+        ModelKind::Hand => "by hand",
+        ModelKind::Real => "by real gas",
+    }
 }
 
 /// The out-of-gas check, once every start is read today.
