@@ -16,6 +16,8 @@ pub mod view_models;
 slint::include_modules!();
 
 use std::cell::RefCell;
+
+use slint::ComponentHandle;
 use std::rc::Rc;
 
 use crate::storage::Store;
@@ -26,22 +28,50 @@ use session::Session;
 pub struct App {
     pub window: AppWindow,
     pub session: Rc<RefCell<Session>>,
+    /// Looks at the clock now and then, so a start that ages past three hours stops
+    /// making turns on screen even when nobody touches the phone.
+    _clock_watch: slint::Timer,
 }
+
+/// How often the window looks at the clock between actions.
+pub const CLOCK_WATCH: std::time::Duration = std::time::Duration::from_secs(20);
 
 impl App {
     /// Build the window over the files in `data_dir`.
     pub fn new(data_dir: impl Into<std::path::PathBuf>) -> Result<App, slint::PlatformError> {
+        App::with_clock(data_dir, Rc::new(clock::SystemClock))
+    }
+
+    /// The same, reading the time from `clock` (tests put the app at any time).
+    pub fn with_clock(
+        data_dir: impl Into<std::path::PathBuf>,
+        clock: Rc<dyn clock::Clock>,
+    ) -> Result<App, slint::PlatformError> {
         let window = AppWindow::new()?;
-        let session = Rc::new(RefCell::new(Session::open(Store::new(data_dir))));
+        let session = Rc::new(RefCell::new(Session::open_with_clock(
+            Store::new(data_dir),
+            clock,
+        )));
         adapters::connect_all(&window, &session);
         adapters::refresh_all(&window, &session.borrow());
-        Ok(App { window, session })
+        let watch = slint::Timer::default();
+        let (w, s) = (window.as_weak(), session.clone());
+        watch.start(slint::TimerMode::Repeated, CLOCK_WATCH, move || {
+            let changed = s.borrow_mut().tick();
+            if let (true, Some(ui)) = (changed, w.upgrade()) {
+                adapters::refresh_all(&ui, &s.borrow());
+            }
+        });
+        Ok(App {
+            window,
+            session,
+            _clock_watch: watch,
+        })
     }
 
     /// Follow the system's text size: 1 is normal, about 1.3 is Android's "large".
     /// Kept within 0.8 to 2 so a stray value cannot make the app unusable.
     pub fn set_font_scale(&self, scale: f32) {
-        use slint::ComponentHandle;
         let scale = if scale.is_finite() {
             scale.clamp(0.8, 2.0)
         } else {

@@ -18,6 +18,19 @@ impl Session {
         );
     }
 
+    /// Between actions: read the clock, and say whether any start or stage start changed
+    /// what it is worth since the last look (then the views must be drawn again).
+    pub fn tick(&mut self) -> bool {
+        self.begin_action();
+        let now = self.now;
+        let seen: Vec<(StartStatus, Option<StartStatus>)> = (0..self.team.len())
+            .map(|i| (self.team.start_status(i, now), self.team.stage_status(i, now)))
+            .collect();
+        let changed = seen != self.seen_statuses;
+        self.seen_statuses = seen;
+        changed
+    }
+
     /// "read 09:42" (or "predicted 09:42") for a start usable now; empty otherwise.
     pub fn read_text(&self, i: usize) -> String {
         let Some(r) = self.team.readings().get(i) else {
@@ -67,6 +80,23 @@ mod tests {
         s.begin_action();
         assert!(!s.team.turns_ready(s.now()));
         assert_eq!(s.read_text(0), "", "an old start says no read time");
+    }
+
+    #[test]
+    fn a_tick_says_when_a_start_ages_out() {
+        let clock = ManualClock::at(LATE);
+        let (_dir, mut s) = session_at(&clock);
+        s.begin_action();
+        s.confirm_start(0);
+        assert!(s.tick(), "the first look sees new statuses");
+        clock.advance(60);
+        assert!(!s.tick(), "a minute later nothing changed");
+        clock.advance(3 * 3600);
+        assert!(s.tick(), "three hours later the start is old");
+        assert!(matches!(
+            s.team.start_status(0, s.now()),
+            StartStatus::Old { .. }
+        ));
     }
 
     #[test]

@@ -55,6 +55,11 @@ pub struct Session {
     clock: Rc<dyn Clock>,
     /// The clock's reading for the action under way (`begin_action`).
     now: i64,
+    /// What each start was worth at the last `tick`.
+    seen_statuses: Vec<(
+        crate::app::readings::StartStatus,
+        Option<crate::app::readings::StartStatus>,
+    )>,
     pub settings: Settings,
     pub team: TeamController,
     pub locker: LockerController,
@@ -123,6 +128,7 @@ impl Session {
         let mut session = Session {
             clock,
             now,
+            seen_statuses: Vec::new(),
             exchange: Exchange::for_data_dir(store.dir()),
             store,
             settings,

@@ -85,10 +85,35 @@ pub fn chart(s: &Session) -> Option<ChartVm> {
     // Rows and cells on my gauge, columns on the teammate's, each in its own unit.
     // Conservative reading: own start rounded UP to a row, the teammate's DOWN to a column
     // (a higher own start or a lower teammate start never lowers the turn).
+    // The planned starts are boxed only where they are readings of this dive, as the
+    // Turns page shows turns only from them.
+    let now = s.now();
+    let usable = |i: usize| s.team.start_status(i, now).usable();
     let mine = chart.my_gauge.value(input.divers[chart.me].start);
     let theirs = chart.buddy_gauge.value(input.divers[chart.buddy].start);
-    let my_row = chart.my_starts.iter().rposition(|x| *x >= mine - 1e-9);
-    let their_col = chart.buddy_starts.iter().position(|x| *x <= theirs + 1e-9);
+    let my_row = chart
+        .my_starts
+        .iter()
+        .rposition(|x| *x >= mine - 1e-9)
+        .filter(|_| usable(chart.me));
+    let their_col = chart
+        .buddy_starts
+        .iter()
+        .position(|x| *x <= theirs + 1e-9)
+        .filter(|_| usable(chart.buddy));
+    let unread: Vec<&str> = [chart.me, chart.buddy]
+        .iter()
+        .filter(|&&i| !usable(i))
+        .map(|&i| input.divers[i].name.as_str())
+        .collect();
+    let why = if unread.is_empty() {
+        String::new()
+    } else {
+        format!(
+            "No planned start is boxed: the start of {} is not a reading of this dive (read it in the water; a reading counts for three hours). ",
+            unread.join(" and ")
+        )
+    };
     Some(ChartVm {
         diver: input.divers[chart.me].name.clone(),
         teammate: input.divers[chart.buddy].name.clone(),
@@ -109,12 +134,12 @@ pub fn chart(s: &Session) -> Option<ChartVm> {
                 planned: Some(r) == my_row,
             })
             .collect(),
-        note: if input.divers.len() > 2 {
-            "With more than one teammate, read your chart against each and keep the HIGHEST turn. Between rows, read the higher start; between columns, the lower teammate start."
-        } else {
-            "Between two rows, read the higher start; between two columns, the lower teammate start."
-        }
-        .to_string(),
+        note: why
+            + if input.divers.len() > 2 {
+                "With more than one teammate, read your chart against each and keep the HIGHEST turn. Between rows, read the higher start; between columns, the lower teammate start."
+            } else {
+                "Between two rows, read the higher start; between two columns, the lower teammate start."
+            },
     })
 }
 
@@ -135,11 +160,22 @@ mod tests {
     }
 
     #[test]
-    fn the_chart_marks_the_planned_starts() {
+    fn the_chart_marks_the_planned_starts_only_once_read() {
         let dir = tempfile::tempdir().unwrap();
-        let s = Session::open(Store::new(dir.path()));
+        let mut s = Session::open(Store::new(dir.path()));
+        // The demo's starts were read by nobody: nothing boxed, and the note says whose.
+        let c = chart(&s).unwrap();
+        assert_eq!(c.rows.iter().filter(|r| r.planned).count(), 0);
+        assert_eq!(c.planned_column, -1);
+        assert!(c.note.contains("Ines and Bram"), "{}", c.note);
+        s.confirm_start(0);
         let c = chart(&s).unwrap();
         assert_eq!(c.rows.iter().filter(|r| r.planned).count(), 1);
+        assert_eq!(c.planned_column, -1, "Bram is still unread");
+        assert!(c.note.starts_with("No planned start is boxed: the start of Bram "));
+        s.confirm_start(1);
+        let c = chart(&s).unwrap();
+        assert!(!c.note.contains("boxed"), "{}", c.note);
         assert!(c.planned_column >= 0);
         assert_eq!(c.rows[0].cells.len(), c.columns.len());
     }
@@ -148,8 +184,10 @@ mod tests {
     fn a_chart_across_bar_and_psi_boxes_both_planned_starts_in_their_units() {
         let dir = tempfile::tempdir().unwrap();
         let mut s = Session::open(Store::new(dir.path()));
-        // Bram (the teammate of Ines's chart) reads psi.
+        // Bram (the teammate of Ines's chart) reads psi; both read their gauges.
         s.set_gauge(1, crate::app::session::GAUGES[2]);
+        s.confirm_start(0);
+        s.confirm_start(1);
         let c = chart(&s).unwrap();
         assert_eq!((c.unit.as_str(), c.column_unit.as_str()), ("bar", "psi"));
         let bram = s
