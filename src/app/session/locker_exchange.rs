@@ -117,7 +117,9 @@ impl Session {
                 Err(e) => lines.push(format!("Not imported: {e}")),
             }
         }
-        if changed {
+        // Saved before any file moves (writing only if something changed; an earlier
+        // import that could not be saved is saved now).
+        if changed || self.unsaved.files().contains(&SavedFile::Locker) {
             self.save_locker();
         }
         if self.unsaved.files().contains(&SavedFile::Locker) {
