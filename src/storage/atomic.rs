@@ -17,7 +17,7 @@ pub use super::reading::{
 };
 
 /// Bytes written in one step.
-const CHUNK: usize = 64 * 1024;
+const CHUNK: usize = 16 * 1024;
 
 /// The steps of a write, in order. A save interrupted before `Rename` leaves the old file.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
@@ -121,10 +121,19 @@ pub fn write_steps(
         }
     }
     // The new file is in place; syncing the folder makes the rename durable.
-    if let Err(Interrupt::Kill) = before(WriteStep::SyncFolder) {
-        return Err(std::io::Error::other(
-            "the write was stopped (simulated kill)",
-        ));
+    match before(WriteStep::SyncFolder) {
+        Ok(()) => {}
+        Err(Interrupt::Kill) => {
+            return Err(std::io::Error::other(
+                "the write was stopped (simulated kill)",
+            ));
+        }
+        Err(Interrupt::Fail(e)) => {
+            return Err(std::io::Error::new(
+                e.kind(),
+                format!("{e} (syncing the folder; the new {name} is in place)"),
+            ));
+        }
     }
     if let Ok(d) = fs::File::open(dir) {
         let _ = d.sync_all();
