@@ -1,5 +1,7 @@
 //! Fuzzing with proptest: the team-file parser, the SPEC parser, the planner (through
-//! team files) and the direct real-gas inverse (against the bisection).
+//! team files), the direct real-gas inverse (against the bisection), the locker file (the
+//! app's reader) and the import file, set names and notes, and the card (every name the
+//! checks accept gives well-formed XML).
 //!
 //! The normal suite runs a short pass of each. The long pass (100,000 cases each) is
 //! ignored by default:
@@ -408,5 +410,291 @@ fn fuzz_direct_inverse_long() {
         long_cases(),
         inverse_case(),
         check_inverse,
+    );
+}
+
+// ---- the locker file, the import file, set names and notes, the card -----------------
+
+use turnsheet::formats::card_svg::{CardHeading, card_svg};
+use turnsheet::storage::Store;
+use turnsheet::storage::atomic::kept_aside;
+use turnsheet::storage::locker::{
+    LockerFile, MAX_LOCKER_SETS, MAX_SET_NAME_CHARS, check_set_name, check_set_note,
+    read_locker_file,
+};
+
+/// Text a hostile or careless file or person could give: anything printable, controls,
+/// escape sequences, bidirectional controls, non-characters, decomposed letters, huge.
+fn hostile_text() -> impl Strategy<Value = String> {
+    prop_oneof![
+        4 => "\\PC{0,45}",
+        3 => any::<String>(),
+        2 => prop::collection::vec(
+            prop::sample::select(vec![
+                "a", "Z", " ", "é", "e\u{301}", "\u{1b}[31m", "\t", "\n", "\u{0}", "\u{7f}",
+                "\u{85}", "\u{202e}", "\u{2066}", "\u{2069}", "\u{200f}", "\u{ffff}",
+                "\u{fdd0}", "\u{1fffe}", "\u{2028}", "<", "&", "\"", "'", "]]>", "😀",
+            ]),
+            0..30,
+        )
+        .prop_map(|v| v.concat()),
+        1 => (0usize..200_000).prop_map(|n| "x".repeat(n)),
+    ]
+}
+
+fn locker_entry_value() -> impl Strategy<Value = Value> {
+    (
+        prop_oneof![
+            3 => (1u64..300).prop_map(|v| json!(v)),
+            1 => prop::sample::select(vec![0u64, 1 << 53, (1 << 53) - 1, u64::MAX]).prop_map(|v| json!(v)),
+            1 => hostile_number(),
+        ],
+        hostile_text(),
+        cylinders_value(),
+        prop::sample::select(vec!["steel", "aluminium", "composite", "gold", ""]),
+        hostile_text(),
+        any::<bool>(),
+        0usize..8,
+    )
+        .prop_map(|(id, name, cyl, material, note, mine, drop)| {
+            let mut e = json!({"id": id, "name": name, "cylinders": cyl,
+                "material": material, "note": note, "mine": mine});
+            // A field removed, or one added that the format does not know.
+            let keys = ["id", "name", "cylinders", "material", "note", "mine"];
+            if let Some(k) = keys.get(drop) {
+                e.as_object_mut().unwrap().remove(*k);
+            } else if drop == 7 {
+                e["colour"] = json!("red");
+            }
+            e
+        })
+}
+
+/// Locker files as bytes: valid-looking ones, mutated ones (truncated, bytes changed,
+/// fields swapped), too many sets, deep nesting and plain noise.
+fn locker_bytes() -> impl Strategy<Value = Vec<u8>> {
+    let value = || {
+        (
+            prop_oneof![4 => Just(json!(1)), 1 => hostile_number()],
+            prop::collection::vec(locker_entry_value(), 0..6),
+        )
+            .prop_map(|(schema, entries)| json!({"schema": schema, "entries": entries}))
+    };
+    prop_oneof![
+        4 => value().prop_map(|v| v.to_string().into_bytes()),
+        2 => (value(), any::<prop::sample::Index>(), any::<u8>()).prop_map(|(v, at, b)| {
+            let mut bytes = serde_json::to_vec_pretty(&v).unwrap();
+            let i = at.index(bytes.len().max(1));
+            if i < bytes.len() {
+                if b % 2 == 0 { bytes.truncate(i) } else { bytes[i] = b }
+            }
+            bytes
+        }),
+        1 => value().prop_map(|v| {
+            // A field renamed, and the document followed by another one.
+            let text = v.to_string().replace("\"name\"", "\"nam\"");
+            format!("{text} {{}}").into_bytes()
+        }),
+        1 => (MAX_LOCKER_SETS - 1..MAX_LOCKER_SETS + 3).prop_map(|n| {
+            let entries: Vec<Value> = (0..n)
+                .map(|i| json!({"id": i + 1, "name": format!("S{i}"),
+                    "cylinders": {"count": 2, "water_l": 12.0, "working_bar": 232.0}}))
+                .collect();
+            json!({"schema": 1, "entries": entries}).to_string().into_bytes()
+        }),
+        1 => (1usize..5000).prop_map(|d| {
+            format!("{{\"schema\": 1, \"entries\": {}{}}}", "[".repeat(d), "]".repeat(d)).into_bytes()
+        }),
+        1 => prop::collection::vec(any::<u8>(), 0..300),
+    ]
+}
+
+/// The app's reader (`Store::load_locker`, which sets an unreadable file aside) and the
+/// import reader (`read_locker_file`, then `merge`) on the same bytes.
+fn check_locker_bytes(bytes: Vec<u8>) -> Result<bool, TestCaseError> {
+    let dir = tempfile::tempdir().unwrap();
+    let path = dir.path().join("locker.json");
+    std::fs::write(&path, &bytes).unwrap();
+    let imported = read_locker_file(&path);
+    let (locker, messages) = Store::new(dir.path()).load_locker();
+    prop_assert!(locker.entries.len() <= MAX_LOCKER_SETS);
+    let mut ids: Vec<u64> = locker.entries.iter().map(|e| e.id).collect();
+    ids.sort();
+    ids.dedup();
+    prop_assert_eq!(
+        ids.len(),
+        locker.entries.len(),
+        "ids are unique once loaded"
+    );
+    for (i, e) in locker.entries.iter().enumerate() {
+        prop_assert!(e.check_text(&format!("entries[{i}]")).is_ok(), "{e:?}");
+    }
+    let kept = kept_aside(dir.path(), "locker.json");
+    if locker.entries.is_empty() && !kept.is_empty() {
+        prop_assert_eq!(
+            std::fs::read(&kept[0]).unwrap(),
+            bytes.clone(),
+            "kept byte-identical"
+        );
+        prop_assert!(
+            messages
+                .iter()
+                .any(|m| m.contains(&*kept[0].to_string_lossy()))
+        );
+    }
+    match imported {
+        Ok(incoming) => {
+            let (merged, report) = LockerFile::default()
+                .merge(&incoming)
+                .map_err(|e| TestCaseError::fail(e.to_string()))?;
+            for (i, e) in merged.entries.iter().enumerate() {
+                prop_assert!(e.check_text(&format!("entries[{i}]")).is_ok(), "{e:?}");
+                prop_assert!(!e.mine);
+            }
+            for (name, why) in &report.skipped {
+                prop_assert!(!why.is_empty());
+                prop_assert!(
+                    name.chars()
+                        .all(|c| turnsheet::plan::text::refused_char(c).is_none()),
+                    "a skipped name is shown safely: {name:?}"
+                );
+            }
+            Ok(true)
+        }
+        Err(e) => {
+            prop_assert!(!e.field.is_empty() && !e.message.is_empty(), "{e:?}");
+            Ok(false)
+        }
+    }
+}
+
+/// A set's name and note: accepted only without a refused character and within the
+/// limits; refused with the field named.
+fn check_set_text(text: String) -> Result<bool, TestCaseError> {
+    let clean = text
+        .trim()
+        .chars()
+        .all(|c| turnsheet::plan::text::refused_char(c).is_none());
+    let n = text.trim().chars().count();
+    match check_set_name("NAME", &text) {
+        Ok(()) => prop_assert!(clean && (1..=MAX_SET_NAME_CHARS).contains(&n)),
+        Err(e) => prop_assert_eq!(e.field, "NAME"),
+    }
+    match check_set_note("--note", &text) {
+        Ok(()) => prop_assert!(clean),
+        Err(e) => {
+            prop_assert_eq!(&e.field, "--note");
+            prop_assert!(!e.message.contains('\u{1b}'), "{}", e.message);
+        }
+    }
+    let mut l = turnsheet::app::locker_controller::LockerController::default();
+    let set = parse_cylinder_spec("2x12L@232bar").unwrap();
+    let added = l.add_set(&text, &set, Default::default());
+    prop_assert!(added.is_ok(), "{added:?}");
+    prop_assert!(
+        l.entries()[0].check_text("entries[0]").is_ok(),
+        "{:?}",
+        l.entries()
+    );
+    Ok(check_set_name("NAME", &text).is_ok())
+}
+
+/// Any diver name (and dive name) the checks accept gives a well-formed card; any other
+/// is refused naming the field.
+fn check_card_name((name, dive): (String, String)) -> Result<bool, TestCaseError> {
+    let mut team: Value = serde_json::from_str(DEMO).unwrap();
+    team["divers"][0]["name"] = json!(name);
+    let input = TeamFile::parse(&team.to_string()).and_then(|f| f.to_input());
+    let planned = input.and_then(|t| plan_team(&t).map(|p| (t, p)));
+    match planned {
+        Ok((t, p)) => {
+            let dive = turnsheet::plan::text::check_text("--dive", &dive)
+                .ok()
+                .map(|()| dive);
+            let heading = CardHeading {
+                dive,
+                date: Some("today".into()),
+            };
+            let svg = card_svg(&heading, &t, &p, &[]);
+            let doc = roxmltree::Document::parse(&svg);
+            prop_assert!(doc.is_ok(), "not well-formed: {:?}", doc.err());
+            let text: String = doc
+                .unwrap()
+                .descendants()
+                .filter_map(|n| n.text())
+                .collect();
+            prop_assert!(
+                text.contains(t.divers[0].name.trim()),
+                "the name is on the card"
+            );
+            Ok(true)
+        }
+        Err(e) => {
+            prop_assert!(e.field.starts_with("divers[0].name"), "{e}");
+            Ok(false)
+        }
+    }
+}
+
+#[test]
+fn fuzz_locker_and_import_files_short() {
+    fuzz(
+        "locker and import files",
+        SHORT,
+        locker_bytes(),
+        check_locker_bytes,
+    );
+}
+
+#[test]
+fn fuzz_set_names_and_notes_short() {
+    fuzz(
+        "set names and notes",
+        SHORT * 3,
+        hostile_text(),
+        check_set_text,
+    );
+}
+
+#[test]
+fn fuzz_card_names_short() {
+    fuzz(
+        "card names",
+        SHORT,
+        (hostile_text(), hostile_text()),
+        check_card_name,
+    );
+}
+
+#[test]
+#[ignore = "long fuzzing pass: cargo test --release --test fuzz -- --ignored"]
+fn fuzz_locker_and_import_files_long() {
+    fuzz(
+        "locker and import files",
+        long_cases(),
+        locker_bytes(),
+        check_locker_bytes,
+    );
+}
+
+#[test]
+#[ignore = "long fuzzing pass: cargo test --release --test fuzz -- --ignored"]
+fn fuzz_set_names_and_notes_long() {
+    fuzz(
+        "set names and notes",
+        long_cases(),
+        hostile_text(),
+        check_set_text,
+    );
+}
+
+#[test]
+#[ignore = "long fuzzing pass: cargo test --release --test fuzz -- --ignored"]
+fn fuzz_card_names_long() {
+    fuzz(
+        "card names",
+        long_cases(),
+        (hostile_text(), hostile_text()),
+        check_card_name,
     );
 }

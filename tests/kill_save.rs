@@ -206,3 +206,72 @@ fn killed_while_saving_the_locker_is_the_old_or_the_new_one() {
     // Kills landed both before and after the rename of a save in flight.
     assert!(old > 0 && new > 0, "old {old}, new {new}");
 }
+
+/// The same save stopped at every step of the one writer (`write_steps`): killed there
+/// (nothing cleaned up) or failing there (an I/O error, as on a full disk). The locker is
+/// then the old one or the new one, never neither, and the next save works.
+#[test]
+fn a_save_stopped_at_every_write_step_leaves_the_old_or_the_new_locker() {
+    use turnsheet::storage::atomic::{Interrupt, WriteStep, write_steps};
+    let dir = tempfile::tempdir().unwrap();
+    let path = dir.path().join(LOCKER_FILE);
+    let mut store = Store::new(dir.path());
+    let mut steps_seen = 0;
+    let (mut kept_old, mut kept_new) = (0, 0);
+    for n in 0..2u64 {
+        store.save_locker(&big_locker(n)).unwrap();
+        let new = big_locker(n + 1);
+        let bytes = serde_json::to_string_pretty(&new).unwrap() + "\n";
+        // Every step this write takes, in order.
+        let mut all = Vec::new();
+        let probe = dir.path().join("probe.json");
+        write_steps(&probe, bytes.as_bytes(), &mut |s| {
+            all.push(s);
+            Ok(())
+        })
+        .unwrap();
+        assert!(
+            all.iter()
+                .filter(|s| matches!(s, WriteStep::Write(_)))
+                .count()
+                > 1
+        );
+        for (k, stop_at) in all.iter().enumerate() {
+            for kill in [true, false] {
+                store.save_locker(&big_locker(n)).unwrap();
+                let r = write_steps(&path, bytes.as_bytes(), &mut |s| {
+                    if s != *stop_at {
+                        Ok(())
+                    } else if kill {
+                        Err(Interrupt::Kill)
+                    } else {
+                        Err(Interrupt::Fail(std::io::Error::other(
+                            "disk full (simulated)",
+                        )))
+                    }
+                });
+                let e = r.expect_err("stopped");
+                if !kill && *stop_at != WriteStep::SyncFolder {
+                    assert!(e.to_string().contains("is unchanged"), "{stop_at:?}: {e}");
+                }
+                let on_disk = read_locker(dir.path());
+                let after_rename = k > all.iter().position(|s| *s == WriteStep::Rename).unwrap();
+                if after_rename {
+                    assert_eq!(on_disk, new, "{stop_at:?}: the new locker once renamed");
+                    kept_new += 1;
+                } else {
+                    assert_eq!(on_disk, big_locker(n), "{stop_at:?}: the old locker before");
+                    kept_old += 1;
+                }
+                steps_seen += 1;
+            }
+        }
+    }
+    // The next save works, whatever temp files a killed writer left.
+    store.save_locker(&big_locker(9)).unwrap();
+    assert_eq!(read_locker(dir.path()), big_locker(9));
+    eprintln!(
+        "write steps: {steps_seen} stops (kill and failure at each step); old kept {kept_old}, new kept {kept_new}"
+    );
+    assert!(kept_new > 0 && kept_old > 0);
+}

@@ -103,6 +103,8 @@ pub fn run_desktop() -> i32 {
     {
         app.set_font_scale(scale);
     }
+    #[cfg(not(target_os = "android"))]
+    reread_on_focus(&app);
     crate::platform::first_frame::exit_after_first_frame_if_asked(app.window.window());
     let result = app.window.run();
     app.save();
@@ -113,4 +115,30 @@ pub fn run_desktop() -> i32 {
             1
         }
     }
+}
+
+/// When the window regains focus, re-read files another program changed meanwhile (the
+/// locker from the command line), as on an Android resume.
+#[cfg(not(target_os = "android"))]
+fn reread_on_focus(app: &App) {
+
+    use slint::winit_030::{EventResult, WinitWindowAccessor, winit};
+    let session = app.session.clone();
+    let window = app.window.as_weak();
+    app.window.window().on_winit_window_event(move |_, event| {
+        if matches!(event, winit::event::WindowEvent::Focused(true)) {
+            let (session, window) = (session.clone(), window.clone());
+            slint::Timer::single_shot(std::time::Duration::ZERO, move || {
+                let Ok(mut s) = session.try_borrow_mut() else {
+                    return;
+                };
+                let changed =
+                    crate::platform::handle_lifecycle(&mut s, crate::platform::Lifecycle::Resume);
+                if let (true, Some(w)) = (changed, window.upgrade()) {
+                    adapters::refresh_all(&w, &s);
+                }
+            });
+        }
+        EventResult::Propagate
+    });
 }

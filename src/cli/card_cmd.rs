@@ -40,8 +40,11 @@ pub fn card_text(args: &CardArgs) -> Result<String, InputError> {
         Vec::new()
     };
     for (flag, v) in [("--dive", &args.dive), ("--date", &args.date)] {
-        if v.as_ref().is_some_and(|s| s.chars().count() > 40) {
-            return Err(InputError::new(flag, "at most 40 characters"));
+        if let Some(v) = v {
+            if v.chars().count() > 40 {
+                return Err(InputError::new(flag, "at most 40 characters"));
+            }
+            crate::plan::text::check_text(flag, v)?;
         }
     }
     let heading =
@@ -67,7 +70,9 @@ pub fn run(args: &CardArgs) -> Result<String, CliError> {
     }
 }
 
-fn write(path: &Path, text: &str) -> Result<(), CliError> {
-    std::fs::write(path, text)
+/// Write an output file whole or not at all (`storage::atomic::write_text`): on failure
+/// the file that was there is untouched, and the message says so.
+pub fn write(path: &Path, text: &str) -> Result<(), CliError> {
+    crate::storage::atomic::write_text(path, text)
         .map_err(|e| CliError::Write(format!("cannot write {}: {e}", path.display())))
 }

@@ -31,6 +31,8 @@ pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String
         ));
     }
     let team = read_team(path)?;
+    // A chart pairs a diver with a teammate: a team of one (or none) has none to print.
+    team.validate()?;
     let charts = team_charts(&team, above, below)?;
     let name = |i: usize| team.divers[i].name.clone();
     if json {

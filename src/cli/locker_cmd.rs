@@ -9,11 +9,13 @@ use crate::formats::cylinder_spec::{SPEC_FORM, format_cylinder_spec, parse_cylin
 use crate::formats::team_file::CylindersFile;
 use crate::plan::catalogue::Material;
 use crate::plan::error::InputError;
+use crate::plan::text;
 use crate::storage::Store;
-use crate::storage::atomic::WithinLimits;
-use crate::storage::exchange::{export_locker, import_locker, sets_word};
-use crate::storage::locker::{LockerEntry, LockerFile, MAX_LOCKER_SETS, check_set_name};
-use crate::storage::store::LOCKER_FILE;
+use crate::storage::exchange::sets_word;
+use crate::storage::locker::{
+    LockerEntry, LockerFile, MAX_LOCKER_SETS, check_set_name, check_set_note,
+};
+use crate::storage::store::{LOCKER_FILE, LockerError};
 
 use super::CliError;
 
@@ -106,41 +108,67 @@ pub struct ListJson {
 }
 
 /// Run a locker action against the store in `data_dir`. Lines for standard error
-/// (files set aside) go to `notes`, even when the action then fails.
+/// (files set aside, ids repaired) go to `notes`, even when the action then fails.
+/// Changes go through `Store::update_locker`: under the lock, on the locker as it is now.
 pub fn run(
     action: &LockerAction,
     data_dir: &Path,
     notes: &mut Vec<String>,
 ) -> Result<String, CliError> {
     let mut store = Store::new(data_dir);
-    let (locker, messages) = store.load_locker();
-    notes.extend(messages);
     let path = store.path_of(LOCKER_FILE);
     match action {
-        LockerAction::List { json } => Ok(list(&locker, &path, *json)),
+        LockerAction::List { json } => {
+            let (locker, messages) = store.load_locker();
+            notes.extend(messages);
+            Ok(list(&locker, &path, *json))
+        }
         LockerAction::Add {
             name,
             spec,
             material,
             note,
             mine,
-        } => add(
-            &mut store,
-            locker,
-            &path,
-            name,
-            spec,
-            (*material).into(),
-            note,
-            *mine,
-        ),
-        LockerAction::Remove { name } => remove(&mut store, locker, &path, name),
-        LockerAction::Export { file, force } => export(&locker, file, *force),
-        LockerAction::Import { file } => import(&mut store, locker, &path, file),
+        } => {
+            let new = NewSet {
+                name,
+                spec,
+                material: (*material).into(),
+                note,
+                mine: *mine,
+            };
+            add(&mut store, notes, &path, &new)
+        }
+        LockerAction::Remove { name } => remove(&mut store, notes, &path, name),
+        LockerAction::Export { file, force } => {
+            let (locker, messages) = store.load_locker();
+            notes.extend(messages);
+            super::locker_files::export(&locker, file, *force)
+        }
+        LockerAction::Import { file } => {
+            super::locker_files::import(&mut store, notes, &path, file)
+        }
     }
 }
 
-fn describe(e: &LockerEntry, i: usize) -> (Option<String>, Option<String>) {
+/// A locker change refused or not written, as the command's error.
+pub(super) fn locker_error(e: LockerError) -> CliError {
+    match e {
+        LockerError::Input(e) => CliError::Input(e),
+        LockerError::Write(e) => CliError::Write(e),
+    }
+}
+
+/// What `locker add` was asked to add.
+struct NewSet<'a> {
+    name: &'a str,
+    spec: &'a str,
+    material: Material,
+    note: &'a str,
+    mine: bool,
+}
+
+pub(super) fn describe(e: &LockerEntry, i: usize) -> (Option<String>, Option<String>) {
     match e.set(&format!("entries[{i}]")) {
         Ok(set) => (Some(format_cylinder_spec(&set)), None),
         Err(err) => (None, Some(err.to_string())),
@@ -217,71 +245,56 @@ fn list(locker: &LockerFile, path: &Path, json: bool) -> String {
     s
 }
 
-fn save(store: &mut Store, locker: &LockerFile) -> Result<(), CliError> {
-    store.save_locker(locker).map_err(CliError::Write)
-}
-
-#[allow(clippy::too_many_arguments)]
 fn add(
     store: &mut Store,
-    mut locker: LockerFile,
+    notes: &mut Vec<String>,
     path: &Path,
-    name: &str,
-    spec: &str,
-    material: Material,
-    note: &str,
-    mine: bool,
+    new: &NewSet,
 ) -> Result<String, CliError> {
-    check_set_name("NAME", name)?;
-    let name = name.trim().to_string();
-    if !locker.find_by_name(&name).is_empty() {
-        return Err(InputError::new(
-            "NAME",
-            format!(
-                "a set called '{name}' is already in the locker; choose another name, or remove it first"
-            ),
-        )
-        .into());
-    }
-    let set = parse_cylinder_spec(spec)?;
-    if locker.entries.len() >= MAX_LOCKER_SETS {
-        return Err(InputError::new(
-            "NAME",
-            format!(
-                "the locker is full: it holds at most {MAX_LOCKER_SETS} sets; remove one first"
-            ),
-        )
-        .into());
-    }
-    let entry = LockerEntry {
-        id: locker.next_id(),
-        name: name.clone(),
-        cylinders: CylindersFile::from_set(&set),
-        material,
-        note: note.trim().to_string(),
-        mine: false,
-    };
-    entry.check_text("NAME").map_err(|e| {
-        // The note is the only other text checked; name it as the option.
-        if e.field.ends_with(".note") {
-            InputError::new("--note", e.message)
-        } else {
-            e
-        }
-    })?;
-    let id = entry.id;
-    locker.entries.push(entry);
-    if mine {
-        locker.set_mine(id);
-    }
-    save(store, &locker)?;
+    check_set_name("NAME", new.name)?;
+    check_set_note("--note", new.note)?;
+    let name = text::nfc(new.name.trim());
+    let set = parse_cylinder_spec(new.spec)?;
+    let (count, _) = store
+        .update_locker(notes, |locker, _| {
+            if !locker.find_by_name(&name).is_empty() {
+                return Err(InputError::new(
+                    "NAME",
+                    format!(
+                        "a set called '{name}' is already in the locker; choose another name, or remove it first"
+                    ),
+                ));
+            }
+            if locker.entries.len() >= MAX_LOCKER_SETS {
+                return Err(InputError::new(
+                    "NAME",
+                    format!(
+                        "the locker is full: it holds at most {MAX_LOCKER_SETS} sets; remove one first"
+                    ),
+                ));
+            }
+            let id = locker.next_id();
+            locker.entries.push(LockerEntry {
+                id,
+                name: name.clone(),
+                cylinders: CylindersFile::from_set(&set),
+                material: new.material,
+                note: text::nfc(new.note.trim()),
+                mine: false,
+            });
+            if new.mine {
+                locker.set_mine(id);
+            }
+            Ok(locker.entries.len())
+        })
+        .map_err(locker_error)?;
     let mut s = format!(
         "Added '{name}' ({}) to {}; {} now.\n",
         format_cylinder_spec(&set),
         path.display(),
-        sets_word(locker.entries.len())
+        sets_word(count)
     );
-    if mine {
+    if new.mine {
         s.push_str("It is now mine: a new team and an added diver start with this set.\n");
     }
     Ok(s)
@@ -289,40 +302,13 @@ fn add(
 
 fn remove(
     store: &mut Store,
-    mut locker: LockerFile,
+    notes: &mut Vec<String>,
     path: &Path,
     name: &str,
 ) -> Result<String, CliError> {
-    let found = locker.find_by_name(name);
-    let i = match found.as_slice() {
-        [i] => *i,
-        [] => {
-            let names: Vec<&str> = locker.entries.iter().map(|e| e.name.as_str()).collect();
-            let known = if names.is_empty() {
-                "the locker is empty".to_string()
-            } else {
-                format!("the locker has: {}", names.join(", "))
-            };
-            return Err(InputError::new(
-                "NAME",
-                format!("no set is called '{}'; {known}", name.trim()),
-            )
-            .into());
-        }
-        many => {
-            return Err(InputError::new(
-                "NAME",
-                format!(
-                    "{} sets are called '{}'; rename all but one in the app first, so the right one is removed",
-                    many.len(),
-                    name.trim()
-                ),
-            )
-            .into());
-        }
-    };
-    let removed = locker.entries.remove(i);
-    save(store, &locker)?;
+    let ((removed, i), locker) = store
+        .update_locker(notes, |locker, _| remove_named(locker, name))
+        .map_err(locker_error)?;
     let mut s = format!(
         "Removed '{}' ({}) from {}; {} left.\n",
         removed.name,
@@ -338,64 +324,33 @@ fn remove(
     Ok(s)
 }
 
-fn export(locker: &LockerFile, file: &Path, force: bool) -> Result<String, CliError> {
-    if file.exists() && !force {
-        return Err(InputError::new(
-            "FILE",
-            format!(
-                "{} already exists; choose another name, or add --force to replace it",
-                file.display()
-            ),
-        )
-        .into());
-    }
-    if file.is_dir() {
-        return Err(InputError::new(
-            "FILE",
-            format!("{} is a directory; give a file name", file.display()),
-        )
-        .into());
-    }
-    export_locker(locker, file).map_err(CliError::Write)?;
-    Ok(format!(
-        "Exported {} to {}.\n",
-        sets_word(locker.entries.len()),
-        file.display()
-    ))
-}
-
-fn import(
-    store: &mut Store,
-    locker: LockerFile,
-    path: &Path,
-    file: &Path,
-) -> Result<String, CliError> {
-    let (merged, report) = import_locker(&locker, file)?;
-    debug_assert!(merged.within_limits().is_ok());
-    if report.changed() {
-        save(store, &merged)?;
-    }
-    let mut s = format!("Imported {} into {}:\n", file.display(), path.display());
-    for n in &report.added {
-        let spec = merged
-            .find_by_name(n)
-            .first()
-            .and_then(|&k| describe(&merged.entries[k], k).0)
-            .unwrap_or_default();
-        s.push_str(&format!("  added    '{n}' ({spec})\n"));
-    }
-    for (from, to) in &report.renamed {
-        s.push_str(&format!(
-            "  renamed  '{from}' -> '{to}' (a different set already has that name)\n"
-        ));
-    }
-    for (n, why) in &report.skipped {
-        s.push_str(&format!("  skipped  '{n}': {why}\n"));
-    }
-    s.push_str(&report.summary(merged.entries.len()));
-    s.push('\n');
-    if !report.changed() {
-        s.push_str("Nothing new: the locker file was not changed.\n");
-    }
-    Ok(s)
+/// Remove the one set called `name`: the set and where it was.
+fn remove_named(locker: &mut LockerFile, name: &str) -> Result<(LockerEntry, usize), InputError> {
+    let found = locker.find_by_name(name);
+    let i = match found.as_slice() {
+        [i] => *i,
+        [] => {
+            let names: Vec<&str> = locker.entries.iter().map(|e| e.name.as_str()).collect();
+            let known = if names.is_empty() {
+                "the locker is empty".to_string()
+            } else {
+                format!("the locker has: {}", names.join(", "))
+            };
+            return Err(InputError::new(
+                "NAME",
+                format!("no set is called '{}'; {known}", name.trim()),
+            ));
+        }
+        many => {
+            return Err(InputError::new(
+                "NAME",
+                format!(
+                    "{} sets are called '{}'; rename all but one in the app first, so the right one is removed",
+                    many.len(),
+                    name.trim()
+                ),
+            ));
+        }
+    };
+    Ok((locker.entries.remove(i), i))
 }

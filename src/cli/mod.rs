@@ -7,6 +7,7 @@ pub mod card_cmd;
 pub mod chart_cmd;
 pub mod gas_cmd;
 pub mod locker_cmd;
+pub mod locker_files;
 pub mod pair_chart_cmd;
 pub mod plan_cmd;
 pub mod plan_report;

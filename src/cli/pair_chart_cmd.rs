@@ -80,7 +80,8 @@ fn set_of(field: &str, text: &str) -> Result<CylinderSet, InputError> {
         Ok(set) => Ok(set),
         Err(spec_error) => {
             let mut store = Store::new(crate::storage::data_dir::desktop_data_dir());
-            let (locker, _) = store.load_locker();
+            let (locker, set_aside) = store.load_locker();
+            set_aside.iter().for_each(|m| super::say(m));
             match locker.find_by_name(text).first() {
                 Some(&k) => locker.entries[k].cylinders.to_set(field),
                 None => Err(InputError::new(
@@ -211,8 +212,7 @@ pub fn run(args: &PairArgs) -> Result<String, CliError> {
     match &args.output {
         None => Ok(text),
         Some(path) => {
-            std::fs::write(path, &text)
-                .map_err(|e| CliError::Write(format!("cannot write {}: {e}", path.display())))?;
+            super::card_cmd::write(path, &text)?;
             Ok(format!("chart written to {}\n", path.display()))
         }
     }

@@ -153,9 +153,10 @@ impl CylindersFile {
 
 impl TeamFile {
     /// Parse JSON text; syntax errors and unknown keys name the place.
+    /// Anything but white space after the document is refused with its line and column.
     pub fn parse(text: &str) -> Result<TeamFile, InputError> {
         let de = &mut serde_json::Deserializer::from_str(text);
-        serde_path_to_error::deserialize(de).map_err(|e| {
+        let file = serde_path_to_error::deserialize(&mut *de).map_err(|e| {
             // An unknown last segment (`?`, e.g. at the end of the text) names its parent.
             let path = e.path().to_string();
             let path = path.trim_end_matches('?').trim_end_matches('.');
@@ -165,7 +166,18 @@ impl TeamFile {
                 path.to_string()
             };
             InputError::new(field, e.inner().to_string())
-        })
+        })?;
+        de.end().map_err(|e| {
+            InputError::new(
+                "team file",
+                format!(
+                    "text after the team's JSON document, at line {} column {}: a team file holds one JSON object and nothing after it",
+                    e.line(),
+                    e.column()
+                ),
+            )
+        })?;
+        Ok(file)
     }
 
     /// Convert to planning inputs (ranges are checked by `TeamInput::validate`).
@@ -196,7 +208,7 @@ impl TeamFile {
                 });
                 let unit = gauge.map_or(u.pressure_unit(), |g| g.unit);
                 Ok(DiverInput {
-                    name: d.name.clone(),
+                    name: crate::plan::text::nfc(&d.name),
                     cylinders: d.cylinders.to_set(&format!("divers[{i}].cylinders"))?,
                     mix: d.mix,
                     start: unit.pressure(d.start),

@@ -17,6 +17,7 @@ pub mod rule;
 pub mod supply;
 pub mod team;
 pub mod temperature;
+pub mod text;
 pub mod units;
 pub mod warning;
 

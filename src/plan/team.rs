@@ -127,7 +127,7 @@ impl TeamInput {
             validate_diver(u, self.gauge_of(i), i, d)?;
             if self.divers[..i]
                 .iter()
-                .any(|o| o.name.trim() == d.name.trim())
+                .any(|o| super::text::same_text(&o.name, &d.name))
             {
                 return Err(InputError::new(
                     format!("divers[{i}].name"),
@@ -357,6 +357,7 @@ fn validate_diver(u: UnitSystem, g: Gauge, i: usize, d: &DiverInput) -> Result<(
             "a name of 1 to 24 characters is needed",
         ));
     }
+    super::text::check_text(&format!("{f}.name"), name)?;
     validate_supply(u, g, &f, &d.cylinders, &d.mix, d.start)?;
     if let Some(st) = &d.stage {
         validate_supply(

@@ -1,189 +1,80 @@
-//! Atomic JSON files with a schema version, and quarantine of unreadable files.
+//! Writing files whole or not at all, and the readers' re-exports (`reading.rs`).
+//!
+//! Every file the program writes (the app's three files, a card, a chart, an exported
+//! locker) goes through `write_steps`: a temp file in the same folder, written, flushed
+//! and synced, then renamed over the old one, and the folder synced. If anything fails
+//! (a full disk, a size limit, a killed process) the old file is untouched.
 
 use std::fs;
-use std::io::{Read, Write};
-use std::path::{Path, PathBuf};
+use std::io::Write;
+use std::path::Path;
 
 use serde::Serialize;
-use serde::de::DeserializeOwned;
 
-/// Largest file the app or the command line reads (team, locker, settings files), bytes.
-/// Anything larger is refused before it is read.
-pub const MAX_FILE_BYTES: u64 = 1024 * 1024;
+pub use super::reading::{
+    MAX_FILE_BYTES, ReadOutcome, TextReadError, WithinLimits, check_envelope, human_bytes,
+    kept_aside, not_regular, one_line, open_regular, read_json, read_text, set_aside,
+};
 
-/// Limits a file's content must keep beyond its JSON shape (counts, name lengths).
-/// A loaded file that breaks one is treated like an unreadable one: kept aside.
-pub trait WithinLimits {
-    /// `Err` names the field and the limit.
-    fn within_limits(&self) -> Result<(), String> {
-        Ok(())
-    }
+/// Bytes written in one step.
+const CHUNK: usize = 16 * 1024;
+
+/// The steps of a write, in order. A save interrupted before `Rename` leaves the old file.
+#[derive(Clone, Copy, Debug, PartialEq, Eq)]
+pub enum WriteStep {
+    /// Create the temp file beside the target.
+    CreateTemp,
+    /// Write one chunk of the bytes (numbered from 0).
+    Write(usize),
+    /// Flush and sync the temp file.
+    Sync,
+    /// Rename the temp file over the target.
+    Rename,
+    /// Sync the folder, so that the rename itself is on the disk.
+    SyncFolder,
 }
 
-/// Why a text file could not be read.
+/// How a write step ends early (tests simulate failures and kills with it).
 #[derive(Debug)]
-pub enum TextReadError {
-    Missing,
-    /// Over the size limit (the size as found, in bytes).
-    TooLarge {
-        bytes: u64,
-        limit: u64,
-    },
-    /// Not UTF-8: the first bad byte, counted from 0, and where it sits.
-    NotUtf8 {
-        byte: usize,
-        line: usize,
-        column: usize,
-    },
-    Io(std::io::Error),
+pub enum Interrupt {
+    /// The step fails with this error; the temp file is removed.
+    Fail(std::io::Error),
+    /// The process dies here: nothing more happens, not even the clean-up.
+    Kill,
 }
 
-impl std::fmt::Display for TextReadError {
-    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
-        match self {
-            TextReadError::Missing => write!(f, "no such file"),
-            TextReadError::TooLarge { bytes, limit } if *bytes < 1024 => {
-                write!(
-                    f,
-                    "the file is {bytes} bytes and the limit is {}",
-                    human_bytes(*limit)
-                )
-            }
-            TextReadError::TooLarge { bytes, limit } => write!(
-                f,
-                "the file is {} ({bytes} bytes) and the limit is {}",
-                human_bytes(*bytes),
-                human_bytes(*limit)
-            ),
-            TextReadError::NotUtf8 { byte, line, column } => write!(
-                f,
-                "not UTF-8 text: byte {byte} (line {line}, column {column}) is not valid UTF-8"
-            ),
-            TextReadError::Io(e) => write!(f, "cannot read: {e}"),
-        }
-    }
-}
-
-/// A byte count for people: `512 bytes`, `12.3 KB`, `1 MB` (1 KB = 1024 bytes).
-pub fn human_bytes(n: u64) -> String {
-    const KB: f64 = 1024.0;
-    let x = n as f64;
-    let (v, unit) = if x < KB {
-        return format!("{n} bytes");
-    } else if x < KB * KB {
-        (x / KB, "KB")
-    } else {
-        (x / (KB * KB), "MB")
-    };
-    let s = format!("{v:.1}");
-    format!("{} {unit}", s.trim_end_matches(".0"))
-}
-
-/// At most `max` characters of `text` on one line: control characters become spaces and
-/// a longer text ends in `…`. Error messages can quote a file's content; this keeps them short.
-pub fn one_line(text: &str, max: usize) -> String {
-    let mut out: String = text
-        .chars()
-        .take(max)
-        .map(|c| if c.is_control() { ' ' } else { c })
-        .collect();
-    if text.chars().nth(max).is_some() {
-        out.push('…');
-    }
-    out
-}
-
-/// Read a UTF-8 text file of at most `limit` bytes. The size is checked before reading,
-/// and the read stops one byte past the limit whatever the file system reported.
-/// A leading byte-order mark is dropped.
-pub fn read_text(path: &Path, limit: u64) -> Result<String, TextReadError> {
-    let file = match fs::File::open(path) {
-        Ok(f) => f,
-        // A missing file, or a data directory that is a file: nothing to read.
-        Err(e)
-            if matches!(
-                e.kind(),
-                std::io::ErrorKind::NotFound | std::io::ErrorKind::NotADirectory
-            ) =>
-        {
-            return Err(TextReadError::Missing);
-        }
-        Err(e) => return Err(TextReadError::Io(e)),
-    };
-    if let Ok(meta) = file.metadata()
-        && meta.is_file()
-        && meta.len() > limit
-    {
-        return Err(TextReadError::TooLarge {
-            bytes: meta.len(),
-            limit,
-        });
-    }
-    let mut bytes = Vec::new();
-    file.take(limit + 1)
-        .read_to_end(&mut bytes)
-        .map_err(TextReadError::Io)?;
-    if bytes.len() as u64 > limit {
-        return Err(TextReadError::TooLarge {
-            bytes: bytes.len() as u64,
-            limit,
-        });
-    }
-    // A byte-order mark (some editors write one) is not part of the text.
-    let bom = if bytes.starts_with("\u{feff}".as_bytes()) {
-        bytes.drain(..3);
-        3
-    } else {
-        0
-    };
-    String::from_utf8(bytes).map_err(|e| {
-        let byte = e.utf8_error().valid_up_to();
-        let before = &e.as_bytes()[..byte];
-        let line = before.iter().filter(|&&b| b == b'\n').count() + 1;
-        let line_start = before
-            .iter()
-            .rposition(|&b| b == b'\n')
-            .map_or(0, |i| i + 1);
-        // Columns count characters; the bytes before `byte` are valid UTF-8.
-        let column = std::str::from_utf8(&before[line_start..])
-            .map_or(byte - line_start, |s| s.chars().count())
-            + 1;
-        TextReadError::NotUtf8 {
-            byte: byte + bom,
-            line,
-            column,
-        }
-    })
-}
-
-/// What reading a file found.
-#[derive(Debug)]
-pub enum ReadOutcome<T> {
-    /// No file yet.
-    Missing,
-    Loaded(T),
-    /// The file could not be read; it was moved to `kept_as` and must not be recreated
-    /// from nothing without telling the user.
-    SetAside {
-        kept_as: PathBuf,
-        reason: String,
-    },
-}
-
-/// Write `value` as pretty JSON: to a temp file in the same directory, synced, then renamed
-/// over `path`, so that `path` always holds either the old or the new content, even if the
-/// process is killed or two processes save at once. The temp file's name is unique to the
-/// writer; one left behind by a killed writer is removed by a later save once it is old.
+/// Write `value` as pretty JSON, whole or not at all (`write_text`).
 pub fn write_json<T: Serialize>(path: &Path, value: &T) -> std::io::Result<()> {
     let mut text = serde_json::to_string_pretty(value).map_err(std::io::Error::other)?;
     text.push('\n');
     write_text(path, &text)
 }
 
-/// Write `text` the same way: whole or not at all, even if the process is killed.
+/// Write `text` to `path` whole or not at all, even if the process is killed or two
+/// processes write at once. On error `path` is untouched and the message says so.
 pub fn write_text(path: &Path, text: &str) -> std::io::Result<()> {
-    let dir = path.parent().unwrap_or_else(|| Path::new("."));
-    fs::create_dir_all(dir)?;
+    write_steps(path, text.as_bytes(), &mut |_| Ok(()))
+}
+
+/// The one writer. `before` is called before each step and may end the write there.
+/// A target that exists but is not a regular file (a folder, a FIFO, a device) is
+/// never replaced. The temp file's name is unique to the writer; one left behind by a
+/// killed writer is removed by a later write once it is ten minutes old.
+pub fn write_steps(
+    path: &Path,
+    bytes: &[u8],
+    before: &mut dyn FnMut(WriteStep) -> Result<(), Interrupt>,
+) -> std::io::Result<()> {
+    if let Some(kind) = not_regular(path) {
+        return Err(std::io::Error::other(format!(
+            "{} is {kind}, not a regular file; it was not replaced",
+            path.display()
+        )));
+    }
+    let dir = match path.parent() {
+        Some(d) if !d.as_os_str().is_empty() => d,
+        _ => Path::new("."),
+    };
     let name = path.file_name().and_then(|n| n.to_str()).unwrap_or("data");
     let nanos = std::time::SystemTime::now()
         .duration_since(std::time::UNIX_EPOCH)
@@ -192,18 +83,57 @@ pub fn write_text(path: &Path, text: &str) -> std::io::Result<()> {
     static WRITES: std::sync::atomic::AtomicU64 = std::sync::atomic::AtomicU64::new(0);
     let n = WRITES.fetch_add(1, std::sync::atomic::Ordering::Relaxed);
     let tmp = dir.join(format!(".{name}.{}-{nanos}-{n}.tmp", std::process::id()));
-    let written = (|| {
+    let existed = path.exists();
+    let written = (|| -> Result<(), Interrupt> {
+        fs::create_dir_all(dir).map_err(Interrupt::Fail)?;
+        before(WriteStep::CreateTemp)?;
         let mut f = fs::OpenOptions::new()
             .write(true)
             .create_new(true)
-            .open(&tmp)?;
-        f.write_all(text.as_bytes())?;
-        f.sync_all()?;
-        fs::rename(&tmp, path)
+            .open(&tmp)
+            .map_err(Interrupt::Fail)?;
+        for (i, chunk) in bytes.chunks(CHUNK).enumerate() {
+            before(WriteStep::Write(i))?;
+            f.write_all(chunk).map_err(Interrupt::Fail)?;
+        }
+        before(WriteStep::Sync)?;
+        f.flush().map_err(Interrupt::Fail)?;
+        f.sync_all().map_err(Interrupt::Fail)?;
+        drop(f);
+        before(WriteStep::Rename)?;
+        fs::rename(&tmp, path).map_err(Interrupt::Fail)
     })();
-    if let Err(e) = written {
-        let _ = fs::remove_file(&tmp);
-        return Err(e);
+    match written {
+        Ok(()) => {}
+        Err(Interrupt::Kill) => {
+            return Err(std::io::Error::other(
+                "the write was stopped (simulated kill)",
+            ));
+        }
+        Err(Interrupt::Fail(e)) => {
+            let _ = fs::remove_file(&tmp);
+            let kept = if existed {
+                format!("{} is unchanged", path.display())
+            } else {
+                format!("no {name} was written")
+            };
+            return Err(std::io::Error::new(e.kind(), format!("{e}; {kept}")));
+        }
+    }
+    // The new file is in place; syncing the folder makes the rename durable.
+    match before(WriteStep::SyncFolder) {
+        Ok(()) => {}
+        Err(Interrupt::Kill) => {
+            return Err(std::io::Error::other(
+                "the write was stopped (simulated kill)",
+            ));
+        }
+        Err(Interrupt::Fail(e)) => {
+            return Err(std::io::Error::new(
+                e.kind(),
+                format!("{e} (syncing the folder; the new {name} is in place)"),
+            ));
+        }
     }
     if let Ok(d) = fs::File::open(dir) {
         let _ = d.sync_all();
@@ -233,99 +163,6 @@ fn remove_stale_temp_files(dir: &Path, name: &str) {
         if old {
             let _ = fs::remove_file(e.path());
         }
-    }
-}
-
-/// A versioned envelope: `{"schema": N, ...payload}` is read through `parse`.
-/// Unreadable files (over the size limit, not UTF-8, bad JSON, wrong shape, newer schema,
-/// outside the type's limits) are renamed aside.
-pub fn read_json<T: DeserializeOwned + WithinLimits>(
-    path: &Path,
-    max_schema: u32,
-) -> ReadOutcome<T> {
-    let text = match read_text(path, MAX_FILE_BYTES) {
-        Ok(t) => t,
-        Err(TextReadError::Missing) => return ReadOutcome::Missing,
-        Err(e) => return set_aside(path, e.to_string()),
-    };
-    if let Err(why) = check_envelope(&text, max_schema) {
-        return set_aside(path, why);
-    }
-    let de = &mut serde_json::Deserializer::from_str(&text);
-    match serde_path_to_error::deserialize::<_, T>(de) {
-        Ok(v) => match v.within_limits() {
-            Ok(()) => ReadOutcome::Loaded(v),
-            Err(why) => set_aside(path, one_line(&why, 300)),
-        },
-        Err(e) => {
-            let at = e.path().to_string();
-            let at = at.trim_end_matches('?').trim_end_matches('.');
-            let why = one_line(&e.inner().to_string(), 200);
-            if at.is_empty() {
-                set_aside(path, why)
-            } else {
-                set_aside(path, format!("{}: {why}", one_line(at, 100)))
-            }
-        }
-    }
-}
-
-/// The outside of a versioned file: JSON (syntax, nesting at most 128 deep), an object,
-/// and a `schema` this version reads. `Err` says what is wrong.
-pub fn check_envelope(text: &str, max_schema: u32) -> Result<(), String> {
-    let v = serde_json::from_str::<serde_json::Value>(text)
-        .map_err(|e| one_line(&e.to_string(), 200))?;
-    let Some(obj) = v.as_object() else {
-        return Err("not a JSON object: the file must start with {".to_string());
-    };
-    if let Some(s) = obj.get("schema").and_then(|s| s.as_u64())
-        && s > u64::from(max_schema)
-    {
-        return Err(format!(
-            "written by a newer version (schema {s}; this version reads up to {max_schema})"
-        ));
-    }
-    Ok(())
-}
-
-/// Files set aside for `name` in `dir` (`<name>.unreadable-…`), oldest name first.
-pub fn kept_aside(dir: &Path, name: &str) -> Vec<PathBuf> {
-    let prefix = format!("{name}.unreadable");
-    let mut found: Vec<PathBuf> = fs::read_dir(dir)
-        .map(|entries| {
-            entries
-                .filter_map(|e| e.ok())
-                .filter(|e| e.file_name().to_string_lossy().starts_with(&prefix))
-                .map(|e| e.path())
-                .collect()
-        })
-        .unwrap_or_default();
-    found.sort();
-    found
-}
-
-pub(crate) fn set_aside<T>(path: &Path, reason: String) -> ReadOutcome<T> {
-    let stamp = std::time::SystemTime::now()
-        .duration_since(std::time::UNIX_EPOCH)
-        .map(|d| d.as_secs())
-        .unwrap_or(0);
-    let name = path.file_name().and_then(|n| n.to_str()).unwrap_or("data");
-    let mut kept = path.with_file_name(format!("{name}.unreadable-{stamp}"));
-    let mut n = 1;
-    while kept.exists() {
-        kept = path.with_file_name(format!("{name}.unreadable-{stamp}-{n}"));
-        n += 1;
-    }
-    match fs::rename(path, &kept) {
-        Ok(()) => ReadOutcome::SetAside {
-            kept_as: kept,
-            reason,
-        },
-        // Could not move it: report it as kept in place; the store then refuses to write it.
-        Err(e) => ReadOutcome::SetAside {
-            kept_as: path.to_path_buf(),
-            reason: format!("{reason}; could not move it aside: {e}"),
-        },
     }
 }
 

@@ -5,7 +5,8 @@
 use std::path::{Path, PathBuf};
 
 use super::atomic::write_json;
-use super::locker::{LockerFile, MergeReport, read_locker_file};
+use super::locker::{LockerFile, read_locker_file};
+use super::locker_merge::MergeReport;
 use crate::plan::error::InputError;
 
 /// The name the app gives an exported locker.

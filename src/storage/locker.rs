@@ -9,6 +9,7 @@ use crate::formats::team_file::CylindersFile;
 use crate::plan::catalogue::Material;
 use crate::plan::error::InputError;
 use crate::plan::team::validate_cylinders;
+use crate::plan::text;
 use crate::plan::{CylinderSet, UnitSystem};
 
 pub const LOCKER_SCHEMA: u32 = 1;
@@ -19,6 +20,8 @@ pub const MAX_LOCKER_SETS: usize = 200;
 pub const MAX_SET_NAME_CHARS: usize = 40;
 /// Longest note on a set, in characters.
 pub const MAX_SET_NOTE_CHARS: usize = 60;
+/// Highest set id kept (2^53 − 1, the largest integer every JSON reader holds exactly).
+pub const MAX_SET_ID: u64 = (1 << 53) - 1;
 
 #[derive(Clone, Debug, PartialEq, Serialize, Deserialize)]
 #[serde(deny_unknown_fields)]
@@ -55,14 +58,7 @@ impl LockerEntry {
     /// Name and note within their limits; `field` is where the entry sits, e.g. `entries[3]`.
     pub fn check_text(&self, field: &str) -> Result<(), InputError> {
         check_set_name(&format!("{field}.name"), &self.name)?;
-        let n = self.note.chars().count();
-        if n > MAX_SET_NOTE_CHARS {
-            return Err(InputError::new(
-                format!("{field}.note"),
-                format!("{n} characters is too long; at most {MAX_SET_NOTE_CHARS}"),
-            ));
-        }
-        Ok(())
+        check_set_note(&format!("{field}.note"), &self.note)
     }
 
     /// The cylinder set, checked by the planning core's ranges.
@@ -74,7 +70,8 @@ impl LockerEntry {
     }
 }
 
-/// A set name: 1 to 40 characters once trimmed, no control characters.
+/// A set name: 1 to 40 characters once trimmed, and only characters the core's one text
+/// check (`plan::text::check_text`) accepts.
 pub fn check_set_name(field: &str, name: &str) -> Result<(), InputError> {
     let t = name.trim();
     let n = t.chars().count();
@@ -84,59 +81,32 @@ pub fn check_set_name(field: &str, name: &str) -> Result<(), InputError> {
             format!("a name of 1 to {MAX_SET_NAME_CHARS} characters is needed; got {n}"),
         ));
     }
-    if t.chars().any(char::is_control) {
-        return Err(InputError::new(
-            field,
-            "control characters (tabs, line breaks...) are not allowed in a name",
-        ));
-    }
-    Ok(())
+    text::check_text(field, t)
 }
 
-/// The same name, as people read it: trimmed, case ignored.
-fn same_name(a: &str, b: &str) -> bool {
-    a.trim().to_lowercase() == b.trim().to_lowercase()
+/// A note: at most 60 characters, checked like a name.
+pub fn check_set_note(field: &str, note: &str) -> Result<(), InputError> {
+    let n = note.trim().chars().count();
+    if n > MAX_SET_NOTE_CHARS {
+        return Err(InputError::new(
+            field,
+            format!("{n} characters is too long; at most {MAX_SET_NOTE_CHARS}"),
+        ));
+    }
+    text::check_text(field, note.trim())
+}
+
+/// The same name, as people read it: trimmed, normalised, case ignored.
+pub(crate) fn same_name(a: &str, b: &str) -> bool {
+    text::nfc(a.trim()).to_lowercase() == text::nfc(b.trim()).to_lowercase()
 }
 
 /// `NAME (n)`, shortened so that it fits the name limit.
-fn numbered_name(name: &str, n: usize) -> String {
+pub(crate) fn numbered_name(name: &str, n: usize) -> String {
     let suffix = format!(" ({n})");
     let keep = MAX_SET_NAME_CHARS.saturating_sub(suffix.chars().count());
     let base: String = name.trim().chars().take(keep).collect();
     format!("{}{suffix}", base.trim_end())
-}
-
-/// `existing` is `name` itself or the name an earlier import gave it (`NAME (n)`), so that
-/// importing the same file twice adds nothing the second time.
-fn variant_of(existing: &str, name: &str) -> bool {
-    if same_name(existing, name) {
-        return true;
-    }
-    let t = existing.trim();
-    let Some(open) = t.strip_suffix(')').and_then(|x| x.rfind(" (")) else {
-        return false;
-    };
-    match t[open + 2..t.len() - 1].parse::<usize>() {
-        Ok(n) if n >= 2 => same_name(existing, &numbered_name(name, n)),
-        _ => false,
-    }
-}
-
-/// What an import did, entry by entry.
-#[derive(Clone, Debug, Default, PartialEq)]
-pub struct MergeReport {
-    /// Names added as they were.
-    pub added: Vec<String>,
-    /// (name in the imported file, name given) for sets whose name was taken by a different set.
-    pub renamed: Vec<(String, String)>,
-    /// (name, reason) for entries not imported.
-    pub skipped: Vec<(String, String)>,
-}
-
-impl MergeReport {
-    pub fn changed(&self) -> bool {
-        !self.added.is_empty() || !self.renamed.is_empty()
-    }
 }
 
 impl WithinLimits for LockerFile {
@@ -166,83 +136,6 @@ impl LockerFile {
             .collect()
     }
 
-    /// Merge another locker's sets into this one, by name, without duplicates:
-    /// - a name not in this locker is added;
-    /// - the same name with the same cylinders and material is skipped (already here);
-    /// - the same name with a different set is added under a free name, `NAME (2)`...;
-    /// - an entry whose name, note or cylinders break the rules is skipped with the reason.
-    ///
-    /// Imported sets get new ids and are never marked as mine: which set is the diver's
-    /// own does not change by importing. Errors (nothing merged) if the result would
-    /// hold more than `MAX_LOCKER_SETS` sets.
-    pub fn merge(&self, incoming: &LockerFile) -> Result<(LockerFile, MergeReport), InputError> {
-        let mut out = self.clone();
-        let mut report = MergeReport::default();
-        for (i, e) in incoming.entries.iter().enumerate() {
-            let field = format!("entries[{i}]");
-            let shown = e
-                .name
-                .trim()
-                .chars()
-                .take(MAX_SET_NAME_CHARS)
-                .collect::<String>();
-            if let Err(why) = e
-                .check_text(&field)
-                .and_then(|()| e.set(&field).map(|_| ()))
-            {
-                report.skipped.push((shown, why.to_string()));
-                continue;
-            }
-            let name = e.name.trim().to_string();
-            let already = out.entries.iter().any(|x| {
-                x.cylinders == e.cylinders && x.material == e.material && variant_of(&x.name, &name)
-            });
-            let name_given = if already {
-                report
-                    .skipped
-                    .push((name, "the same set is already in the locker".to_string()));
-                continue;
-            } else if out.find_by_name(&name).is_empty() {
-                name.clone()
-            } else {
-                match out.free_name(&name) {
-                    Some(n) => n,
-                    None => {
-                        report.skipped.push((
-                            name,
-                            "the name is taken and no free variant of it was found".to_string(),
-                        ));
-                        continue;
-                    }
-                }
-            };
-            let id = out.next_id();
-            out.entries.push(LockerEntry {
-                id,
-                name: name_given.clone(),
-                cylinders: e.cylinders.clone(),
-                material: e.material,
-                note: e.note.trim().to_string(),
-                mine: false,
-            });
-            if name_given == name {
-                report.added.push(name);
-            } else {
-                report.renamed.push((name, name_given));
-            }
-        }
-        if out.entries.len() > MAX_LOCKER_SETS {
-            return Err(InputError::new(
-                "entries",
-                format!(
-                    "importing would make {} sets; a locker holds at most {MAX_LOCKER_SETS}. Nothing was imported",
-                    out.entries.len()
-                ),
-            ));
-        }
-        Ok((out, report))
-    }
-
     /// `NAME (2)`, `NAME (3)`... the first not in use, shortened to fit the name limit.
     pub fn free_name(&self, name: &str) -> Option<String> {
         (2..=MAX_LOCKER_SETS + 2).find_map(|n| {
@@ -253,8 +146,40 @@ impl LockerFile {
         })
     }
 
+    /// One more than the highest id; never wraps: past `MAX_SET_ID` the smallest free id.
     pub fn next_id(&self) -> u64 {
-        self.entries.iter().map(|e| e.id).max().unwrap_or(0) + 1
+        let max = self.entries.iter().map(|e| e.id).max().unwrap_or(0);
+        match max.checked_add(1) {
+            Some(id) if id <= MAX_SET_ID => id,
+            _ => (1..=MAX_SET_ID)
+                .find(|id| self.entries.iter().all(|e| e.id != *id))
+                .unwrap_or(1),
+        }
+    }
+
+    /// Make a locker as read safe to use: names and notes trimmed and normalised (NFC),
+    /// and, if two sets share an id or an id is 0 or above `MAX_SET_ID`, every set
+    /// numbered again from 1 in its order. Returns the one line to show when ids changed.
+    pub fn repair(&mut self) -> Option<String> {
+        for e in &mut self.entries {
+            e.name = text::nfc(e.name.trim());
+            e.note = text::nfc(e.note.trim());
+        }
+        let mut seen = std::collections::HashSet::new();
+        let bad = self
+            .entries
+            .iter()
+            .any(|e| e.id == 0 || e.id > MAX_SET_ID || !seen.insert(e.id));
+        if !bad {
+            return None;
+        }
+        for (i, e) in self.entries.iter_mut().enumerate() {
+            e.id = i as u64 + 1;
+        }
+        Some(format!(
+            "The locker held repeated or out-of-range set numbers; its {} were numbered again from 1 (names and cylinders unchanged).",
+            super::exchange::sets_word(self.entries.len())
+        ))
     }
     pub fn mine(&self) -> Option<&LockerEntry> {
         self.entries.iter().find(|e| e.mine)
@@ -334,78 +259,6 @@ mod tests {
     }
 
     #[test]
-    fn merge_adds_skips_and_renames_by_name() {
-        let mut mine = entry(1, "Twelves", 12.0);
-        mine.mine = true;
-        let own = locker(vec![mine, entry(2, "Sevens", 7.0)]);
-        let mut theirs_mine = entry(9, "Fifteens", 15.0);
-        theirs_mine.mine = true;
-        let incoming = locker(vec![
-            entry(1, " twelves ", 12.0), // the same set: skipped
-            entry(2, "Sevens", 8.5),     // a different set with a taken name: renamed
-            theirs_mine,                 // new: added, never mine
-            entry(4, "Sevens", 9.0),     // taken twice now: renamed again
-            entry(5, "", 12.0),          // bad name: skipped
-            entry(6, "Huge", 90.0),      // out of range: skipped
-            entry(7, "Fifteens", 15.0),  // duplicate inside the file: skipped
-        ]);
-        let (merged, report) = own.merge(&incoming).unwrap();
-        assert_eq!(report.added, vec!["Fifteens".to_string()]);
-        assert_eq!(
-            report.renamed,
-            vec![
-                ("Sevens".to_string(), "Sevens (2)".to_string()),
-                ("Sevens".to_string(), "Sevens (3)".to_string())
-            ]
-        );
-        let skipped: Vec<&str> = report.skipped.iter().map(|(n, _)| n.as_str()).collect();
-        assert_eq!(skipped, vec!["twelves", "", "Huge", "Fifteens"]);
-        assert!(
-            report.skipped[1].1.contains("entries[4].name"),
-            "{:?}",
-            report.skipped
-        );
-        assert!(report.skipped[2].1.contains("entries[5].cylinders.water_l"));
-        assert_eq!(merged.entries.len(), 5);
-        assert_eq!(merged.entries.iter().filter(|e| e.mine).count(), 1);
-        assert!(merged.entries[0].mine, "which set is mine does not change");
-        let mut ids: Vec<u64> = merged.entries.iter().map(|e| e.id).collect();
-        ids.sort();
-        ids.dedup();
-        assert_eq!(ids.len(), 5, "ids stay unique");
-        // Importing the result, or the same file, again changes nothing.
-        let (again, report) = merged.merge(&merged).unwrap();
-        assert_eq!(again, merged);
-        assert!(!report.changed());
-        assert_eq!(report.skipped.len(), 5);
-        let (again, report) = merged.merge(&incoming).unwrap();
-        assert_eq!(again, merged);
-        assert!(!report.changed(), "{report:?}");
-    }
-
-    #[test]
-    fn renamed_names_fit_the_limit_and_a_full_locker_refuses() {
-        let long = "L".repeat(MAX_SET_NAME_CHARS);
-        let own = locker(vec![entry(1, &long, 12.0)]);
-        let (merged, report) = own.merge(&locker(vec![entry(1, &long, 10.0)])).unwrap();
-        let given = &report.renamed[0].1;
-        assert_eq!(given.chars().count(), MAX_SET_NAME_CHARS);
-        assert!(given.ends_with(" (2)"));
-        assert!(merged.within_limits().is_ok());
-
-        let full = locker(
-            (0..MAX_LOCKER_SETS as u64)
-                .map(|i| entry(i + 1, &format!("Set {i}"), 12.0))
-                .collect(),
-        );
-        assert!(full.within_limits().is_ok());
-        let e = full
-            .merge(&locker(vec![entry(1, "One more", 12.0)]))
-            .unwrap_err();
-        assert!(e.message.contains("at most 200"), "{e}");
-    }
-
-    #[test]
     fn limits_name_the_entry() {
         let mut l = locker(vec![entry(1, "A", 12.0), entry(2, &"n".repeat(41), 12.0)]);
         let e = l.within_limits().unwrap_err();
@@ -420,5 +273,35 @@ mod tests {
         l.entries[1].note.clear();
         l.entries[1].name = "Tab\there".into();
         assert!(l.within_limits().unwrap_err().contains("control"));
+        l.entries[1].name = "B".into();
+        l.entries[1].note = "a\u{202e}b".into();
+        let e = l.within_limits().unwrap_err();
+        assert!(
+            e.starts_with("entries[1].note: character 2 is U+202E"),
+            "{e}"
+        );
+    }
+
+    #[test]
+    fn ids_are_repaired_once_and_never_wrap() {
+        let mut l = locker(vec![
+            entry(MAX_SET_ID, "A", 12.0),
+            entry(5, "Jose\u{301}", 12.0),
+        ]);
+        assert!(l.repair().is_none(), "ids in range and unique are kept");
+        assert_eq!(l.entries[1].name, "Jos\u{e9}", "stored composed");
+        let next = l.next_id();
+        assert!(next != MAX_SET_ID && next != 5 && next >= 1, "{next}");
+        l.entries[1].id = MAX_SET_ID;
+        let said = l.repair().expect("a duplicate is renumbered");
+        assert!(said.contains("numbered again"), "{said}");
+        let ids: Vec<u64> = l.entries.iter().map(|e| e.id).collect();
+        assert_eq!(ids, [1, 2]);
+        assert!(l.repair().is_none(), "said once");
+        l.entries[0].id = u64::MAX;
+        assert!(l.repair().is_some(), "beyond the highest id kept");
+        l.entries[0].id = 0;
+        assert!(l.repair().is_some());
+        assert_eq!(l.next_id(), 3);
     }
 }

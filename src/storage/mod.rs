@@ -5,7 +5,10 @@
 pub mod atomic;
 pub mod data_dir;
 pub mod exchange;
+pub mod lock;
 pub mod locker;
+pub mod locker_merge;
+pub mod reading;
 pub mod settings;
 pub mod store;
 pub mod team_state;

@@ -5,9 +5,11 @@ use std::path::{Path, PathBuf};
 use std::time::SystemTime;
 
 use super::atomic::{ReadOutcome, WithinLimits, read_json, set_aside, write_json};
+use super::lock::{LOCK_WAIT, lock_beside};
 use super::locker::{LOCKER_SCHEMA, LockerFile};
 use super::settings::{FoundSettings, SETTINGS_SCHEMA, Settings};
 use super::team_state::{TEAM_SCHEMA, TeamState};
+use crate::plan::error::InputError;
 
 pub const LOCKER_FILE: &str = "locker.json";
 pub const SETTINGS_FILE: &str = "settings.json";
@@ -23,6 +25,24 @@ pub struct LoadReport {
     /// Some settings were reset to their defaults (the file as found was kept aside):
     /// the settings should be saved again.
     pub settings_repaired: bool,
+}
+
+/// Why a locker change was not made.
+#[derive(Debug)]
+pub enum LockerError {
+    /// The change itself was refused (the message names the field).
+    Input(InputError),
+    /// The locker could not be locked, read or written (the message says why).
+    Write(String),
+}
+
+impl std::fmt::Display for LockerError {
+    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+        match self {
+            LockerError::Input(e) => write!(f, "{e}"),
+            LockerError::Write(e) => write!(f, "{e}"),
+        }
+    }
 }
 
 /// Reads and writes the app's files. A file that could not be moved aside is never written.
@@ -58,9 +78,7 @@ impl Store {
 
     pub fn load(&mut self) -> Loaded {
         let mut report = LoadReport::default();
-        let locker = self
-            .take(LOCKER_FILE, LOCKER_SCHEMA, "cylinder locker", &mut report)
-            .unwrap_or_default();
+        let (locker, _) = self.read_locker(&mut report.messages);
         let settings_path = self.dir.join(SETTINGS_FILE);
         report.first_launch = !settings_path.exists();
         let settings = self
@@ -82,12 +100,68 @@ impl Store {
     /// Load only the locker (the command line's `locker` commands). An unreadable locker
     /// is set aside as in `load`; the messages say where it went.
     pub fn load_locker(&mut self) -> (LockerFile, Vec<String>) {
-        let mut report = LoadReport::default();
-        let locker = self
-            .take(LOCKER_FILE, LOCKER_SCHEMA, "cylinder locker", &mut report)
-            .unwrap_or_default();
+        let mut messages = Vec::new();
+        let (locker, _) = self.read_locker(&mut messages);
         self.remember(LOCKER_FILE);
-        (locker, report.messages)
+        (locker, messages)
+    }
+
+    /// The locker as found (set aside if unreadable, `messages` saying where), repaired
+    /// (`LockerFile::repair`). A repair of the ids is written back at once, so that it is
+    /// said once.
+    fn read_locker(&mut self, messages: &mut Vec<String>) -> (LockerFile, bool) {
+        let mut report = LoadReport::default();
+        let found: Option<LockerFile> =
+            self.take(LOCKER_FILE, LOCKER_SCHEMA, "cylinder locker", &mut report);
+        let read = found.is_some();
+        let mut locker = found.unwrap_or_default();
+        messages.append(&mut report.messages);
+        if let Some(said) = locker.repair() {
+            messages.push(said);
+            if let Err(e) = self.save(LOCKER_FILE, &locker) {
+                messages.push(e);
+            }
+        }
+        (locker, read)
+    }
+
+    /// The locker again (the app, when another program changed it): the locker, whether
+    /// the file was read (not missing, not set aside), and lines to show.
+    pub fn reload_locker(&mut self) -> (LockerFile, bool, Vec<String>) {
+        let mut messages = Vec::new();
+        let (locker, read) = self.read_locker(&mut messages);
+        self.remember(LOCKER_FILE);
+        (locker, read, messages)
+    }
+
+    /// Whether another program changed the locker since this store last read or wrote it.
+    pub fn locker_changed_on_disk(&self) -> bool {
+        self.seen.get(LOCKER_FILE).copied().flatten() != self.modified(LOCKER_FILE)
+    }
+
+    /// Change the locker safely against other writers: take the lock beside it, read it
+    /// again, apply `change` to what was read, and write it atomically if it changed.
+    /// Lines to show (a file set aside, ids repaired) go to `messages`, even on error.
+    /// `change` is also told whether the file was read (not missing, not set aside).
+    /// Returns the locker as written (or as found, if `change` left it alone).
+    pub fn update_locker<R>(
+        &mut self,
+        messages: &mut Vec<String>,
+        change: impl FnOnce(&mut LockerFile, bool) -> Result<R, InputError>,
+    ) -> Result<(R, LockerFile), LockerError> {
+        let path = self.dir.join(LOCKER_FILE);
+        let _lock = lock_beside(&path, LOCK_WAIT)
+            .map_err(|e| LockerError::Write(format!("could not save {LOCKER_FILE}: {e}")))?;
+        let (found, read) = self.read_locker(messages);
+        let mut locker = found.clone();
+        let r = change(&mut locker, read).map_err(LockerError::Input)?;
+        if locker != found || !path.exists() {
+            self.save(LOCKER_FILE, &locker)
+                .map_err(LockerError::Write)?;
+        } else {
+            self.remember(LOCKER_FILE);
+        }
+        Ok((r, locker))
     }
 
     /// Path of one of the store's files.
@@ -104,13 +178,20 @@ impl Store {
     ) -> Option<T> {
         let path = self.dir.join(name);
         match read_json::<T>(&path, schema) {
-            ReadOutcome::Missing => None,
-            ReadOutcome::Loaded(v) => Some(v),
+            ReadOutcome::Missing => {
+                self.blocked.remove(name);
+                None
+            }
+            ReadOutcome::Loaded(v) => {
+                self.blocked.remove(name);
+                Some(v)
+            }
             ReadOutcome::SetAside { kept_as, reason } => {
                 if kept_as == path {
                     self.blocked.insert(name);
                     report.messages.push(format!(
-                        "The {what} file could not be read ({reason}). It was left untouched and will not be overwritten."
+                        "The {what} file could not be read ({reason}). {} was left untouched and will not be overwritten.",
+                        path.display()
                     ));
                 } else {
                     report.messages.push(format!(

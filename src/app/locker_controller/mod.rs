@@ -4,9 +4,9 @@ use crate::formats::team_file::CylindersFile;
 use crate::plan::CylinderSet;
 use crate::plan::catalogue::{Material, Preset};
 use crate::plan::error::InputError;
+use crate::plan::text;
 use crate::storage::locker::{
-    LockerEntry, LockerFile, MAX_LOCKER_SETS, MAX_SET_NAME_CHARS, MAX_SET_NOTE_CHARS,
-    check_set_name,
+    LockerEntry, LockerFile, MAX_LOCKER_SETS, MAX_SET_NAME_CHARS, check_set_name, check_set_note,
 };
 
 pub use super::locker_draft::Draft;
@@ -21,6 +21,9 @@ pub enum Added {
 #[derive(Clone, Debug, Default)]
 pub struct LockerController {
     pub file: LockerFile,
+    /// The locker as this app last read or wrote it: what a save merges `file` against
+    /// (`storage::locker_merge::merge_changes`), so that sets changed elsewhere are kept.
+    base: LockerFile,
     draft: Option<Draft>,
     /// The draft as it was opened, to tell whether it was changed.
     opened: Option<Draft>,
@@ -31,11 +34,32 @@ pub struct LockerController {
 impl LockerController {
     pub fn new(file: LockerFile) -> Self {
         LockerController {
+            base: file.clone(),
             file,
             draft: None,
             opened: None,
             undo: None,
         }
+    }
+
+    /// The locker as last read or written.
+    pub fn base(&self) -> &LockerFile {
+        &self.base
+    }
+    /// Whether this app changed the locker since it was last read or written.
+    pub fn changed_here(&self) -> bool {
+        self.file != self.base
+    }
+    /// The locker as now read or written: both the copy shown and the base of the next
+    /// merge. The draft and the Undo on offer stay.
+    pub fn synced(&mut self, file: LockerFile) {
+        self.base = file.clone();
+        self.file = file;
+    }
+    /// The file could not be read (missing, or set aside): every set shown here is kept,
+    /// and the next save writes them all.
+    pub fn base_lost(&mut self) {
+        self.base = LockerFile::default();
     }
 
     pub fn entry(&self, id: u64) -> Option<&LockerEntry> {
@@ -90,15 +114,9 @@ impl LockerController {
             return Err(InputError::new("locker", "nothing is being edited"));
         };
         check_set_name("name", &d.name)?;
-        let name = d.name.trim().to_string();
-        let note = d.note.trim().to_string();
-        let n = note.chars().count();
-        if n > MAX_SET_NOTE_CHARS {
-            return Err(InputError::new(
-                "note",
-                format!("{n} characters is too long; at most {MAX_SET_NOTE_CHARS}"),
-            ));
-        }
+        check_set_note("note", &d.note)?;
+        let name = text::nfc(d.name.trim());
+        let note = text::nfc(d.note.trim());
         let set = d.to_set()?;
         let is_new = d.id.is_none_or(|id| self.entry(id).is_none());
         if is_new && self.file.entries.len() >= MAX_LOCKER_SETS {
@@ -172,11 +190,16 @@ impl LockerController {
         material: Material,
     ) -> Result<Added, InputError> {
         let cylinders = CylindersFile::from_set(set);
-        let name: String = name.trim().chars().take(MAX_SET_NAME_CHARS).collect();
-        let name = if name.is_empty() {
-            set.describe()
+        let name: String = text::nfc(name.trim())
+            .chars()
+            .take(MAX_SET_NAME_CHARS)
+            .collect();
+        // A label that is no usable name (empty, or with a refused character) gives way
+        // to the set's own description.
+        let name = if check_set_name("name", &name).is_ok() {
+            name.trim().to_string()
         } else {
-            name
+            set.describe()
         };
         if let Some(e) = self
             .file

@@ -2,7 +2,7 @@
 
 use super::*;
 use crate::storage::atomic::WithinLimits;
-use crate::storage::locker::MAX_SET_NAME_CHARS;
+use crate::storage::locker::{MAX_SET_NAME_CHARS, MAX_SET_NOTE_CHARS};
 
 #[test]
 fn draft_save_edit_delete_undo() {

@@ -1,8 +1,16 @@
 //! Session actions of the cylinder locker: open the editor, save, delete, undo, mine.
 //! Changes to the open draft go straight to `LockerController::edit_draft`.
+//!
+//! The command line (or another window) may change the locker while the app is open.
+//! Every save re-reads the file under its lock and merges this app's changes into it
+//! (`merge_changes`): a set is removed only if it was removed here, and a set changed in
+//! both places is kept twice, with a line saying so. Regaining focus or resuming
+//! re-reads it too (`refresh_locker`).
 
 use crate::plan::catalogue::{Material, presets};
 use crate::plan::error::InputError;
+use crate::storage::locker_merge::merge_changes;
+use crate::storage::store::LockerError;
 
 use super::super::locker_controller::Added;
 use super::super::nav::Screen;
@@ -65,6 +73,58 @@ impl Session {
                 .push(format!("“{name}” is already in your locker.")),
             Err(e) => self.status.push(e.to_string()),
         }
+    }
+
+    /// Write the locker: this app's changes merged into the file as it is now, under the
+    /// lock. What the merge kept twice, and a file set aside, is said in the status.
+    pub(super) fn write_locker(&mut self) -> Result<(), String> {
+        let base = self.locker.base().clone();
+        let ours = self.locker.file.clone();
+        let mut messages = Vec::new();
+        let result = self.store.update_locker(&mut messages, |disk, read| {
+            let theirs = if read { disk.clone() } else { base.clone() };
+            let (merged, notes) = merge_changes(&base, &ours, &theirs)?;
+            *disk = merged;
+            Ok(notes)
+        });
+        for m in messages {
+            self.status.push(m);
+        }
+        match result {
+            Ok((notes, file)) => {
+                self.locker.synced(file);
+                for n in notes {
+                    self.status.push(format!("{n}."));
+                }
+                Ok(())
+            }
+            Err(LockerError::Input(e)) => Err(format!("could not save locker.json: {e}")),
+            Err(LockerError::Write(e)) => Err(e),
+        }
+    }
+
+    /// Re-read the locker if another program changed it (on focus and resume). Changes
+    /// made here and not yet written are merged and saved; a file that cannot be read
+    /// leaves every set shown here in place. Returns whether the locker changed.
+    pub fn refresh_locker(&mut self) -> bool {
+        if !self.store.locker_changed_on_disk() {
+            return false;
+        }
+        if self.locker.changed_here() {
+            self.save_locker();
+            return true;
+        }
+        let (found, read, messages) = self.store.reload_locker();
+        for m in messages {
+            self.status.push(m);
+        }
+        if read {
+            self.locker.synced(found);
+        } else {
+            self.locker.base_lost();
+            self.save_locker();
+        }
+        true
     }
 
     /// Save the draft and leave the editor; on error the editor stays open.

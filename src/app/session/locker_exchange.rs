@@ -7,7 +7,7 @@ use std::path::{Path, PathBuf};
 use crate::storage::data_dir;
 use crate::storage::exchange::{EXPORT_NAME, export_locker, free_path, import_locker, sets_word};
 
-use super::Session;
+use super::{SavedFile, Session};
 
 /// The two folders, and the last message about them.
 #[derive(Clone, Debug, Default, PartialEq)]
@@ -56,28 +56,43 @@ impl Session {
         };
     }
 
-    /// Merge every `.json` file in the import folder into the locker, then move each file
-    /// read into `imported/`, so that the next import does not read it again.
+    /// Merge every `.json` file in the import folder into the locker, save, and only
+    /// then move each file read into `imported/`, so that the next import does not read
+    /// it again. A file that fails, or a save that fails, leaves the files where they
+    /// were. Symbolic links are never followed: a link in the folder is not read, and an
+    /// import folder (or `imported/`) that is a link is not used.
     pub fn locker_import(&mut self) {
         let dir = self.exchange.import_dir.clone();
         let _ = std::fs::create_dir_all(&dir);
-        let mut files: Vec<PathBuf> = std::fs::read_dir(&dir)
-            .map(|rd| {
-                rd.filter_map(|e| e.ok().map(|e| e.path()))
-                    .filter(|p| p.is_file() && p.extension().is_some_and(|x| x == "json"))
-                    .collect()
-            })
-            .unwrap_or_default();
-        files.sort();
-        if files.is_empty() {
+        if let Some(why) = linked_folder(&dir) {
+            self.exchange.message = format!("Nothing imported: {why}.");
+            return;
+        }
+        let mut lines = Vec::new();
+        let mut files = Vec::new();
+        for (path, is_link) in json_files(&dir) {
+            let shown = path
+                .file_name()
+                .unwrap_or_default()
+                .to_string_lossy()
+                .to_string();
+            if is_link {
+                lines.push(format!(
+                    "Not imported: {shown} is a symbolic link; put the file itself into the folder."
+                ));
+            } else {
+                files.push(path);
+            }
+        }
+        if files.is_empty() && lines.is_empty() {
             self.exchange.message = format!(
                 "No locker file to import. Put the other diver's exported file into {}, then press Import sets again.",
                 dir.display()
             );
             return;
         }
-        let mut lines = Vec::new();
         let mut changed = false;
+        let mut read = Vec::new();
         for file in &files {
             let shown = file.file_name().unwrap_or_default().to_string_lossy();
             match import_locker(&self.locker.file, file) {
@@ -97,13 +112,25 @@ impl Session {
                     lines.push(report.summary(merged.entries.len()));
                     changed |= report.changed();
                     self.locker.file = merged;
-                    lines.extend(move_aside(&dir, file));
+                    read.push(file.clone());
                 }
                 Err(e) => lines.push(format!("Not imported: {e}")),
             }
         }
-        if changed {
+        // Saved before any file moves (writing only if something changed; an earlier
+        // import that could not be saved is saved now).
+        if changed || self.unsaved.files().contains(&SavedFile::Locker) {
             self.save_locker();
+        }
+        if self.unsaved.files().contains(&SavedFile::Locker) {
+            lines.push(format!(
+                "The locker could not be saved, so the files stay in {} (importing them again adds nothing twice).",
+                dir.display()
+            ));
+        } else {
+            for file in &read {
+                lines.extend(move_aside(&dir, file));
+            }
         }
         self.exchange.message = lines.join("\n");
     }
@@ -113,10 +140,45 @@ impl Session {
     }
 }
 
+/// The `.json` entries of `dir`, sorted, each with whether it is a symbolic link (never
+/// followed). Folders and other non-files are left out.
+fn json_files(dir: &Path) -> Vec<(PathBuf, bool)> {
+    let mut found: Vec<(PathBuf, bool)> = std::fs::read_dir(dir)
+        .map(|rd| {
+            rd.filter_map(|e| e.ok())
+                .filter(|e| e.path().extension().is_some_and(|x| x == "json"))
+                .filter_map(|e| {
+                    let t = e.file_type().ok()?;
+                    (t.is_file() || t.is_symlink()).then(|| (e.path(), t.is_symlink()))
+                })
+                .collect()
+        })
+        .unwrap_or_default();
+    found.sort();
+    found
+}
+
+/// Why `dir` may not be used, if it is a symbolic link.
+fn linked_folder(dir: &Path) -> Option<String> {
+    let link = std::fs::symlink_metadata(dir)
+        .ok()?
+        .file_type()
+        .is_symlink();
+    link.then(|| {
+        format!(
+            "{} is a symbolic link; Turnsheet only uses folders inside its data folder",
+            dir.display()
+        )
+    })
+}
+
 /// Move an imported file into `dir/imported/`; a line if that failed.
 fn move_aside(dir: &Path, file: &Path) -> Option<String> {
     let done = dir.join("imported");
     let name = file.file_name()?.to_string_lossy().to_string();
+    if let Some(why) = linked_folder(&done) {
+        return Some(format!("{name} was left where it is: {why}."));
+    }
     let moved = std::fs::create_dir_all(&done)
         .and_then(|()| std::fs::rename(file, free_path(&done, &name)));
     moved

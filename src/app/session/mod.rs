@@ -154,10 +154,11 @@ impl Session {
 
     /// Read the files again if another program changed them since they were last read
     /// or written (on resume). The page stays where it was. Returns whether it reloaded.
-    /// Never while changes are unsaved: they would be lost.
+    /// Never while changes are unsaved: they would be lost (the locker is then merged,
+    /// `refresh_locker`).
     pub fn reload_if_changed(&mut self) -> bool {
         if !self.all_saved() || !self.store.changed_on_disk() {
-            return false;
+            return self.refresh_locker();
         }
         let page = self.nav.current();
         let dir = self.store.dir().to_path_buf();

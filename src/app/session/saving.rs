@@ -105,7 +105,7 @@ impl Session {
     fn write(&mut self, file: SavedFile) {
         let r = match file {
             SavedFile::Team => self.store.save_team(&self.team.to_state()),
-            SavedFile::Locker => self.store.save_locker(&self.locker.file),
+            SavedFile::Locker => self.write_locker(),
             SavedFile::Settings => self.store.save_settings(&self.settings),
         };
         self.unsaved.record(file, r);

@@ -1,0 +1,78 @@
+//! `turnsheet locker export|import`: swapping sets with other divers through a file.
+
+use std::path::Path;
+
+use crate::plan::error::InputError;
+use crate::storage::Store;
+use crate::storage::exchange::{export_locker, sets_word};
+use crate::storage::locker::{LockerFile, read_locker_file};
+
+use super::CliError;
+use super::locker_cmd::{describe, locker_error};
+
+/// Write the locker to `file` (whole or not at all); an existing file only with `force`.
+pub fn export(locker: &LockerFile, file: &Path, force: bool) -> Result<String, CliError> {
+    if file.is_dir() {
+        return Err(InputError::new(
+            "FILE",
+            format!("{} is a directory; give a file name", file.display()),
+        )
+        .into());
+    }
+    if file.exists() && !force {
+        return Err(InputError::new(
+            "FILE",
+            format!(
+                "{} already exists; choose another name, or add --force to replace it",
+                file.display()
+            ),
+        )
+        .into());
+    }
+    export_locker(locker, file).map_err(CliError::Write)?;
+    Ok(format!(
+        "Exported {} to {}.\n",
+        sets_word(locker.entries.len()),
+        file.display()
+    ))
+}
+
+/// Merge `file` into the locker as it is when the lock is taken; saved once, if changed.
+pub fn import(
+    store: &mut Store,
+    notes: &mut Vec<String>,
+    path: &Path,
+    file: &Path,
+) -> Result<String, CliError> {
+    let incoming = read_locker_file(file)?;
+    let (report, merged) = store
+        .update_locker(notes, |locker, _| {
+            let (merged, report) = locker.merge(&incoming)?;
+            *locker = merged;
+            Ok(report)
+        })
+        .map_err(locker_error)?;
+    let mut s = format!("Imported {} into {}:\n", file.display(), path.display());
+    for n in &report.added {
+        let spec = merged
+            .find_by_name(n)
+            .first()
+            .and_then(|&k| describe(&merged.entries[k], k).0)
+            .unwrap_or_default();
+        s.push_str(&format!("  added    '{n}' ({spec})\n"));
+    }
+    for (from, to) in &report.renamed {
+        s.push_str(&format!(
+            "  renamed  '{from}' -> '{to}' (a different set already has that name)\n"
+        ));
+    }
+    for (n, why) in &report.skipped {
+        s.push_str(&format!("  skipped  '{n}': {why}\n"));
+    }
+    s.push_str(&report.summary(merged.entries.len()));
+    s.push('\n');
+    if !report.changed() {
+        s.push_str("Nothing new: the locker file was not changed.\n");
+    }
+    Ok(s)
+}
