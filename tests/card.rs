@@ -79,8 +79,12 @@ fn card_is_xml_with_every_name_and_turn() {
             )));
         }
     }
-    let c = plan.controlling_diver();
-    assert!(text.contains(&format!("{} controls", c.name)));
+    // The diver whose gas sets the allowance the turns use is named.
+    let team = demo();
+    for a in turnsheet::plan::hand_check::allowance_sources(&team, &plan) {
+        let c = &plan.divers[a.diver];
+        assert!(text.contains(&format!("{} control", c.name)), "{}", c.name);
+    }
     assert!(text.contains("Check by hand"));
     assert!(text.contains("Hollowmere spring, upstream"));
     // 100 × 150 mm page.

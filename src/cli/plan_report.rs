@@ -150,10 +150,14 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
         format!("real gas {vu}"),
         "min"
     ));
+    let controllers: Vec<usize> = crate::plan::hand_check::allowance_sources(input, plan)
+        .iter()
+        .map(|a| a.diver)
+        .collect();
     for (i, d) in plan.divers.iter().enumerate() {
         let inp = &input.divers[i];
         let g = d.gauge;
-        let mark = if d.controlling { "*" } else { " " };
+        let mark = if controllers.contains(&i) { "*" } else { " " };
         let minutes = d
             .minutes_to_turn
             .map(|m| format!("{}", m.floor() as i64))
@@ -172,15 +176,9 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
             minutes
         ));
     }
-    let c = plan.controlling_diver();
     s.push_str(&format!(
-        "\n* controlling diver: {}. {} has the least usable gas, so {} allowance sets everyone's: \
-each diver may use {:.0} {vu} going in by hand ({:.0} {vu} by real gas).\n",
-        c.name,
-        c.name,
-        possessive(&c.name),
-        u.volume_value(plan.team_allowance_hand).floor(),
-        u.volume_value(plan.team_allowance_real).floor()
+        "\n* controls: {}\n",
+        crate::plan::hand_check::allowance_source_sentence(input, plan)
     ));
     s.push_str(
         "Turn the dive when the FIRST diver reaches their turn pressure, or at any other limit.\n",
@@ -249,12 +247,4 @@ each diver may use {:.0} {vu} going in by hand ({:.0} {vu} by real gas).\n",
     }
     s.push_str("\nPlanning aid for trained divers; team protocol, training standards and local rules come first. Check by hand.\n");
     s
-}
-
-fn possessive(name: &str) -> String {
-    if name.ends_with('s') {
-        format!("{name}'")
-    } else {
-        format!("{name}'s")
-    }
 }

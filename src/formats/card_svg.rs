@@ -153,12 +153,16 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
 
     let n = plan.divers.len().max(1) as f64;
     let block = ((PAGE_H - y - 38.0) / n).clamp(15.0, 24.0);
+    let controllers: Vec<usize> = crate::plan::hand_check::allowance_sources(team, plan)
+        .iter()
+        .map(|a| a.diver)
+        .collect();
     for (i, d) in plan.divers.iter().enumerate() {
         let inp = &team.divers[i];
         let g = d.gauge;
         let top = y + block * i as f64;
         let mut name = d.name.clone();
-        if d.controlling {
+        if controllers.contains(&i) {
             name.push_str(" (controls)");
         }
         p.text(MARGIN, top + 4.5, 3.8, true, "start", &name);
@@ -218,19 +222,7 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
         p.line(MARGIN, top + block, right, top + block, 0.2);
     }
     let mut y = y + block * n + 4.0;
-    let c = plan.controlling_diver();
-    let mut notes = vec![format!(
-        "{} controls: least usable gas, so {} allowance sets everyone's turn. Each diver may use {} {vu} going in by hand ({} {vu} by real gas).",
-        c.name,
-        if c.name.ends_with('s') {
-            format!("{}'", c.name)
-        } else {
-            format!("{}'s", c.name)
-        },
-        fmt_num(u.volume_value(plan.team_allowance_hand).floor()),
-        fmt_num(u.volume_value(plan.team_allowance_real).floor()),
-        vu = u.volume_label()
-    )];
+    let mut notes = vec![crate::plan::hand_check::allowance_source_sentence(team, plan)];
     if plan.stress.margin.is_finite() {
         notes.push(format!(
             "Out of gas at the turn: the worst pair's reserve covers both exits at up to {}× normal breathing.",

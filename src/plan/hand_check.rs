@@ -293,6 +293,67 @@ pub fn allowance_sources(team: &TeamInput, plan: &TeamPlan) -> Vec<AllowanceSour
     out
 }
 
+/// Where the shown turns' allowance comes from and who controls, in words: "Each diver
+/// may use 1412 L going in: 4237 L (Bram) ÷ 3 = 1412 L, by hand. Bram controls: least
+/// usable gas." When the hand method and real gas set different divers' turns, both
+/// sums and both controlling divers. Whole units, rounded down.
+pub fn allowance_source_sentence(team: &TeamInput, plan: &TeamPlan) -> String {
+    use super::gas_model::ModelKind;
+    let vu = team.units.volume_label();
+    let n = team.rule.denominator();
+    let whole = |x: f64| fmt_num((x + 1e-6).floor());
+    let sources = allowance_sources(team, plan);
+    let how = |m: ModelKind| match m {
+        ModelKind::Hand => "by hand",
+        ModelKind::Real => "by real gas",
+    };
+    let sum = |a: &AllowanceSource| {
+        format!(
+            "{} {vu} ({}) ÷ {n} = {} {vu}",
+            whole(a.content),
+            plan.divers[a.diver].name,
+            whole(a.allowance)
+        )
+    };
+    let names = |v: &[usize]| {
+        v.iter()
+            .map(|&i| plan.divers[i].name.as_str())
+            .collect::<Vec<_>>()
+            .join(", ")
+    };
+    match sources.as_slice() {
+        [] => String::new(),
+        [a] => format!(
+            "Each diver may use {} {vu} going in: {}, {}. {} controls: least usable gas.",
+            whole(a.allowance),
+            sum(a),
+            how(a.model),
+            plan.divers[a.diver].name
+        ),
+        _ => {
+            let parts: Vec<String> = sources
+                .iter()
+                .map(|a| {
+                    format!(
+                        "Turns of {} use the allowance {}: {}.",
+                        names(&a.turns),
+                        how(a.model),
+                        sum(a)
+                    )
+                })
+                .collect();
+            let mut who: Vec<usize> = sources.iter().map(|a| a.diver).collect();
+            who.dedup();
+            let verb = if who.len() == 1 { "controls" } else { "control" };
+            format!(
+                "{} {} {verb}: least usable gas in each method.",
+                parts.join(" "),
+                names(&who).replace(", ", " and ")
+            )
+        }
+    }
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;

@@ -192,6 +192,39 @@ mod tests {
     }
 
     #[test]
+    fn depth_water_and_mix_say_what_they_changed() {
+        use crate::app::session::EntryTarget;
+        let (_dir, mut s) = session();
+        read_all(&mut s);
+        s.open_entry(EntryTarget::Depth);
+        for k in ["clear", "3", "0"] {
+            s.key(k);
+        }
+        s.entry_done();
+        assert!(s.undo_text().starts_with("Depth now 30"), "{}", s.undo_text());
+        assert!(s.undo_text().contains("(same)"), "depth moves no turn");
+        s.toggle_water();
+        assert!(s.undo_text().starts_with("Water now "), "{}", s.undo_text());
+        let before = s.team.to_state();
+        s.open_mix_picker(1);
+        s.picker.set_mix_percent(Some(36), Some(0));
+        s.mix_done();
+        let name = &s.team.input().divers[1].name;
+        assert!(
+            s.undo_text().starts_with(&format!("Mix of {name} now EAN36")),
+            "{}",
+            s.undo_text()
+        );
+        s.undo();
+        assert_eq!(s.team.to_state(), before);
+        // A cancelled entry says nothing.
+        s.open_entry(EntryTarget::Depth);
+        s.key("5");
+        s.cancel_entry();
+        assert_eq!(s.undo_text(), "");
+    }
+
+    #[test]
     fn before_the_starts_are_read_a_change_offers_no_undo() {
         let (_dir, mut s) = session();
         s.set_rule(rule_index(Rule::Quarters));

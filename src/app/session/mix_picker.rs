@@ -102,6 +102,7 @@ impl Session {
     /// Use the mix picked; a mix the team refuses keeps the picker open.
     pub fn mix_done(&mut self) {
         if let (Picker::Mix { diver, stage, .. }, Some(mix)) = (self.picker, self.picker.mix()) {
+            let before = self.before_change();
             let r = if stage {
                 self.team.set_stage_mix(diver, mix)
             } else {
@@ -113,6 +114,8 @@ impl Session {
                     self.mix_history.record(&name, mix);
                     self.save_team();
                     self.picker = Picker::None;
+                    let what = if stage { "Stage mix" } else { "Mix" };
+                    self.after_change(format!("{what} of {name} now {}", mix.label()), before);
                 }
                 Err(e) => self.status.push(e.to_string()),
             }

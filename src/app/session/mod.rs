@@ -75,6 +75,9 @@ pub struct Session {
     pub status: Status,
     /// Undo for the last diver removed or the team replaced, until the team changes.
     undo: Option<undo::UndoOffer>,
+    /// The team before a keypad entry that changes the plan as it is typed (depth, water
+    /// temperature), to say what Done changed.
+    pending_change: Option<changes::Before>,
     /// Files whose last save failed; written again on every save.
     pub unsaved: Unsaved,
     /// The question on screen, if any.
@@ -143,6 +146,7 @@ impl Session {
             mix_history: MixHistory::default(),
             status: Status::new(messages),
             undo: None,
+            pending_change: None,
             unsaved: Unsaved::default(),
             prompt: Prompt::None,
         };

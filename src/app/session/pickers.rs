@@ -141,15 +141,17 @@ impl Session {
             self.picker = Picker::None;
             return;
         }
+        let before = self.before_change();
         match self.team.set_cylinders(i, set, label) {
             Ok(reset) => {
+                let name = self.team.input().divers[i].name.clone();
                 if reset {
                     self.status.push(format!(
-                        "{}: the start pressure did not fit {label}; it is now the working pressure. Enter the pressure you read in the water.",
-                        self.team.input().divers[i].name
+                        "{name}: the start pressure did not fit {label}; it is now the working pressure. Enter the pressure you read in the water.",
                     ));
                 }
                 self.save_team();
+                self.after_change(format!("Cylinders of {name} now {label}"), before);
             }
             Err(e) => self.status.push(e.to_string()),
         }

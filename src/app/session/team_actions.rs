@@ -316,7 +316,7 @@ mod tests {
         assert_eq!(s.team.stage_status(0, now), Some(StartStatus::Missing));
         assert_eq!(s.team.stage_status(1, now), None, "Bram has no stage");
         let text = crate::app::view_models::stage_text(&s, 0);
-        assert!(text.contains("read Ines's stage gauge"), "{text}");
+        assert!(text.contains("read the stage gauge of Ines"), "{text}");
         s.open_entry(EntryTarget::StageStart(0));
         assert_eq!(s.entry.as_ref().unwrap().buffer().text(), "", "opens empty");
         for k in ["1", "9", "0"] {

@@ -152,7 +152,7 @@ impl Session {
             let name = self.team.input().divers[d].name.clone();
             let g = self.team.input().gauge_of(d);
             self.status.push(format!(
-                "{name}'s start is now the prediction, {} {}, marked \"predicted\" until the gauge is read in the water.",
+                "The start of {name} is now the prediction, {} {}, marked \"predicted\" until the gauge is read in the water.",
                 crate::plan::error::fmt_num(g.value(start)),
                 g.label()
             ));

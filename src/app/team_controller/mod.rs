@@ -153,7 +153,7 @@ impl TeamController {
     }
 
     pub fn set_name(&mut self, i: usize, name: &str) -> Result<(), InputError> {
-        let name = name.trim().to_string();
+        let name = crate::plan::text::nfc(name.trim());
         let r = self.try_update(|t| t.divers[i].name = name);
         if r.is_ok() {
             // A diver of one's own: no longer the demo.

@@ -95,3 +95,12 @@ fn an_unread_diver_picking_a_rated_set_reads_psi() {
     t.set_cylinders(1, rated, "Twin steel 104").unwrap();
     assert_eq!(t.input().gauge_of(1).unit, PressureUnit::Bar);
 }
+
+#[test]
+fn a_typed_name_is_stored_in_one_form() {
+    // "José" typed with a combining acute accent (U+0301) is the same name as with the
+    // precomposed "é" (U+00E9): Unicode normalization form C (UAX #15).
+    let mut t = demo();
+    t.set_name(0, "Jose\u{301}").unwrap();
+    assert_eq!(t.input().divers[0].name, "Jos\u{e9}");
+}

@@ -214,7 +214,12 @@ pub fn water_temp_text(s: &Session) -> String {
 /// The line every page shows while the team is the demo; empty otherwise.
 pub fn demo_note(s: &Session) -> String {
     if s.team.is_demo() {
-        "DEMO: invented divers. Tap New team on the Team page to plan your own.".to_string()
+        let whence = if s.page() == crate::app::nav::Screen::Team {
+            "at the top of this page"
+        } else {
+            "on the Team page"
+        };
+        format!("DEMO: invented divers. Tap New team {whence} to plan your own.")
     } else {
         String::new()
     }

@@ -2,12 +2,11 @@
 //! rule line, the stress margin and who turns first.
 
 use super::super::session::Session;
-use super::{gauge_text, reading, temperature_text, turn_text, whole_down};
+use super::{gauge_text, reading, temperature_text, turn_text};
 use crate::app::readings::{StartStatus, when_text};
-use crate::plan::error::fmt_num;
-use crate::plan::gas_model::ModelKind;
 use crate::plan::hand_check::{
-    AllowanceSource, allowance_sentence, allowance_sources, hand_working, turn_how, turn_sentence,
+    allowance_sentence, allowance_source_sentence, allowance_sources, hand_working, turn_how,
+    turn_sentence,
 };
 
 /// "Drop stage at 140 bar (Aluminium 40, EAN32, start 200 bar)" for a diver with a
@@ -19,7 +18,7 @@ pub fn stage_text(s: &Session, i: usize) -> String {
     // A drop pressure only from a stage start read today.
     match s.team.stage_status(i, s.now()) {
         Some(StartStatus::Missing) => {
-            return format!("Stage drop: read {name}'s stage gauge in the water first.");
+            return format!("Stage drop: read the stage gauge of {name} in the water first.");
         }
         Some(StartStatus::Old { at }) => {
             return format!(
@@ -260,8 +259,6 @@ pub fn buddy_heading(s: &Session) -> String {
 /// While a start is not read, only the rule and the water.
 pub fn rule_text(s: &Session) -> String {
     let input = s.team.input();
-    let u = input.units;
-    let vu = u.volume_label();
     let plan = s.team.plan();
     let head = rule_head(s);
     if starts_blocking(s).is_some() {
@@ -269,59 +266,9 @@ pub fn rule_text(s: &Session) -> String {
             "{head}. Who controls and how much each diver may use need every start read in the water."
         );
     }
-    let sources = allowance_sources(input, plan);
-    let n = input.rule.denominator();
-    let line = |a: &AllowanceSource| {
-        format!(
-            "{} {vu} ({}) ÷ {n} = {} {vu}",
-            fmt_num(whole_down(a.content)),
-            plan.divers[a.diver].name,
-            fmt_num(whole_down(a.allowance)),
-        )
-    };
-    let names = |v: &[usize]| {
-        v.iter()
-            .map(|&i| plan.divers[i].name.as_str())
-            .collect::<Vec<_>>()
-            .join(", ")
-    };
-    match sources.as_slice() {
-        [a] => format!(
-            "{head}. Each diver may use {} {vu} going in: {} ({}). {} controls: least usable gas.",
-            fmt_num(whole_down(a.allowance)),
-            line(a),
-            model_words(a.model),
-            plan.divers[a.diver].name,
-        ),
-        _ => {
-            let parts: Vec<String> = sources
-                .iter()
-                .map(|a| {
-                    format!(
-                        "Turns of {} use the allowance {}: {}.",
-                        names(&a.turns),
-                        model_words(a.model),
-                        line(a)
-                    )
-                })
-                .collect();
-            let mut who: Vec<usize> = sources.iter().map(|a| a.diver).collect();
-            who.dedup();
-            let verb = if who.len() == 1 { "controls" } else { "control" };
-            format!(
-                "{head}. {} {} {verb}: least usable gas in each method.",
-                parts.join(" "),
-                names(&who).replace(", ", " and "),
-            )
-        }
-    }
+    format!("{head}. {}", allowance_source_sentence(input, plan))
 }
 
-fn model_words(m: ModelKind) -> &'static str {
-    match m {
-        ModelKind::Hand => "by hand",
-        ModelKind::Real => "by real gas",
-    }
 }
 
 /// The out-of-gas check, once every start is read today.

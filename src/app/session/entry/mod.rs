@@ -4,6 +4,7 @@
 //! entry started from. Cancel puts that value back. What each field is lives in
 //! `fields.rs`.
 
+use crate::app::view_models as vm;
 use crate::app::keypad::{KeypadBuffer, parse_value};
 use crate::plan::error::{InputError, fmt_num};
 use crate::plan::rounding::next_step;
@@ -125,6 +126,8 @@ impl Session {
         let opening = entry.field.buffer.text().to_string();
         entry.reason = reason((entry.field.check)(self, Typed::new(&opening)));
         self.entry = Some(entry);
+        self.pending_change = matches!(target, EntryTarget::Depth | EntryTarget::WaterTemp)
+            .then(|| self.before_change());
     }
 
     /// One key on the open keypad: a digit or letter, ".", "del", "clear", " ", or
@@ -198,10 +201,18 @@ impl Session {
         if entry.field.live {
             self.save_team();
         }
+        if let Some(before) = self.pending_change.take() {
+            let what = match entry.target {
+                EntryTarget::Depth => format!("Depth now {}", vm::depth_label(self)),
+                _ => format!("Water now {}", vm::water_temp_text(self)),
+            };
+            self.after_change(what, before);
+        }
     }
 
     /// Cancel: put back the value the entry started from, and close.
     pub fn cancel_entry(&mut self) {
+        self.pending_change = None;
         if let Some(entry) = self.entry.take()
             && entry.field.live
         {

@@ -1,0 +1,228 @@
+//! Ordinary use on the dock must never put a wrong, stale or ambiguous turn in front of a
+//! diver: a stray tap on the rule, a second dive, a tap that lands on a control that just
+//! moved, a reading taken before midnight. Through the real toolkit, with the clock
+//! handed in.
+
+use std::rc::Rc;
+
+use i_slint_backend_testing::ElementHandle;
+use slint::ComponentHandle;
+use slint::platform::PointerEventButton;
+use turnsheet::app::clock::ManualClock;
+use turnsheet::app::{App, Nav, Page};
+use turnsheet::plan::plan_team;
+
+/// 3 December 2026, 23:58 UTC.
+const LATE: i64 = 1_796_342_280;
+
+fn open_at(dir: &std::path::Path, clock: &ManualClock, w: f32, h: f32) -> App {
+    i_slint_backend_testing::init_no_event_loop();
+    let app = App::with_clock(dir, Rc::new(clock.clone())).unwrap();
+    app.window.window().set_size(slint::LogicalSize::new(w, h));
+    if page(&app) == Page::Cautions {
+        press(&app, "acknowledge cautions");
+    }
+    app
+}
+
+fn all(app: &App, label: &str) -> Vec<ElementHandle> {
+    ElementHandle::find_by_accessible_label(&app.window, label).collect()
+}
+
+fn find(app: &App, label: &str) -> ElementHandle {
+    let v = all(app, label);
+    assert_eq!(v.len(), 1, "one element labelled {label:?}, found {}", v.len());
+    v.into_iter().next().unwrap()
+}
+
+fn press(app: &App, label: &str) {
+    find(app, label).invoke_accessible_default_action();
+}
+
+fn value(app: &App, label: &str) -> String {
+    find(app, label)
+        .accessible_value()
+        .unwrap_or_default()
+        .replace('\u{a0}', " ")
+}
+
+fn page(app: &App) -> Page {
+    app.window.global::<Nav>().get_page()
+}
+
+fn read_all(app: &App) {
+    let names: Vec<String> = app.session.borrow().team.plan().names();
+    for n in names {
+        press(app, &format!("start pressure of {n}"));
+        let start = {
+            let s = app.session.borrow();
+            let i = s.team.plan().names().iter().position(|x| *x == n).unwrap();
+            let g = s.team.input().gauge_of(i);
+            g.value(s.team.input().divers[i].start).floor()
+        };
+        for c in format!("{start}").chars() {
+            press(app, &c.to_string());
+        }
+        press(app, "done");
+    }
+}
+
+fn turn(app: &App, name: &str) -> String {
+    value(app, &format!("turn of {name}"))
+}
+
+#[test]
+fn a_rule_change_says_what_it_did_and_the_buddy_view_names_the_rule() {
+    let dir = tempfile::tempdir().unwrap();
+    let clock = ManualClock::at(LATE);
+    let app = open_at(dir.path(), &clock, 412.0, 4000.0);
+    read_all(&app);
+    press(&app, "show turns");
+    let before: Vec<String> = ["Ines", "Bram", "Sol"].iter().map(|n| turn(&app, n)).collect();
+    assert!(value(&app, "rule line").starts_with("Rule of thirds"));
+    press(&app, "Buddy view");
+    assert!(value(&app, "buddy view heading").contains("Rule of thirds"));
+    assert!(value(&app, "buddy view heading").contains("°C"));
+    press(&app, "close buddy view");
+    press(&app, "back");
+    // A tap on halves asks first; keeping the rule changes nothing.
+    press(&app, "rule halves");
+    assert!(value(&app, "question").contains("open-water rule"));
+    press(&app, "keep the rule");
+    assert_eq!(app.session.borrow().team.input().rule, turnsheet::plan::Rule::Thirds);
+    press(&app, "rule quarters");
+    let note = value(&app, "undo note");
+    assert!(note.starts_with("Rule now quarters. Turns: "), "{note}");
+    let plan = plan_team(app.session.borrow().team.input()).unwrap();
+    for (d, was) in plan.divers.iter().zip(&before) {
+        let now = format!("{} {}", d.turn_shown_value, d.gauge.label());
+        if now == *was {
+            assert!(note.contains(&format!("{} {now} (same)", d.name)), "{note}");
+        } else {
+            let was_n = was.split(' ').next().unwrap();
+            assert!(note.contains(&format!("{} {was_n} → {now}", d.name)), "{note}");
+        }
+    }
+    press(&app, "undo");
+    press(&app, "show turns");
+    let after: Vec<String> = ["Ines", "Bram", "Sol"].iter().map(|n| turn(&app, n)).collect();
+    assert_eq!(after, before, "Undo puts every turn back");
+}
+
+#[test]
+fn next_dive_unreads_every_start_and_undoes() {
+    let dir = tempfile::tempdir().unwrap();
+    let clock = ManualClock::at(LATE);
+    let app = open_at(dir.path(), &clock, 412.0, 4000.0);
+    read_all(&app);
+    // Read at 23:58, the dive at 00:05: the same dive, turns shown, read times said.
+    clock.advance(7 * 60);
+    press(&app, "show turns");
+    assert!(turn(&app, "Ines").ends_with("bar") && !turn(&app, "Ines").starts_with('—'));
+    assert!(value(&app, "start reading of Ines").contains("read "), "{}", value(&app, "start reading of Ines"));
+    let shown = turn(&app, "Ines");
+    press(&app, "back");
+    press(&app, "next dive");
+    assert!(value(&app, "undo note").starts_with("Next dive"));
+    press(&app, "show turns");
+    assert_eq!(turn(&app, "Ines"), "— bar");
+    press(&app, "back");
+    press(&app, "undo");
+    press(&app, "show turns");
+    assert_eq!(turn(&app, "Ines"), shown);
+    // Three hours after the reading the turns go, with nobody touching the phone: the
+    // window's clock watch looks.
+    clock.advance(3 * 3600);
+    i_slint_backend_testing::mock_elapsed_time(turnsheet::app::CLOCK_WATCH);
+    slint::platform::update_timers_and_animations();
+    assert_eq!(turn(&app, "Ines"), "— bar");
+}
+
+#[test]
+fn the_gauge_is_chosen_not_cycled_and_nothing_slides_under_a_finger() {
+    let dir = tempfile::tempdir().unwrap();
+    let clock = ManualClock::at(LATE);
+    let app = open_at(dir.path(), &clock, 412.0, 4000.0);
+    read_all(&app);
+    // Entered yesterday: "Still reads" beside the gauge button.
+    clock.advance(24 * 3600);
+    press(&app, "Settings");
+    press(&app, "back");
+    let gauge = find(&app, "gauge of Bram");
+    let (p, s) = (gauge.absolute_position(), gauge.size());
+    find(&app, "confirm start of Bram").mock_single_click(PointerEventButton::Left);
+    slint::platform::update_timers_and_animations();
+    assert!(all(&app, "confirm start of Bram").is_empty(), "confirmed");
+    let gauge = find(&app, "gauge of Bram");
+    assert_eq!((gauge.absolute_position(), gauge.size()), (p, s), "the gauge button stays put");
+    // The gauge button only opens the chooser, with the current gauge marked.
+    gauge.mock_single_click(PointerEventButton::Left);
+    assert!(value(&app, "gauge bar 10").contains("(now)"));
+    press(&app, "gauge psi 50");
+    let g = app.session.borrow().team.input().gauge_of(1);
+    assert_eq!((g.label(), g.step), ("psi", 50.0));
+    assert!(value(&app, "undo note").starts_with("Gauge of Bram now psi"));
+    // A control that just appeared ignores a pointer tap for a moment.
+    press(&app, "undo");
+    press(&app, "remove Sol");
+    let undo = find(&app, "undo");
+    undo.mock_single_click(PointerEventButton::Left);
+    assert_eq!(app.session.borrow().team.len(), 2, "a tap on a button that just appeared is ignored");
+    i_slint_backend_testing::mock_elapsed_time(std::time::Duration::from_millis(500));
+    slint::platform::update_timers_and_animations();
+    find(&app, "undo").mock_single_click(PointerEventButton::Left);
+    assert_eq!(app.session.borrow().team.len(), 3, "once settled, the tap counts");
+}
+
+#[test]
+fn the_chart_boxes_only_starts_read_for_this_dive() {
+    let dir = tempfile::tempdir().unwrap();
+    let clock = ManualClock::at(LATE);
+    let app = open_at(dir.path(), &clock, 412.0, 4000.0);
+    let boxed = |app: &App| {
+        i_slint_backend_testing::ElementQuery::from_root(&app.window)
+            .match_descendants()
+            .match_predicate(|e: &ElementHandle| {
+                e.accessible_description().is_some_and(|d| d == "planned")
+            })
+            .find_all()
+            .len()
+    };
+    press(&app, "show turns");
+    press(&app, "Chart");
+    assert_eq!(page(&app), Page::Chart);
+    assert_eq!(boxed(&app), 0, "unread starts: nothing boxed");
+    press(&app, "back");
+    press(&app, "back");
+    read_all(&app);
+    press(&app, "show turns");
+    press(&app, "Chart");
+    assert_eq!(boxed(&app), 1);
+    clock.advance(3 * 3600 + 60);
+    i_slint_backend_testing::mock_elapsed_time(turnsheet::app::CLOCK_WATCH);
+    slint::platform::update_timers_and_animations();
+    assert_eq!(boxed(&app), 0, "three hours on: nothing boxed");
+}
+
+#[test]
+fn the_named_controller_is_the_one_whose_sums_are_shown() {
+    let dir = tempfile::tempdir().unwrap();
+    let clock = ManualClock::at(LATE);
+    let app = open_at(dir.path(), &clock, 412.0, 4000.0);
+    read_all(&app);
+    press(&app, "show turns");
+    let rule = value(&app, "rule line");
+    let s = app.session.borrow();
+    let sources = turnsheet::plan::hand_check::allowance_sources(s.team.input(), s.team.plan());
+    for a in &sources {
+        let name = &s.team.plan().divers[a.diver].name;
+        // "4237 L (Buddy) ÷ 3 = 1412 L": the content, whose, the rule, the allowance.
+        let sum = format!(
+            "{} L ({name}) ÷ 3 = {} L",
+            a.content.floor(),
+            a.allowance.floor()
+        );
+        assert!(rule.contains(&sum), "{sum} in {rule}");
+        assert!(rule.contains(&format!("{name} control")), "{rule}");
+    }
+}
