@@ -45,6 +45,8 @@ pub fn undo_text(s: &Session) -> String {
 pub struct LockerEditVm {
     pub title: String,
     pub name: String,
+    /// The name was typed for other sizes; empty otherwise.
+    pub name_warning: String,
     pub count: i32,
     pub rated: bool,
     pub first_label: String,
@@ -72,6 +74,7 @@ pub fn locker_edit(s: &Session) -> Option<LockerEditVm> {
         }
         .to_string(),
         name: d.name.clone(),
+        name_warning: d.name_warning().unwrap_or_default(),
         count: i32::from(d.count),
         rated: d.rated,
         first_label: specs[0].0.to_string(),
@@ -96,16 +99,6 @@ pub fn locker_edit(s: &Session) -> Option<LockerEditVm> {
 pub fn preset_rows() -> Vec<(String, String)> {
     presets()
         .iter()
-        .map(|p| {
-            let water = p.set.spec.water_per_cylinder(ModelKind::Real);
-            (
-                p.name.to_string(),
-                format!(
-                    "{} · {} L water each",
-                    p.material.name(),
-                    fmt_num((water.litres() * 10.0).round() / 10.0)
-                ),
-            )
-        })
+        .map(|p| (p.name.to_string(), super::pickers::preset_detail(p)))
         .collect()
 }

@@ -2,9 +2,9 @@
 //! and the mix picker (quick choices in rows, the custom O2 and He).
 
 use super::super::session::{Picker, Session};
-use crate::plan::ModelKind;
-use crate::plan::catalogue::presets;
+use crate::plan::catalogue::{Preset, presets};
 use crate::plan::error::{first_upper, fmt_num};
+use crate::plan::{CylinderSpec, ModelKind};
 
 /// Quick mixes per row: four fit a 360 px phone at 64 px or more each.
 const MIXES_PER_ROW: usize = 4;
@@ -123,21 +123,43 @@ fn preset_picks() -> Vec<PickRowVm> {
     presets()
         .iter()
         .enumerate()
-        .map(|(index, p)| {
-            let water = p.set.spec.water_per_cylinder(ModelKind::Real);
-            PickRowVm {
-                title: p.name.to_string(),
-                detail: format!(
-                    "{} · {} L water each",
-                    p.material.name(),
-                    fmt_num((water.litres() * 10.0).round() / 10.0)
-                ),
-                mine: false,
-                count: count_text(p.set.count),
-                index,
-            }
+        .map(|(index, p)| PickRowVm {
+            title: p.name.to_string(),
+            detail: preset_detail(p),
+            mine: false,
+            count: count_text(p.set.count),
+            index,
         })
         .collect()
+}
+
+/// A generic size's second line: its material and the figures stamped on each cylinder
+/// (litres at bar) or its rating (cu ft at psi, with the water that gives it), which the
+/// diver checks against the cylinder in hand.
+pub fn preset_detail(p: &Preset) -> String {
+    let each =
+        |a: f64, ua: &str, b: f64, ub: &str| format!("{} {ua} at {} {ub}", fmt_num(a), fmt_num(b));
+    match p.set.spec {
+        CylinderSpec::Stamped {
+            water_l,
+            working_bar,
+        } => format!(
+            "{} · each {}",
+            p.material.name(),
+            each(water_l, "L", working_bar, "bar")
+        ),
+        CylinderSpec::Rated {
+            rated_cuft,
+            rated_psi,
+        } => format!(
+            "{} · each {} ({} L water)",
+            p.material.name(),
+            each(rated_cuft, "cu ft", rated_psi, "psi"),
+            fmt_num(
+                (p.set.spec.water_per_cylinder(ModelKind::Real).litres() * 10.0).round() / 10.0
+            )
+        ),
+    }
 }
 
 fn custom(s: &Session) -> Option<CustomVm> {
@@ -254,6 +276,13 @@ mod tests {
         for name in ["Twin 12 L 232 bar", "Sidemount 2 × aluminium 80"] {
             assert!(p.pairs.iter().any(|r| r.title == name), "{name}");
         }
+        // Each row shows what to check on the cylinder: the stamp, or the rating.
+        // Trade fact, from memory: an aluminium 80 is rated 77.4 cu ft at 3000 psi.
+        let row = |t: &str| p.singles.iter().chain(&p.pairs).find(|r| r.title == t);
+        let al80 = &row("Aluminium 80").unwrap().detail;
+        assert!(al80.contains("77.4 cu ft at 3000 psi"), "{al80}");
+        let twin = &row("Twin 12 L 232 bar").unwrap().detail;
+        assert!(twin.contains("each 12 L at 232 bar"), "{twin}");
     }
 
     #[test]
