@@ -209,7 +209,10 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
     }
     let mut y = y + block * n + 4.0;
     let c = plan.controlling_diver();
-    let mut notes = vec![format!(
+    // The core's warnings first, in the words the app and `plan` use.
+    let warnings = plan.warning_texts().into_iter();
+    let mut notes: Vec<String> = warnings.map(|w| format!("WARNING: {w}")).collect();
+    notes.push(format!(
         "{} controls: least usable gas, so {} allowance sets everyone's turn. Each diver may use {} {vu} going in by hand ({} {vu} by real gas).",
         c.name,
         if c.name.ends_with('s') {
@@ -220,7 +223,7 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
         fmt_num(u.volume_value(plan.team_allowance_hand).floor()),
         fmt_num(u.volume_value(plan.team_allowance_real).floor()),
         vu = u.volume_label()
-    )];
+    ));
     if plan.stress.margin.is_finite() {
         notes.push(format!(
             "Out of gas at the turn: the worst pair's reserve covers both exits at up to {}× normal breathing.",
