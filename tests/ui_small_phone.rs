@@ -9,6 +9,8 @@
 //!
 //! Each state is also drawn to `target/small-phone/NAME.png` to look at.
 
+mod layout_check;
+
 use i_slint_backend_testing::{
     AccessibleRole, ElementHandle, ElementQuery, TestingBackend, TestingBackendOptions,
 };
@@ -126,6 +128,7 @@ fn every_page_works_on_a_small_phone_with_large_text() {
         save_png(&app, name);
         seen += elements(&app).len();
         all.extend(problems(&app, name, keypad));
+        all.extend(layout_check::problems(app.window.window(), name));
     };
 
     state("cautions", false, &|_| {});
@@ -198,6 +201,7 @@ fn every_page_works_on_a_small_phone_with_large_text() {
         f(&mut app.session.borrow_mut());
         refresh_all(&app.window, &app.session.borrow());
         all.extend(problems(&app, name, false));
+        all.extend(layout_check::problems(app.window.window(), name));
     };
     tall("locker-edit (whole page)", &|s| {
         s.back();
