@@ -278,14 +278,12 @@ fn hidden(item: &ItemRc) -> bool {
 fn surroundings(item: &ItemRc, screen: Rect) -> (Rect, Vec<Rect>, Option<Rect>) {
     let mut clips = Vec::new();
     let mut button = None;
-    let mut child = item.clone();
     for a in ancestors(item) {
         if button.is_none() && a.accessible_role() == AccessibleRole::Button {
             button = Some(Rect::of(&a));
         }
-        if a.downcast::<Flickable>().is_some() {
+        if let Some(f) = a.downcast::<Flickable>() {
             // The content scrolls: what lies inside the flickable's content can be reached.
-            let f = a.downcast::<Flickable>().unwrap();
             let f = f.as_pin_ref();
             let at = Rect::of(&a);
             let content = Rect {
@@ -294,7 +292,6 @@ fn surroundings(item: &ItemRc, screen: Rect) -> (Rect, Vec<Rect>, Option<Rect>) 
                 w: f.content_width().0.max(at.w),
                 h: f.content_height().0.max(at.h),
             };
-            let _ = child;
             return (content, clips, button);
         }
         if let Some(c) = a.downcast::<Clip>() {
@@ -303,7 +300,6 @@ fn surroundings(item: &ItemRc, screen: Rect) -> (Rect, Vec<Rect>, Option<Rect>) 
                 clips.push(Rect::of(&a));
             }
         }
-        child = a;
     }
     (screen, clips, button)
 }
