@@ -142,6 +142,7 @@ slint::slint! {
         }
         Text { x: 0px; y: 150px; width: 90px; height: 30px; text: "Locker"; color: transparent; }
         Text { x: 100px; y: 40px; width: 90px; height: 30px; text: "fine"; }
+        Text { x: 100px; y: 80px; width: 30px; height: 30px; text: "Diver 2"; overflow: elide; }
     }
 }
 
@@ -159,6 +160,7 @@ fn the_check_names_each_kind_of_fault() {
     let all = found.join("\n");
     assert!(has("210 bar", "wider than its box"), "{all}");
     assert!(has("aluminium", "splits a word"), "{all}");
+    assert!(has("Diver 2", "cut short"), "{all}");
     assert!(
         has("one two three four five six seven", "cut at the bottom"),
         "{all}"

@@ -4,7 +4,7 @@
 //! the whole line otherwise), its colour and what is painted behind it.
 //!
 //! `problems` names each text that a diver could not read whole:
-//! - wider than its box (a unit cut off, digits over a border);
+//! - wider than its box (a unit cut off, digits over a border), or cut short with "…";
 //! - a word split across lines (its longest word wider than the box);
 //! - taller than its box (wrapped lines cut at the bottom);
 //! - outside what can be seen or scrolled to (past the window, or past the end of a
@@ -83,6 +83,8 @@ pub struct TextBox {
     /// The toolkit's smallest width for the words: the longest word when wrapping,
     /// the whole line otherwise.
     pub min_width: f32,
+    /// The width of all its words on one line.
+    pub line_width: f32,
     /// The height its words need at the box's width.
     pub need_height: f32,
     pub wraps: bool,
@@ -179,6 +181,7 @@ pub fn texts(window: &slint::Window) -> Vec<TextBox> {
             rect,
             ink,
             min_width: h.min,
+            line_width: h.preferred,
             need_height: v.min,
             wraps: t.wraps,
             elides: t.elides,
@@ -368,6 +371,12 @@ pub fn problems(window: &slint::Window, state: &str) -> Vec<String> {
             out.push(format!(
                 "{state}: {name:?} is wider than its box ({:.0} px in {:.0} px)",
                 t.min_width, r.w
+            ));
+        }
+        if t.elides && t.line_width > r.w + SLACK {
+            out.push(format!(
+                "{state}: {name:?} is cut short with … ({:.0} px in {:.0} px)",
+                t.line_width, r.w
             ));
         }
         if t.wraps && t.min_width > r.w + SLACK {
