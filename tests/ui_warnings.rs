@@ -254,3 +254,33 @@ fn a_locker_name_never_contradicts_its_sizes_without_a_word() {
         "{w}"
     );
 }
+
+#[test]
+fn a_fill_far_over_the_working_pressure_is_named_before_it_is_planned_with() {
+    init();
+    let dir = tempfile::tempdir().unwrap();
+    let app = open(dir.path());
+    press(&app, "fill check");
+    // Ines's set is a twin 12 L 232 bar (the demo). A 300 bar fill cooling to the water.
+    assert!(
+        values(&app, "fill warning").is_empty(),
+        "232 bar by default"
+    );
+    press(&app, "fill pressure");
+    press(&app, "clear");
+    type_keys(&app, "300");
+    press(&app, "done");
+    let predicted = {
+        let s = app.session.borrow();
+        s.fill.usable_start(s.team.input())
+    };
+    let w = value(&app, "fill warning");
+    assert!(w.starts_with("Overfill"), "{w}");
+    // Planned with, the same words come from the plan on the Team page.
+    press(&app, "plan with the prediction");
+    let s = app.session.borrow();
+    assert_eq!(s.team.input().divers[0].start, predicted);
+    drop(s);
+    press(&app, "back");
+    assert_eq!(value(&app, "problem for Ines"), w);
+}
