@@ -78,6 +78,7 @@ fn every_text_in_every_state_reaches_seven_to_one() {
         .set_size(slint::LogicalSize::new(412.0, 3000.0));
     let mut failures = Vec::new();
     let mut checked = 0;
+    let mut lowest = (f64::INFINITY, String::new());
     let mut state = |name: &str, f: &dyn Fn(&mut Session)| {
         f(&mut app.session.borrow_mut());
         refresh_all(&app.window, &app.session.borrow());
@@ -88,6 +89,12 @@ fn every_text_in_every_state_reaches_seven_to_one() {
             let fg = layout_check::blend(t.colour, t.background);
             let c = layout_check::contrast(fg, t.background);
             checked += 1;
+            if c < lowest.0 {
+                lowest = (
+                    c,
+                    format!("{name}: {:?}", t.text.chars().take(30).collect::<String>()),
+                );
+            }
             if c < 7.0 {
                 failures.push(format!(
                     "{name}: {:?} {:?} on {:?}: {c:.2}:1",
@@ -172,6 +179,10 @@ fn every_text_in_every_state_reaches_seven_to_one() {
     state("discard prompt", &|s| {
         s.back();
     });
+    println!(
+        "{checked} texts in 18 states; lowest {:.2}:1 ({})",
+        lowest.0, lowest.1
+    );
     assert!(checked > 300, "only {checked} texts looked at");
     assert!(
         failures.is_empty(),
