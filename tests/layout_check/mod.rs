@@ -347,7 +347,7 @@ pub fn contrast(a: Color, b: Color) -> f64 {
 
 /// The words of a text, shortened for a message.
 fn short(t: &str) -> String {
-    let t = t.replace('\u{a0}', " ").replace('\n', " ");
+    let t = t.replace(['\u{a0}', '\n'], " ");
     if t.chars().count() > 40 {
         format!("{}…", t.chars().take(40).collect::<String>())
     } else {

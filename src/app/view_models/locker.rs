@@ -1,9 +1,9 @@
 //! The cylinder locker and its editor.
 
 use super::super::session::Session;
-use crate::plan::ModelKind;
-use crate::plan::catalogue::{Material, presets};
+use crate::plan::catalogue::{Material, Preset, presets};
 use crate::plan::error::fmt_num;
+use crate::plan::{CylinderSpec, ModelKind};
 
 pub struct LockerRowVm {
     pub id: i32,
@@ -99,6 +99,35 @@ pub fn locker_edit(s: &Session) -> Option<LockerEditVm> {
 pub fn preset_rows() -> Vec<(String, String)> {
     presets()
         .iter()
-        .map(|p| (p.name.to_string(), super::pickers::preset_detail(p)))
+        .map(|p| (p.name.to_string(), preset_detail(p)))
         .collect()
+}
+
+/// A generic size's second line: its material and the figures stamped on each cylinder
+/// (litres at bar) or its rating (cu ft at psi, with the water that gives it), which the
+/// diver checks against the cylinder in hand.
+pub fn preset_detail(p: &Preset) -> String {
+    let each =
+        |a: f64, ua: &str, b: f64, ub: &str| format!("{} {ua} at {} {ub}", fmt_num(a), fmt_num(b));
+    match p.set.spec {
+        CylinderSpec::Stamped {
+            water_l,
+            working_bar,
+        } => format!(
+            "{} · each {}",
+            p.material.name(),
+            each(water_l, "L", working_bar, "bar")
+        ),
+        CylinderSpec::Rated {
+            rated_cuft,
+            rated_psi,
+        } => format!(
+            "{} · each {} ({} L water)",
+            p.material.name(),
+            each(rated_cuft, "cu ft", rated_psi, "psi"),
+            fmt_num(
+                (p.set.spec.water_per_cylinder(ModelKind::Real).litres() * 10.0).round() / 10.0
+            )
+        ),
+    }
 }

@@ -2,9 +2,10 @@
 //! and the mix picker (quick choices in rows, the custom O2 and He).
 
 use super::super::session::{Picker, Session};
-use crate::plan::catalogue::{Preset, presets};
+use super::locker::preset_detail;
+use crate::plan::ModelKind;
+use crate::plan::catalogue::presets;
 use crate::plan::error::{first_upper, fmt_num};
-use crate::plan::{CylinderSpec, ModelKind};
 
 /// Quick mixes per row: four fit a 360 px phone at 64 px or more each.
 const MIXES_PER_ROW: usize = 4;
@@ -131,35 +132,6 @@ fn preset_picks() -> Vec<PickRowVm> {
             index,
         })
         .collect()
-}
-
-/// A generic size's second line: its material and the figures stamped on each cylinder
-/// (litres at bar) or its rating (cu ft at psi, with the water that gives it), which the
-/// diver checks against the cylinder in hand.
-pub fn preset_detail(p: &Preset) -> String {
-    let each =
-        |a: f64, ua: &str, b: f64, ub: &str| format!("{} {ua} at {} {ub}", fmt_num(a), fmt_num(b));
-    match p.set.spec {
-        CylinderSpec::Stamped {
-            water_l,
-            working_bar,
-        } => format!(
-            "{} · each {}",
-            p.material.name(),
-            each(water_l, "L", working_bar, "bar")
-        ),
-        CylinderSpec::Rated {
-            rated_cuft,
-            rated_psi,
-        } => format!(
-            "{} · each {} ({} L water)",
-            p.material.name(),
-            each(rated_cuft, "cu ft", rated_psi, "psi"),
-            fmt_num(
-                (p.set.spec.water_per_cylinder(ModelKind::Real).litres() * 10.0).round() / 10.0
-            )
-        ),
-    }
 }
 
 fn custom(s: &Session) -> Option<CustomVm> {
