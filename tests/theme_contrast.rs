@@ -52,3 +52,142 @@ fn every_declared_pair_reaches_seven_to_one() {
     }
     assert!(pairs >= 8, "only {pairs} pairs declared");
 }
+
+#[path = "layout_check/mod.rs"]
+mod layout_check;
+
+/// Every text the real UI shows, in every state a diver meets (selected values and
+/// choices, disabled buttons, warnings, the mine mark, boxed chart cells, prompts),
+/// against what is painted behind it: at least 7:1 (WCAG 2.1, 1.4.6). The colours are
+/// read from the laid-out item tree, so a state's pair cannot be missed by the list of
+/// declared pairs above.
+#[test]
+fn every_text_in_every_state_reaches_seven_to_one() {
+    use slint::ComponentHandle;
+    use turnsheet::app::App;
+    use turnsheet::app::adapters::refresh_all;
+    use turnsheet::app::nav::Screen;
+    use turnsheet::app::session::{EntryTarget, Session};
+
+    i_slint_backend_testing::init_no_event_loop();
+    let dir = tempfile::tempdir().unwrap();
+    let app = App::new(dir.path()).unwrap();
+    // Tall, so that every text is laid out on screen at once.
+    app.window
+        .window()
+        .set_size(slint::LogicalSize::new(412.0, 3000.0));
+    let mut failures = Vec::new();
+    let mut checked = 0;
+    let mut lowest = (f64::INFINITY, String::new());
+    let mut state = |name: &str, f: &dyn Fn(&mut Session)| {
+        f(&mut app.session.borrow_mut());
+        refresh_all(&app.window, &app.session.borrow());
+        for t in layout_check::texts(app.window.window()) {
+            if t.covered || t.colour.alpha() == 0 {
+                continue;
+            }
+            let fg = layout_check::blend(t.colour, t.background);
+            let c = layout_check::contrast(fg, t.background);
+            checked += 1;
+            if c < lowest.0 {
+                lowest = (
+                    c,
+                    format!("{name}: {:?}", t.text.chars().take(30).collect::<String>()),
+                );
+            }
+            if c < 7.0 {
+                failures.push(format!(
+                    "{name}: {:?} {:?} on {:?}: {c:.2}:1",
+                    t.text.chars().take(30).collect::<String>(),
+                    fg,
+                    t.background
+                ));
+            }
+        }
+    };
+    state("cautions", &|_| {});
+    state("team", &|s| s.acknowledge_cautions());
+    // A value already read: the keypad opens with it selected (lit).
+    state("keypad selected", &|s| {
+        s.confirm_start(0);
+        s.open_entry(EntryTarget::Start(0))
+    });
+    // A refused value: the message, the field's border and Done disabled.
+    state("keypad refused", &|s| {
+        for k in ["9", "9", "9"] {
+            s.key(k);
+        }
+    });
+    // An overfill: said on the keypad, not refused.
+    state("keypad warning", &|s| {
+        s.key("clear");
+        for k in ["3", "0", "0"] {
+            s.key(k);
+        }
+    });
+    state("team with warnings and halves", &|s| {
+        s.entry_done();
+        s.set_rule(0); // halves: the rule warning
+    });
+    state("letters", &|s| s.open_entry(EntryTarget::DiverName(0)));
+    state("mix picker", &|s| {
+        s.cancel_entry();
+        s.open_mix_picker(0);
+    });
+    state("cylinder picker", &|s| {
+        s.picker.close();
+        s.open_cylinder_picker(1);
+    });
+    state("custom set", &|s| s.open_custom_cylinders());
+    state("turns", &|s| {
+        s.picker.close();
+        for i in 0..s.team.len() {
+            s.confirm_start(i);
+        }
+        s.go(Screen::Turns);
+    });
+    state("buddy", &|s| s.go(Screen::Buddy));
+    state("chart", &|s| {
+        s.back();
+        s.go(Screen::Chart);
+    });
+    state("fill", &|s| {
+        s.back();
+        s.back();
+        s.go(Screen::Fill);
+    });
+    state("settings", &|s| {
+        s.back();
+        s.go(Screen::Settings);
+    });
+    state("locker", &|s| {
+        s.go(Screen::Locker);
+        s.locker_copy_preset(0);
+        s.locker_save().unwrap();
+        let id = s.locker.entries()[0].id;
+        s.locker.make_mine(id);
+    });
+    state("locker edit, name warning", &|s| {
+        let id = s.locker.entries()[0].id;
+        s.locker_edit(id);
+        s.open_entry(EntryTarget::LockerName);
+        s.key("clear");
+        s.key("A");
+        s.entry_done();
+        s.locker.edit_draft(|d| d.change_count(1));
+    });
+    state("discard prompt", &|s| {
+        s.back();
+    });
+    println!(
+        "{checked} texts in 18 states; lowest {:.2}:1 ({})",
+        lowest.0, lowest.1
+    );
+    assert!(checked > 300, "only {checked} texts looked at");
+    assert!(
+        failures.is_empty(),
+        "{} texts under 7:1:\n{}",
+        failures.len(),
+        failures.join("\n")
+    );
+}

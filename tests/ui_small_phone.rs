@@ -2,12 +2,17 @@
 //! 1.3 (Android's "large"), through the real toolkit with the software renderer.
 //!
 //! Checked for every state:
+//! - every text can be read whole (`layout_check`): none wider than its box, no word
+//!   split across lines, no lines cut at the bottom, none out of reach of scrolling,
+//!   none drawn over another or touching a button's border, no title withheld;
 //! - every button is at least 48 × 48 px (the common minimum touch target);
 //! - nothing reaches past the left or right edge;
 //! - the open keypad (field, message, keys, Cancel and Done) fits inside the window, so
 //!   nothing is hidden behind it or below it.
 //!
 //! Each state is also drawn to `target/small-phone/NAME.png` to look at.
+
+mod layout_check;
 
 use i_slint_backend_testing::{
     AccessibleRole, ElementHandle, ElementQuery, TestingBackend, TestingBackendOptions,
@@ -104,14 +109,73 @@ fn problems(app: &App, state: &str, keypad: bool) -> Vec<String> {
     out
 }
 
-#[test]
-fn every_page_works_on_a_small_phone_with_large_text() {
+/// The testing backend with the software renderer, for this test's thread.
+fn software_backend() {
     slint::platform::set_platform(Box::new(TestingBackend::new(TestingBackendOptions {
         mock_time: true,
         threading: false,
         renderer_name: Some("software".into()),
     })))
     .unwrap();
+}
+
+slint::slint! {
+    // One fault of each kind the check must name, and one text that is fine.
+    export component Faults inherits Window {
+        width: 200px;
+        height: 300px;
+        Text { x: 0px; y: 0px; width: 30px; height: 30px; text: "210 bar"; }
+        Text { x: 0px; y: 40px; width: 30px; height: 100px; text: "aluminium"; wrap: word-wrap; }
+        Text { x: 100px; y: 0px; width: 90px; height: 14px; text: "one two three four five six seven"; wrap: word-wrap; }
+        Text { x: 0px; y: 285px; width: 100px; height: 30px; text: "footer"; }
+        Flickable {
+            x: 100px; y: 150px; width: 100px; height: 60px;
+            content-height: 60px;
+            Text { x: 0px; y: 100px; width: 90px; height: 20px; text: "last row"; }
+        }
+        Text { x: 0px; y: 220px; width: 60px; height: 30px; text: "•••"; }
+        Text { x: 5px; y: 220px; width: 60px; height: 30px; text: "psi"; }
+        Rectangle {
+            x: 100px; y: 230px; width: 40px; height: 48px;
+            accessible-role: button;
+            Text { width: parent.width; height: parent.height; text: "Save"; }
+        }
+        Text { x: 0px; y: 150px; width: 90px; height: 30px; text: "Locker"; color: transparent; }
+        Text { x: 100px; y: 40px; width: 90px; height: 30px; text: "fine"; }
+        Text { x: 100px; y: 80px; width: 30px; height: 30px; text: "Diver 2"; overflow: elide; }
+    }
+}
+
+#[test]
+fn the_check_names_each_kind_of_fault() {
+    software_backend();
+    let ui = Faults::new().unwrap();
+    ui.show().unwrap();
+    let found = layout_check::problems(ui.window(), "faults");
+    let has = |text: &str, kind: &str| {
+        found
+            .iter()
+            .any(|p| p.contains(&format!("{text:?}")) && p.contains(kind))
+    };
+    let all = found.join("\n");
+    assert!(has("210 bar", "wider than its box"), "{all}");
+    assert!(has("aluminium", "splits a word"), "{all}");
+    assert!(has("Diver 2", "cut short"), "{all}");
+    assert!(
+        has("one two three four five six seven", "cut at the bottom"),
+        "{all}"
+    );
+    assert!(has("footer", "cannot be seen or scrolled to"), "{all}");
+    assert!(has("last row", "cannot be seen or scrolled to"), "{all}");
+    assert!(has("•••", "drawn over each other"), "{all}");
+    assert!(has("Save", "button's border"), "{all}");
+    assert!(has("Locker", "drawn invisible"), "{all}");
+    assert!(!all.contains("\"fine\""), "{all}");
+}
+
+#[test]
+fn every_page_works_on_a_small_phone_with_large_text() {
+    software_backend();
     let dir = tempfile::tempdir().unwrap();
     let app = App::new(dir.path()).unwrap();
     app.set_font_scale(SCALE);
@@ -126,6 +190,7 @@ fn every_page_works_on_a_small_phone_with_large_text() {
         save_png(&app, name);
         seen += elements(&app).len();
         all.extend(problems(&app, name, keypad));
+        all.extend(layout_check::problems(app.window.window(), name));
     };
 
     state("cautions", false, &|_| {});
@@ -198,6 +263,7 @@ fn every_page_works_on_a_small_phone_with_large_text() {
         f(&mut app.session.borrow_mut());
         refresh_all(&app.window, &app.session.borrow());
         all.extend(problems(&app, name, false));
+        all.extend(layout_check::problems(app.window.window(), name));
     };
     tall("locker-edit (whole page)", &|s| {
         s.back();

@@ -22,6 +22,8 @@ pub struct Draft {
     pub second: Option<f64>,
     pub material: Material,
     pub note: String,
+    /// The sizes the name was made from or typed for (None until the sizes are whole).
+    pub named_for: Option<CylinderSet>,
 }
 
 impl Draft {
@@ -35,12 +37,13 @@ impl Draft {
             second: None,
             material: Material::Steel,
             note: String::new(),
+            named_for: None,
         }
     }
 
     pub fn from_entry(e: &LockerEntry) -> Self {
         let rated = e.cylinders.rated_cuft.is_some();
-        Draft {
+        let mut d = Draft {
             id: Some(e.id),
             name: e.name.clone(),
             count: e.cylinders.count,
@@ -57,7 +60,10 @@ impl Draft {
             },
             material: e.material,
             note: e.note.clone(),
-        }
+            named_for: None,
+        };
+        d.named_for = d.sizes();
+        d
     }
 
     pub fn from_preset(p: &Preset) -> Self {
@@ -110,15 +116,9 @@ impl Draft {
         }
     }
 
-    /// The cylinder set, checked by the planning core's rules.
-    pub fn to_set(&self) -> Result<CylinderSet, InputError> {
-        let [a, b] = self.field_specs();
-        let first = self
-            .first
-            .ok_or_else(|| InputError::new(a.0.to_lowercase(), "enter a value"))?;
-        let second = self
-            .second
-            .ok_or_else(|| InputError::new(b.0.to_lowercase(), "enter a value"))?;
+    /// The count and both sizes, when all are entered (not yet checked).
+    pub fn sizes(&self) -> Option<CylinderSet> {
+        let (first, second) = (self.first?, self.second?);
         let spec = if self.rated {
             CylinderSpec::Rated {
                 rated_cuft: first,
@@ -130,12 +130,114 @@ impl Draft {
                 working_bar: second,
             }
         };
-        let set = CylinderSet {
+        Some(CylinderSet {
             count: self.count,
             spec,
-        };
+        })
+    }
+
+    /// After an edit from `before`: a name typed now is the diver's for the sizes of now;
+    /// a name that states the sizes (made from them, as every generic size's is) follows
+    /// them; an empty name is made from the sizes once they are whole. A typed name that
+    /// does not state them stays, and `name_warning` says so.
+    pub fn follow_sizes(&mut self, before: &Draft) {
+        let now = self.sizes();
+        if self.name != before.name {
+            self.named_for = now;
+            return;
+        }
+        if self.material != before.material {
+            self.name = replace_material(&self.name, before.material, self.material);
+        }
+        let Some(now) = now else { return };
+        match self.named_for {
+            Some(old) if old == now => {}
+            Some(old) => {
+                if let Some(name) = rename(&self.name, &old, &now) {
+                    self.name = name;
+                    self.named_for = Some(now);
+                }
+            }
+            None => {
+                if self.name.trim().is_empty() {
+                    self.name = made_name(&now);
+                }
+                self.named_for = Some(now);
+            }
+        }
+    }
+
+    /// A warning while the name was typed for other sizes than the set holds now.
+    pub fn name_warning(&self) -> Option<String> {
+        let (old, now) = (self.named_for?, self.sizes()?);
+        (old != now).then(|| {
+            format!(
+                "The name was given to {}; the set now holds {}. Check the name still fits.",
+                old.describe(),
+                now.describe()
+            )
+        })
+    }
+
+    /// The cylinder set, checked by the planning core's rules.
+    pub fn to_set(&self) -> Result<CylinderSet, InputError> {
+        let [a, b] = self.field_specs();
+        if self.first.is_none() {
+            return Err(InputError::new(a.0.to_lowercase(), "enter a value"));
+        }
+        let set = self
+            .sizes()
+            .ok_or_else(|| InputError::new(b.0.to_lowercase(), "enter a value"))?;
         validate_cylinders(UnitSystem::Metric, "cylinders", &set)?;
         Ok(set)
+    }
+}
+
+/// The name made from the sizes: "Single 15 L 232 bar", "Twin 12 L 232 bar",
+/// "3 × 40 cu ft 3000 psi".
+pub fn made_name(set: &CylinderSet) -> String {
+    format!("{}{}", count_word(set.count), set.spec.describe())
+}
+
+fn count_word(count: u8) -> String {
+    match count {
+        1 => "Single ".to_string(),
+        2 => "Twin ".to_string(),
+        n => format!("{n} × "),
+    }
+}
+
+/// `name` with the sizes of `old` replaced by those of `now`; None when the name does not
+/// state the old cylinder's sizes (a name of the diver's own).
+fn rename(name: &str, old: &CylinderSet, now: &CylinderSet) -> Option<String> {
+    let (was, is) = (old.spec.describe(), now.spec.describe());
+    if !name.contains(&was) {
+        return None;
+    }
+    let mut name = name.replacen(&was, &is, 1);
+    if old.count != now.count {
+        let (w, n) = (count_word(old.count), count_word(now.count));
+        let (wx, nx) = (format!("{} × ", old.count), format!("{} × ", now.count));
+        if let Some(rest) = name.strip_prefix(&w) {
+            name = format!("{n}{rest}");
+        } else if name.contains(&wx) {
+            // "Sidemount 2 × …": the count inside the name.
+            let by = if now.count == 1 { String::new() } else { nx };
+            name = name.replacen(&wx, &by, 1);
+        }
+    }
+    Some(name)
+}
+
+/// The material's word in `name` (as written, or with a capital) replaced by the new one's.
+fn replace_material(name: &str, old: Material, now: Material) -> String {
+    let cap = |m: Material| crate::plan::error::first_upper(m.name());
+    if name.contains(old.name()) {
+        name.replacen(old.name(), now.name(), 1)
+    } else if name.contains(&cap(old)) {
+        name.replacen(&cap(old), &cap(now), 1)
+    } else {
+        name.to_string()
     }
 }
 

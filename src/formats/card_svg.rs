@@ -222,7 +222,10 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
         p.line(MARGIN, top + block, right, top + block, 0.2);
     }
     let mut y = y + block * n + 4.0;
-    let mut notes = vec![crate::plan::hand_check::allowance_source_sentence(team, plan)];
+    // The core's warnings first, in the words the app and `plan` use.
+    let warnings = plan.warning_texts().into_iter();
+    let mut notes: Vec<String> = warnings.map(|w| format!("WARNING: {w}")).collect();
+    notes.push(crate::plan::hand_check::allowance_source_sentence(team, plan));
     if plan.stress.margin.is_finite() {
         notes.push(format!(
             "Out of gas at the turn: the worst pair's reserve covers both exits at up to {}× normal breathing.",

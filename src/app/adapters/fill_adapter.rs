@@ -35,4 +35,5 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
     a.set_unit(f.unit.into());
     a.set_detail(f.detail.into());
     a.set_use_text(f.use_text.into());
+    a.set_warning(f.warning.into());
 }

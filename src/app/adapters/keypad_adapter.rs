@@ -34,6 +34,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
             a.set_display(k.display.into());
             a.set_unit(k.unit.into());
             a.set_reason(k.reason.into());
+            a.set_warning(k.warning.into());
             a.set_selected(k.selected);
             a.set_can_decimal(k.can_decimal);
             a.set_can_step(k.can_step);

@@ -93,6 +93,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
     if let Some(d) = vm::locker_edit(s) {
         e.set_title(d.title.into());
         e.set_name(d.name.into());
+        e.set_name_warning(d.name_warning.into());
         e.set_count(d.count);
         e.set_rated(d.rated);
         e.set_first_label(d.first_label.into());

@@ -73,10 +73,13 @@ impl LockerController {
     pub fn draft(&self) -> Option<&Draft> {
         self.draft.as_ref()
     }
-    /// Change the open draft; nothing happens when none is open.
+    /// Change the open draft; nothing happens when none is open. A name made from the
+    /// sizes follows them (`Draft::follow_sizes`).
     pub fn edit_draft(&mut self, edit: impl FnOnce(&mut Draft)) {
         if let Some(d) = self.draft.as_mut() {
+            let before = d.clone();
             edit(d);
+            d.follow_sizes(&before);
         }
     }
     /// Close the draft without saving.

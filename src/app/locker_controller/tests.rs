@@ -89,3 +89,85 @@ fn a_set_added_from_a_diver_gets_a_free_name_and_is_not_mine() {
     };
     assert_eq!(n.chars().count(), MAX_SET_NAME_CHARS);
 }
+
+fn stamped(count: u8, water_l: f64, working_bar: f64) -> CylinderSet {
+    CylinderSet {
+        count,
+        spec: crate::plan::CylinderSpec::Stamped {
+            water_l,
+            working_bar,
+        },
+    }
+}
+
+#[test]
+fn a_name_made_from_the_sizes_follows_them() {
+    let mut l = LockerController::default();
+    let twin12 = crate::plan::catalogue::presets()
+        .into_iter()
+        .find(|p| p.name == "Twin 12 L 232 bar")
+        .unwrap();
+    l.start_from_preset(&twin12);
+    l.edit_draft(|d| d.first = Some(11.0));
+    assert_eq!(l.draft().unwrap().name, "Twin 11 L 232 bar");
+    l.edit_draft(|d| d.change_count(-1));
+    assert_eq!(l.draft().unwrap().name, "Single 11 L 232 bar");
+    l.edit_draft(|d| d.second = Some(300.0));
+    assert_eq!(l.draft().unwrap().name, "Single 11 L 300 bar");
+    assert_eq!(l.draft().unwrap().name_warning(), None);
+    // Switching to a rating empties the sizes; the name waits for whole ones.
+    l.edit_draft(|d| d.set_rated(true));
+    assert_eq!(l.draft().unwrap().name, "Single 11 L 300 bar");
+    l.edit_draft(|d| d.first = Some(80.0));
+    l.edit_draft(|d| d.second = Some(3000.0));
+    assert_eq!(l.draft().unwrap().name, "Single 80 cu ft 3000 psi");
+    let id = l.save_draft().unwrap();
+    assert_eq!(l.entry(id).unwrap().name, "Single 80 cu ft 3000 psi");
+
+    // A new set gets its name from its sizes once they are whole.
+    l.start_new();
+    l.edit_draft(|d| d.first = Some(12.0));
+    assert_eq!(l.draft().unwrap().name, "");
+    l.edit_draft(|d| d.second = Some(232.0));
+    assert_eq!(l.draft().unwrap().name, "Twin 12 L 232 bar");
+
+    // The count inside a sidemount name, and its material.
+    let mut d = Draft::blank();
+    d.name = "Sidemount 2 × aluminium 11.1 L 207 bar".into();
+    d.first = Some(11.1);
+    d.second = Some(207.0);
+    d.material = Material::Aluminium;
+    d.named_for = d.sizes();
+    let before = d.clone();
+    d.change_count(1);
+    d.set_material(2);
+    d.follow_sizes(&before);
+    assert_eq!(d.name, "Sidemount 3 × composite 11.1 L 207 bar");
+}
+
+#[test]
+fn a_typed_name_gets_a_warning_when_the_sizes_change() {
+    let mut l = LockerController::default();
+    l.start_new();
+    l.edit_draft(|d| {
+        d.first = Some(12.0);
+        d.second = Some(232.0);
+    });
+    l.edit_draft(|d| d.name = "Cave set".into());
+    assert_eq!(l.draft().unwrap().name_warning(), None);
+    l.edit_draft(|d| d.first = Some(11.0));
+    let d = l.draft().unwrap();
+    assert_eq!(d.name, "Cave set", "a typed name is the diver's");
+    let w = d.name_warning().expect("a warning");
+    assert!(
+        w.contains("2 × 12 L 232 bar") && w.contains("2 × 11 L 232 bar"),
+        "{w}"
+    );
+    // Back to the sizes it was typed for: no warning; typed again: none either.
+    l.edit_draft(|d| d.first = Some(12.0));
+    assert_eq!(l.draft().unwrap().name_warning(), None);
+    l.edit_draft(|d| d.first = Some(11.0));
+    l.edit_draft(|d| d.name = "Cave set 11".into());
+    assert_eq!(l.draft().unwrap().name_warning(), None);
+    assert_eq!(l.draft().unwrap().sizes(), Some(stamped(2, 11.0, 232.0)));
+}

@@ -1,7 +1,8 @@
 //! The open keypad: what it is for, what was typed and why it cannot be used yet.
 
-use super::super::session::Session;
+use super::super::session::{EntryTarget, Session};
 use crate::plan::error::fmt_num;
+use crate::plan::warning::{Supply, Warning};
 
 pub struct KeypadVm {
     pub letters: bool,
@@ -9,6 +10,9 @@ pub struct KeypadVm {
     pub display: String,
     pub unit: String,
     pub reason: String,
+    /// The plan's warnings about the value typed (a start above the working pressure, an
+    /// overfill, a low fill), in the core's words; empty when there are none.
+    pub warning: String,
     /// The opening value is selected: the first key replaces it.
     pub selected: bool,
     pub can_decimal: bool,
@@ -27,9 +31,35 @@ pub fn keypad(s: &Session) -> Option<KeypadVm> {
         display: e.buffer().text().to_string(),
         unit: e.unit().to_string(),
         reason: e.reason().to_string(),
+        warning: entry_warnings(s, e.target()).join(" "),
         selected: e.buffer().is_selected(),
         can_decimal: e.buffer().allows_decimal(),
         can_step: e.step().is_some(),
         step_text: e.step().map(fmt_num).unwrap_or_default(),
     })
+}
+
+/// The plan's warnings about the supply a start keypad enters: the same list the Team and
+/// Turns pages, the CLI and the card show, so a value is never accepted without them.
+fn entry_warnings(s: &Session, target: EntryTarget) -> Vec<String> {
+    let (diver, supply) = match target {
+        EntryTarget::Start(i) => (i, Supply::Main),
+        EntryTarget::StageStart(i) => (i, Supply::Stage),
+        _ => return Vec::new(),
+    };
+    s.team
+        .plan()
+        .warnings
+        .iter()
+        .filter(|w| {
+            w.diver() == Some(diver)
+                && matches!(
+                    w,
+                    Warning::AboveWorking { supply: x, .. }
+                        | Warning::Overfill { supply: x, .. }
+                        | Warning::LowFill { supply: x, .. } if *x == supply
+                )
+        })
+        .map(Warning::detail)
+        .collect()
 }

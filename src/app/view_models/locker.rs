@@ -1,9 +1,9 @@
 //! The cylinder locker and its editor.
 
 use super::super::session::Session;
-use crate::plan::ModelKind;
-use crate::plan::catalogue::{Material, presets};
+use crate::plan::catalogue::{Material, Preset, presets};
 use crate::plan::error::fmt_num;
+use crate::plan::{CylinderSpec, ModelKind};
 
 pub struct LockerRowVm {
     pub id: i32,
@@ -45,6 +45,8 @@ pub fn undo_text(s: &Session) -> String {
 pub struct LockerEditVm {
     pub title: String,
     pub name: String,
+    /// The name was typed for other sizes; empty otherwise.
+    pub name_warning: String,
     pub count: i32,
     pub rated: bool,
     pub first_label: String,
@@ -72,6 +74,7 @@ pub fn locker_edit(s: &Session) -> Option<LockerEditVm> {
         }
         .to_string(),
         name: d.name.clone(),
+        name_warning: d.name_warning().unwrap_or_default(),
         count: i32::from(d.count),
         rated: d.rated,
         first_label: specs[0].0.to_string(),
@@ -96,16 +99,35 @@ pub fn locker_edit(s: &Session) -> Option<LockerEditVm> {
 pub fn preset_rows() -> Vec<(String, String)> {
     presets()
         .iter()
-        .map(|p| {
-            let water = p.set.spec.water_per_cylinder(ModelKind::Real);
-            (
-                p.name.to_string(),
-                format!(
-                    "{} · {} L water each",
-                    p.material.name(),
-                    fmt_num((water.litres() * 10.0).round() / 10.0)
-                ),
-            )
-        })
+        .map(|p| (p.name.to_string(), preset_detail(p)))
         .collect()
+}
+
+/// A generic size's second line: its material and the figures stamped on each cylinder
+/// (litres at bar) or its rating (cu ft at psi, with the water that gives it), which the
+/// diver checks against the cylinder in hand.
+pub fn preset_detail(p: &Preset) -> String {
+    let each =
+        |a: f64, ua: &str, b: f64, ub: &str| format!("{} {ua} at {} {ub}", fmt_num(a), fmt_num(b));
+    match p.set.spec {
+        CylinderSpec::Stamped {
+            water_l,
+            working_bar,
+        } => format!(
+            "{} · each {}",
+            p.material.name(),
+            each(water_l, "L", working_bar, "bar")
+        ),
+        CylinderSpec::Rated {
+            rated_cuft,
+            rated_psi,
+        } => format!(
+            "{} · each {} ({} L water)",
+            p.material.name(),
+            each(rated_cuft, "cu ft", rated_psi, "psi"),
+            fmt_num(
+                (p.set.spec.water_per_cylinder(ModelKind::Real).litres() * 10.0).round() / 10.0
+            )
+        ),
+    }
 }

@@ -2,6 +2,7 @@
 //! and the mix picker (quick choices in rows, the custom O2 and He).
 
 use super::super::session::{Picker, Session};
+use super::locker::preset_detail;
 use crate::plan::ModelKind;
 use crate::plan::catalogue::presets;
 use crate::plan::error::{first_upper, fmt_num};
@@ -123,19 +124,12 @@ fn preset_picks() -> Vec<PickRowVm> {
     presets()
         .iter()
         .enumerate()
-        .map(|(index, p)| {
-            let water = p.set.spec.water_per_cylinder(ModelKind::Real);
-            PickRowVm {
-                title: p.name.to_string(),
-                detail: format!(
-                    "{} · {} L water each",
-                    p.material.name(),
-                    fmt_num((water.litres() * 10.0).round() / 10.0)
-                ),
-                mine: false,
-                count: count_text(p.set.count),
-                index,
-            }
+        .map(|(index, p)| PickRowVm {
+            title: p.name.to_string(),
+            detail: preset_detail(p),
+            mine: false,
+            count: count_text(p.set.count),
+            index,
         })
         .collect()
 }
@@ -254,6 +248,13 @@ mod tests {
         for name in ["Twin 12 L 232 bar", "Sidemount 2 × aluminium 80"] {
             assert!(p.pairs.iter().any(|r| r.title == name), "{name}");
         }
+        // Each row shows what to check on the cylinder: the stamp, or the rating.
+        // Trade fact, from memory: an aluminium 80 is rated 77.4 cu ft at 3000 psi.
+        let row = |t: &str| p.singles.iter().chain(&p.pairs).find(|r| r.title == t);
+        let al80 = &row("Aluminium 80").unwrap().detail;
+        assert!(al80.contains("77.4 cu ft at 3000 psi"), "{al80}");
+        let twin = &row("Twin 12 L 232 bar").unwrap().detail;
+        assert!(twin.contains("each 12 L at 232 bar"), "{twin}");
     }
 
     #[test]

@@ -2,6 +2,7 @@
 
 use super::super::session::Session;
 use super::{pressure_down_text, temperature_text, whole_down};
+use crate::plan::Warning;
 use crate::plan::error::fmt_num;
 
 pub struct FillVm {
@@ -15,6 +16,9 @@ pub struct FillVm {
     pub unit: String,
     pub detail: String,
     pub use_text: String,
+    /// The core's warnings about the predicted start in this diver's set (an overfill);
+    /// empty when there are none.
+    pub warning: String,
 }
 
 pub fn fill(s: &Session) -> FillVm {
@@ -54,7 +58,30 @@ pub fn fill(s: &Session) -> FillVm {
             fmt_num(real),
             d.name
         ),
+        warning: {
+            // The team as it would be with the prediction as this diver's start: the
+            // same warnings the Team and Turns pages, the card and the CLI give.
+            let mut team = input.clone();
+            team.divers[i].start = s.fill.usable_start(input);
+            team.warnings()
+                .iter()
+                .filter(|w| w.diver() == Some(i) && is_main_fill(w))
+                .map(|w| w.detail())
+                .collect::<Vec<_>>()
+                .join(" ")
+        },
     }
+}
+
+/// A warning about a main start against its set's working pressure.
+fn is_main_fill(w: &Warning) -> bool {
+    use crate::plan::warning::Supply::Main;
+    matches!(
+        w,
+        Warning::AboveWorking { supply: Main, .. }
+            | Warning::Overfill { supply: Main, .. }
+            | Warning::LowFill { supply: Main, .. }
+    )
 }
 
 pub struct ChartRowVm {
