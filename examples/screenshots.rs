@@ -62,7 +62,7 @@ fn main() {
         for i in 0..s.team.len() {
             s.confirm_start(i);
             if s.team.input().divers[i].stage.is_some() {
-                s.team.mark_stage_read(i, turnsheet::app::readings::now());
+                s.team.mark_stage_read(i, s.now());
             }
         }
     });

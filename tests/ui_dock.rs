@@ -67,6 +67,12 @@ fn read_all(app: &App) {
     }
 }
 
+/// Long enough for every button to count taps again (the 0.4 s tap guard).
+fn settle() {
+    i_slint_backend_testing::mock_elapsed_time(std::time::Duration::from_millis(500));
+    slint::platform::update_timers_and_animations();
+}
+
 fn turn(app: &App, name: &str) -> String {
     value(app, &format!("turn of {name}"))
 }
@@ -150,12 +156,14 @@ fn the_gauge_is_chosen_not_cycled_and_nothing_slides_under_a_finger() {
     press(&app, "back");
     let gauge = find(&app, "gauge of Bram");
     let (p, s) = (gauge.absolute_position(), gauge.size());
+    settle();
     find(&app, "confirm start of Bram").mock_single_click(PointerEventButton::Left);
     slint::platform::update_timers_and_animations();
     assert!(all(&app, "confirm start of Bram").is_empty(), "confirmed");
     let gauge = find(&app, "gauge of Bram");
     assert_eq!((gauge.absolute_position(), gauge.size()), (p, s), "the gauge button stays put");
     // The gauge button only opens the chooser, with the current gauge marked.
+    settle();
     gauge.mock_single_click(PointerEventButton::Left);
     assert!(value(&app, "gauge bar 10").contains("(now)"));
     press(&app, "gauge psi 50");
@@ -168,8 +176,7 @@ fn the_gauge_is_chosen_not_cycled_and_nothing_slides_under_a_finger() {
     let undo = find(&app, "undo");
     undo.mock_single_click(PointerEventButton::Left);
     assert_eq!(app.session.borrow().team.len(), 2, "a tap on a button that just appeared is ignored");
-    i_slint_backend_testing::mock_elapsed_time(std::time::Duration::from_millis(500));
-    slint::platform::update_timers_and_animations();
+    settle();
     find(&app, "undo").mock_single_click(PointerEventButton::Left);
     assert_eq!(app.session.borrow().team.len(), 3, "once settled, the tap counts");
 }
@@ -197,6 +204,13 @@ fn the_chart_boxes_only_starts_read_for_this_dive() {
     read_all(&app);
     press(&app, "show turns");
     press(&app, "Chart");
+    for e in i_slint_backend_testing::ElementQuery::from_root(&app.window)
+        .match_descendants()
+        .match_predicate(|e: &ElementHandle| e.accessible_description().is_some_and(|d| d == "planned"))
+        .find_all()
+    {
+        eprintln!("{:?} {:?} {:?}", e.accessible_label(), e.accessible_value(), e.type_name());
+    }
     assert_eq!(boxed(&app), 1);
     clock.advance(3 * 3600 + 60);
     i_slint_backend_testing::mock_elapsed_time(turnsheet::app::CLOCK_WATCH);
@@ -225,4 +239,32 @@ fn the_named_controller_is_the_one_whose_sums_are_shown() {
         assert!(rule.contains(&sum), "{sum} in {rule}");
         assert!(rule.contains(&format!("{name} control")), "{rule}");
     }
+}
+
+#[test]
+fn a_second_dive_is_next_dive_and_one_keypad_entry_per_diver() {
+    let dir = tempfile::tempdir().unwrap();
+    let clock = ManualClock::at(LATE);
+    let app = open_at(dir.path(), &clock, 412.0, 4000.0);
+    read_all(&app);
+    clock.advance(2 * 3600);
+    let taps = std::cell::Cell::new(0);
+    let tap = |label: &str| {
+        taps.set(taps.get() + 1);
+        press(&app, label);
+    };
+    tap("next dive");
+    for (name, start) in [("Ines", "190"), ("Bram", "180"), ("Sol", "200")] {
+        tap(&format!("start pressure of {name}"));
+        for c in start.chars() {
+            tap(&c.to_string());
+        }
+        tap("done");
+    }
+    tap("show turns");
+    for name in ["Ines", "Bram", "Sol"] {
+        assert!(!turn(&app, name).starts_with('—'), "{name}: {}", turn(&app, name));
+    }
+    println!("second dive of three divers: {} taps", taps.get());
+    assert_eq!(taps.get(), 1 + 3 * 5 + 1);
 }

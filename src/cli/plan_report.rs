@@ -177,7 +177,7 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
         ));
     }
     s.push_str(&format!(
-        "\n* controls: {}\n",
+        "\n* controlling diver: {}\n",
         crate::plan::hand_check::allowance_source_sentence(input, plan)
     ));
     s.push_str(

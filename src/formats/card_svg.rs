@@ -4,7 +4,6 @@
 
 use crate::plan::chart::PairChart;
 use crate::plan::error::fmt_num;
-use crate::plan::out_of_gas::margin_for_display;
 use crate::plan::{TeamInput, TeamPlan};
 
 /// Page size in millimetres.
@@ -227,10 +226,8 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
     let mut notes: Vec<String> = warnings.map(|w| format!("WARNING: {w}")).collect();
     notes.push(crate::plan::hand_check::allowance_source_sentence(team, plan));
     if plan.stress.margin.is_finite() {
-        notes.push(format!(
-            "Out of gas at the turn: the worst pair's reserve covers both exits at up to {}× normal breathing.",
-            fmt_num(margin_for_display(plan.stress.margin))
-        ));
+        // The same verdict-first words as the app and `plan`.
+        notes.push(format!("Out of gas at the turn: {}", plan.margin_text()));
     }
     notes.push("Turn when the FIRST diver reaches their turn, or at any other limit.".to_string());
     for note in notes {

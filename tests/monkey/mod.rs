@@ -314,6 +314,7 @@ pub fn run_all(configs: &[Config], seed: u64, total: usize) -> Report {
     let per = total.div_ceil(configs.len());
     let mut report = Report::default();
     for (k, &config) in configs.iter().enumerate() {
+        let timed_from = report.frame_ms.len();
         let seed = seed.wrapping_add(k as u64 * 0x9e37_79b9);
         let mut rng = Rng::new(seed);
         let robot = Robot::new(config);
@@ -322,17 +323,20 @@ pub fn run_all(configs: &[Config], seed: u64, total: usize) -> Report {
         for _ in 0..per {
             let a = robot.choose(&mut rng, &seen);
             done.push(a.clone());
-            let t0 = Instant::now();
+            let frame = std::cell::Cell::new(0.0);
             let r = catch_unwind(AssertUnwindSafe(|| {
+                let t0 = Instant::now();
                 robot.apply(&a);
                 if timed {
+                    // The software renderer draws the whole window, as after a tap.
                     let _ = robot.app.window.window().take_snapshot();
+                    frame.set(t0.elapsed().as_secs_f64() * 1000.0);
                 }
                 seen = robot.look();
                 checks::check(&robot, &seen)
             }));
             if timed {
-                report.frame_ms.push(t0.elapsed().as_secs_f64() * 1000.0);
+                report.frame_ms.push(frame.get());
             }
             report.actions += 1;
             let violation = match r {
@@ -354,22 +358,30 @@ pub fn run_all(configs: &[Config], seed: u64, total: usize) -> Report {
                 break;
             }
         }
+        if timed {
+            print_times(&format!("{config:?}"), &report.frame_ms[timed_from..]);
+        }
     }
     println!(
         "{} actions, {} checks, {} violations",
         report.actions, report.checks, report.violations
     );
-    if timed && !report.frame_ms.is_empty() {
-        let mut v = report.frame_ms.clone();
-        v.sort_by(f64::total_cmp);
-        let at = |q: f64| v[((v.len() - 1) as f64 * q).round() as usize];
-        println!(
-            "action to redrawn window: median {:.2} ms, p99 {:.2} ms, worst {:.2} ms ({} actions)",
-            at(0.5),
-            at(0.99),
-            v[v.len() - 1],
-            v.len()
-        );
-    }
     report
+}
+
+/// Median, 99th percentile and worst of `ms`.
+fn print_times(what: &str, ms: &[f64]) {
+    if ms.is_empty() {
+        return;
+    }
+    let mut v = ms.to_vec();
+    v.sort_by(f64::total_cmp);
+    let at = |q: f64| v[((v.len() - 1) as f64 * q).round() as usize];
+    println!(
+        "{what}: action to redrawn window: median {:.2} ms, p99 {:.2} ms, worst {:.2} ms ({} actions)",
+        at(0.5),
+        at(0.99),
+        v[v.len() - 1],
+        v.len()
+    );
 }

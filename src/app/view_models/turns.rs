@@ -269,8 +269,6 @@ pub fn rule_text(s: &Session) -> String {
     format!("{head}. {}", allowance_source_sentence(input, plan))
 }
 
-}
-
 /// The out-of-gas check, once every start is read today.
 pub fn margin_text(s: &Session) -> String {
     if starts_blocking(s).is_some() {
