@@ -9,9 +9,9 @@ use std::path::PathBuf;
 
 use turnsheet::formats::card_svg::{CardHeading, card_svg};
 use turnsheet::formats::team_file::TeamFile;
-use turnsheet::plan::chart::team_charts;
 use turnsheet::plan::error::fmt_num;
 use turnsheet::plan::plan_team;
+use turnsheet::plan::team_charts;
 
 fn demo() -> turnsheet::plan::TeamInput {
     TeamFile::parse(include_str!("../examples/hollowmere-team.json"))

@@ -4,8 +4,8 @@
 //! raises a turn).
 
 use turnsheet::formats::team_file::TeamFile;
-use turnsheet::plan::chart::{pair_chart, starts_around, team_charts};
 use turnsheet::plan::{Mix, plan_team};
+use turnsheet::plan::{pair_chart, starts_around, team_charts};
 
 fn demo() -> turnsheet::plan::TeamInput {
     TeamFile::parse(include_str!("../examples/hollowmere-team.json"))

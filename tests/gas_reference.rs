@@ -2,7 +2,7 @@
 //! CoolProp (PyPI `coolprop`, HEOS reference equations). The data files and the script
 //! that wrote them are in tests/reference/; the CoolProp version is on each file's first line.
 
-use turnsheet::plan::temperature::pressure_after_temperature_change;
+use turnsheet::plan::pressure_after_temperature_change;
 use turnsheet::plan::{ContentModel, Mix, Pressure, RealGasModel, Temperature};
 
 struct Row<'a> {

@@ -15,7 +15,7 @@ use std::process::{Command, Stdio};
 use std::time::{Duration, Instant};
 
 use turnsheet::formats::team_file::CylindersFile;
-use turnsheet::plan::catalogue::Material;
+use turnsheet::plan::Material;
 use turnsheet::storage::Store;
 use turnsheet::storage::atomic::{ReadOutcome, kept_aside, read_json};
 use turnsheet::storage::locker::{

@@ -5,7 +5,8 @@
 use i_slint_backend_testing::ElementHandle;
 use slint::ComponentHandle;
 use slint::platform::{Key, WindowEvent};
-use turnsheet::app::{App, Nav, Page};
+use turnsheet::app::App;
+use turnsheet::app::ui::{Nav, Page};
 use turnsheet::formats::team_file::TeamFile;
 use turnsheet::plan::{
     CylinderSet, CylinderSpec, Gauge, Mix, Pressure, PressureUnit, UnitSystem, plan_team,
@@ -698,7 +699,7 @@ fn stages_get_drop_pressures_matching_the_core() {
 
 #[test]
 fn wet_notes_chart_page_shows_the_core_chart() {
-    use turnsheet::plan::chart::{pair_chart, starts_around};
+    use turnsheet::plan::{pair_chart, starts_around};
     init();
     let dir = tempfile::tempdir().unwrap();
     let app = open_acknowledged(dir.path());
@@ -1086,7 +1087,7 @@ fn quick_mixes(app: &App) -> Vec<String> {
     use slint::Model;
     let rows = app
         .window
-        .global::<turnsheet::app::PickerAdapter>()
+        .global::<turnsheet::app::ui::PickerAdapter>()
         .get_mix_rows();
     rows.iter()
         .flat_map(|r| {

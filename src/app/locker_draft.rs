@@ -1,10 +1,10 @@
 //! A locker entry being added or edited: the fields as typed, checked on save.
 
 use crate::formats::team_file::CylindersFile;
-use crate::plan::catalogue::{Material, Preset};
 use crate::plan::error::InputError;
-use crate::plan::team::validate_cylinders;
+use crate::plan::validate_cylinders;
 use crate::plan::{CylinderSet, CylinderSpec, UnitSystem};
+use crate::plan::{Material, Preset};
 use crate::storage::locker::LockerEntry;
 
 /// An entry being added or edited.

@@ -1,5 +1,6 @@
 //! The app: controllers hold state and call the planning core; adapters connect them
-//! to the Slint globals; `run_desktop` opens the window.
+//! to the Slint globals (`ui`); `App` wires a window to a session. The platform layer
+//! (`crate::platform`) starts it.
 
 pub mod adapters;
 pub mod cautions;
@@ -10,16 +11,15 @@ pub mod nav;
 pub mod readings;
 pub mod session;
 pub mod team_controller;
+pub mod ui;
 pub mod view_models;
-
-slint::include_modules!();
 
 use std::cell::RefCell;
 use std::rc::Rc;
 
 use crate::storage::Store;
-use crate::storage::data_dir::desktop_data_dir;
 use session::Session;
+use ui::{AppWindow, Theme};
 
 /// A window with its session, wired together.
 pub struct App {
@@ -52,34 +52,5 @@ impl App {
     /// Save everything now (lifecycle events).
     pub fn save(&self) {
         self.session.borrow_mut().save_all();
-    }
-}
-
-/// Open the app window (desktop). Returns the process exit code.
-pub fn run_desktop() -> i32 {
-    let dir = desktop_data_dir();
-    let app = match App::new(&dir) {
-        Ok(a) => a,
-        Err(e) => {
-            eprintln!(
-                "turnsheet: cannot open a window ({e}). For servers use `turnsheet plan TEAM.json`."
-            );
-            return 1;
-        }
-    };
-    if let Some(scale) =
-        crate::platform::font_scale_from(std::env::var_os("TURNSHEET_FONT_SCALE").as_deref())
-    {
-        app.set_font_scale(scale);
-    }
-    crate::platform::first_frame::exit_after_first_frame_if_asked(app.window.window());
-    let result = app.window.run();
-    app.save();
-    match result {
-        Ok(()) => 0,
-        Err(e) => {
-            eprintln!("turnsheet: {e}");
-            1
-        }
     }
 }

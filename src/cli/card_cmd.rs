@@ -3,9 +3,9 @@
 use std::path::{Path, PathBuf};
 
 use crate::formats::card_svg::{CardHeading, card_svg};
-use crate::plan::chart::team_charts;
 use crate::plan::error::InputError;
 use crate::plan::plan_team;
+use crate::plan::team_charts;
 
 use super::CliError;
 use super::plan_cmd::read_team;

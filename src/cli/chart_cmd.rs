@@ -4,8 +4,8 @@ use std::path::Path;
 
 use serde::Serialize;
 
-use crate::plan::chart::team_charts;
 use crate::plan::error::{InputError, fmt_num};
+use crate::plan::team_charts;
 
 use super::plan_cmd::read_team;
 
@@ -52,10 +52,7 @@ pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String
 }
 
 /// Charts as text, each on its own divers' gauges.
-pub fn chart_text(
-    team: &crate::plan::TeamInput,
-    charts: &[crate::plan::chart::PairChart],
-) -> String {
+pub fn chart_text(team: &crate::plan::TeamInput, charts: &[crate::plan::PairChart]) -> String {
     let u = team.units;
     let mut s = format!(
         "Wet-notes charts: rule of {}, water {:.0} {}.\n\

@@ -6,11 +6,11 @@ use std::path::PathBuf;
 
 use crate::formats::card_svg::charts_svg;
 use crate::formats::cylinder_spec::parse_cylinder_spec;
-use crate::plan::chart::{PairChart, pair_chart};
 use crate::plan::error::{InputError, check_range, fmt_num};
-use crate::plan::rounding::round_down_to_step;
-use crate::plan::team::validate_step;
+use crate::plan::round_down_to_step;
+use crate::plan::validate_step;
 use crate::plan::{CylinderSet, DiverInput, Mix, Rule, TeamInput, Temperature, UnitSystem, Water};
+use crate::plan::{PairChart, pair_chart};
 use crate::storage::Store;
 
 use super::CliError;

@@ -3,9 +3,9 @@
 use serde::Serialize;
 
 use crate::plan::error::fmt_num;
-use crate::plan::hand_check::{allowance_sentence, hand_working, turn_sentence};
-use crate::plan::out_of_gas::margin_for_display;
+use crate::plan::margin_for_display;
 use crate::plan::{PressureUnit, TeamInput, TeamPlan, UnitSystem};
+use crate::plan::{allowance_sentence, hand_working, turn_sentence};
 
 #[derive(Serialize, Debug)]
 pub struct JsonPlan {

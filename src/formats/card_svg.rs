@@ -2,9 +2,9 @@
 //! large turn figures, no colour needed to read it. Optional following pages carry each
 //! diver's pairing charts. No I/O here: the caller writes the text.
 
-use crate::plan::chart::PairChart;
+use crate::plan::PairChart;
 use crate::plan::error::fmt_num;
-use crate::plan::out_of_gas::margin_for_display;
+use crate::plan::margin_for_display;
 use crate::plan::{TeamInput, TeamPlan};
 
 /// Page size in millimetres.

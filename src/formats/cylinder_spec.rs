@@ -10,8 +10,8 @@
 //! No I/O here.
 
 use crate::plan::error::InputError;
-use crate::plan::team::{MAX_CYLINDERS, validate_cylinders};
 use crate::plan::{CylinderSet, CylinderSpec, UnitSystem};
+use crate::plan::{MAX_CYLINDERS, validate_cylinders};
 
 /// How the form is shown in every error message.
 pub const SPEC_FORM: &str = "COUNTxSIZE@RATING, e.g. 2x12L@232bar or 1x80cuft@3000psi";

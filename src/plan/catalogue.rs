@@ -187,7 +187,7 @@ mod tests {
             );
         }
         for p in &all {
-            crate::plan::team::validate_cylinders(crate::plan::UnitSystem::Metric, p.name, &p.set)
+            crate::plan::validate_cylinders(crate::plan::UnitSystem::Metric, p.name, &p.set)
                 .unwrap_or_else(|e| panic!("{e}"));
         }
     }

@@ -6,7 +6,7 @@
 //! only raises a turn pressure.
 
 use super::error::InputError;
-use super::matching::round_down_to_step;
+use super::rounding::round_down_to_step;
 use super::supply::SupplyModels;
 use super::team::{DiverInput, TeamInput, validate_start};
 use super::units::{Gauge, Pressure, Volume};

@@ -105,7 +105,7 @@ fn trim(x: f64) -> String {
 #[derive(Clone, Copy, Debug, PartialEq, Serialize, Deserialize)]
 pub struct CylinderSet {
     /// How many identical cylinders: 1 to
-    /// [`MAX_CYLINDERS`](crate::plan::team::MAX_CYLINDERS), checked when a team is
+    /// [`MAX_CYLINDERS`](crate::plan::MAX_CYLINDERS), checked when a team is
     /// validated.
     pub count: u8,
     /// What each cylinder is; in a file its fields sit beside `count`.
@@ -160,7 +160,7 @@ mod tests {
         assert!((real - 11.1).abs() < 0.15, "real {real}");
         assert!(hand < real - 0.4, "hand {hand}");
         // Pencil arithmetic (common practice): rated cu ft × gauge psi / rated psi.
-        use crate::plan::gas_model::{ContentModel, HandModel};
+        use crate::plan::{ContentModel, HandModel};
         let at = |psi: f64| {
             HandModel
                 .content(

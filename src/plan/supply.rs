@@ -4,9 +4,9 @@
 
 use super::cylinders::CylinderSet;
 use super::gas_model::{ContentModel, HandModel, ModelKind};
-use super::matching::round_up_to_step;
 use super::mix::Mix;
 use super::real_gas::RealGasModel;
+use super::rounding::round_up_to_step;
 use super::units::{Gauge, Pressure, Temperature, Volume};
 
 /// A supply's models, built once and reused for any start pressure.

@@ -6,9 +6,9 @@ use serde::{Deserialize, Serialize};
 
 use super::atomic::{MAX_FILE_BYTES, WithinLimits, check_envelope, one_line, read_text};
 use crate::formats::team_file::CylindersFile;
-use crate::plan::catalogue::Material;
+use crate::plan::Material;
 use crate::plan::error::InputError;
-use crate::plan::team::validate_cylinders;
+use crate::plan::validate_cylinders;
 use crate::plan::{CylinderSet, UnitSystem};
 
 pub const LOCKER_SCHEMA: u32 = 1;

@@ -4,8 +4,8 @@ use slint::ComponentHandle;
 
 use super::super::nav::Screen;
 use super::super::session::Session;
+use super::super::ui::{AppWindow, ChartAdapter, ChartRow};
 use super::super::view_models as vm;
-use super::super::{AppWindow, ChartAdapter, ChartRow};
 use super::{Shared, act, handles, model, strings};
 
 pub fn connect(ui: &AppWindow, s: &Shared) {

@@ -4,7 +4,7 @@
 use std::path::PathBuf;
 
 use crate::formats::card_svg::{CardHeading, card_svg};
-use crate::plan::chart::team_charts;
+use crate::plan::team_charts;
 
 use super::Session;
 

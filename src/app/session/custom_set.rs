@@ -118,7 +118,7 @@ impl Session {
             } else {
                 Some(d.cylinders)
             };
-            let first = crate::plan::catalogue::presets()[0].set;
+            let first = crate::plan::presets()[0].set;
             let set = CustomSet::from_set(&current.unwrap_or(first), label);
             self.picker = Picker::Custom { diver, stage, set };
         }

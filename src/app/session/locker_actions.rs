@@ -1,8 +1,8 @@
 //! Session actions of the cylinder locker: open the editor, save, delete, undo, mine.
 //! Changes to the open draft go straight to `LockerController::edit_draft`.
 
-use crate::plan::catalogue::{Material, presets};
 use crate::plan::error::InputError;
+use crate::plan::{Material, presets};
 
 use super::super::locker_controller::Added;
 use super::super::nav::Screen;

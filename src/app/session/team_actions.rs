@@ -2,7 +2,7 @@
 //! give a new team its defaults (Settings page).
 
 use crate::formats::team_file::TeamFile;
-use crate::plan::catalogue::presets;
+use crate::plan::presets;
 use crate::plan::{Rule, Temperature, UnitSystem};
 use crate::storage::settings::Settings;
 use crate::storage::team_state::{TEAM_SCHEMA, TeamState};
@@ -194,7 +194,7 @@ impl Session {
         let current = u.temperature_value(Temperature::from_celsius(self.settings.water_temp_c));
         let t = u.temperature(current.round() + f64::from(dir.signum()));
         let c = t.celsius();
-        let (lo, hi) = crate::plan::team::WATER_TEMP_RANGE_C;
+        let (lo, hi) = crate::plan::WATER_TEMP_RANGE_C;
         if (lo..=hi).contains(&c) || (c > hi && dir < 0) || (c < lo && dir > 0) {
             self.remember_water_temp(t);
         }

@@ -3,7 +3,7 @@
 
 use crate::app::readings::{Readings, Source, StartStatus};
 use crate::plan::error::InputError;
-use crate::plan::rounding::round_down_to_step;
+use crate::plan::round_down_to_step;
 use crate::plan::{Gauge, PressureUnit};
 
 use super::TeamController;

@@ -3,8 +3,8 @@
 
 use crate::formats::team_file::TeamFile;
 use crate::plan::error::InputError;
-use crate::plan::rounding::next_step;
-use crate::plan::rounding::round_down_to_step;
+use crate::plan::next_step;
+use crate::plan::round_down_to_step;
 use crate::plan::{Gauge, Mix, Pressure, Rule, TeamInput, TeamPlan, UnitSystem, plan_team};
 use crate::storage::team_state::{TEAM_SCHEMA, TeamState};
 

@@ -2,8 +2,8 @@
 
 use super::super::session::Session;
 use crate::plan::ModelKind;
-use crate::plan::catalogue::{Material, presets};
 use crate::plan::error::fmt_num;
+use crate::plan::{Material, presets};
 
 pub struct LockerRowVm {
     pub id: i32,

@@ -3,8 +3,8 @@
 
 use super::super::session::{Picker, Session};
 use crate::plan::ModelKind;
-use crate::plan::catalogue::presets;
 use crate::plan::error::{first_upper, fmt_num};
+use crate::plan::presets;
 
 /// Quick mixes per row: four fit a 360 px phone at 64 px or more each.
 const MIXES_PER_ROW: usize = 4;

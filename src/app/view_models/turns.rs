@@ -5,7 +5,7 @@ use super::super::session::Session;
 use super::{gauge_text, reading, temperature_text, turn_text, volume_down_text};
 use crate::app::readings::{StartStatus, now, when_text};
 use crate::plan::error::first_upper;
-use crate::plan::hand_check::{hand_working, turn_sentence};
+use crate::plan::{hand_working, turn_sentence};
 
 /// "Drop stage at 140 bar (Aluminium 40, EAN32, start 200 bar)" for a diver with a
 /// stage, else empty.

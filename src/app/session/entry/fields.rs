@@ -6,7 +6,7 @@
 use crate::app::keypad::KeypadBuffer;
 use crate::app::view_models as vm;
 use crate::plan::error::{InputError, check_range, fmt_num};
-use crate::plan::team::validate_start;
+use crate::plan::validate_start;
 use crate::plan::{Pressure, PressureUnit, Volume};
 
 use super::super::Session;
