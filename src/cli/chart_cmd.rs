@@ -7,7 +7,7 @@ use serde::Serialize;
 use crate::plan::error::{InputError, fmt_num};
 use crate::plan::team_charts;
 
-use super::plan_cmd::read_team;
+use super::plan_cmd::{named, read_team};
 
 #[derive(Serialize, Debug)]
 struct JsonChart {
@@ -31,7 +31,7 @@ pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String
         ));
     }
     let team = read_team(path)?;
-    let charts = team_charts(&team, above, below)?;
+    let charts = team_charts(&team, above, below).map_err(|e| named(e, &team))?;
     let name = |i: usize| team.divers[i].name.clone();
     if json {
         let out: Vec<JsonChart> = charts

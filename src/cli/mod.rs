@@ -118,9 +118,14 @@ working pressure) or 1x80cuft@3000psi (one cylinder rated 80 cu ft at 3000 psi).
     },
 }
 
+/// A pressure unit on the command line: `--unit bar|psi` for `gas` and `chart`.
 #[derive(clap::ValueEnum, Clone, Copy, Debug, PartialEq, Eq)]
 pub enum PressureUnit {
+    /// Bar (also read as `metric`, the old `chart --units` value).
+    #[value(alias = "metric")]
     Bar,
+    /// Psi (also read as `imperial`).
+    #[value(alias = "imperial")]
     Psi,
 }
 
