@@ -3,7 +3,8 @@
 //! app's own Roboto fonts) so layout regressions show.
 //!
 //! To refresh the golden image after an intended layout change:
-//! `TURNSHEET_UPDATE_GOLDEN=1 cargo test --test card`, then look at tests/data/card-demo.png.
+//! `TURNSHEET_UPDATE_GOLDEN=1 cargo test --test card`, then look at tests/data/card-demo.png
+//! (docs/card.png, the README's picture, is written from the same rendering).
 
 use std::path::PathBuf;
 
@@ -117,12 +118,16 @@ fn demo_card_matches_its_golden_rendering() {
     let team = demo();
     let plan = plan_team(&team).unwrap();
     let svg = card_svg(&heading(), &team, &plan, &[]);
-    // 100 × 150 mm at 96 dpi × 1.5: 567 × 851 px.
+    // 100 × 150 mm at 96 px per inch (the CSS definition: CSS Values and Units Module
+    // Level 3, 1in = 96px; 1in = 25.4 mm) × 1.5: 377.95 × 1.5 = 567 by 851 px.
     let pixmap = render(&svg, 1.5);
     let golden = PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("tests/data/card-demo.png");
     if std::env::var_os("TURNSHEET_UPDATE_GOLDEN").is_some() {
         std::fs::create_dir_all(golden.parent().unwrap()).unwrap();
         pixmap.save_png(&golden).unwrap();
+        // The README's picture of the card is the same rendering.
+        let docs = PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("docs/card.png");
+        pixmap.save_png(docs).unwrap();
     }
     let decoder = png::Decoder::new(std::io::BufReader::new(
         std::fs::File::open(&golden).expect("golden image exists; see the file's header"),

@@ -1,4 +1,4 @@
-//! Wet-notes charts: every cell is the planning core's answer for that pair of starts,
+//! Pairing charts: every cell is the planning core's answer for that pair of starts,
 //! the chart is monotone, and "keep the highest turn over your charts" reproduces the
 //! full team plan (the team allowance is the smallest of all; a smaller allowance only
 //! raises a turn).

@@ -241,7 +241,8 @@ fn gas_232(litres: &str) -> serde_json::Value {
 
 #[test]
 fn gas_command_reports_both_models_and_cooling() {
-    // CoolProp 8.0.0 (HEOS reference equation): air at 232 bar, 20 °C holds about 219 L per litre.
+    // CoolProp 8.0.0 (HEOS reference equation, tests/reference/gas_content.csv): air at
+    // 232 bar, 20 °C holds 218.03 L per litre.
     let v = gas_232("1");
     let real = v["content_l"].as_f64().unwrap();
     assert!((real - 218.0).abs() < 1.0, "{real}");

@@ -14,6 +14,9 @@ pub struct Draft {
     pub id: Option<u64>,
     pub name: String,
     pub count: u8,
+    /// For a pair: independent cylinders (sidemount) rather than twins. Kept as it was
+    /// through an edit.
+    pub independent: bool,
     /// Imperial rating (cu ft @ psi) rather than metric stamp (L @ bar).
     pub rated: bool,
     /// Water litres, or rated cu ft.
@@ -30,6 +33,7 @@ impl Draft {
             id: None,
             name: String::new(),
             count: 2,
+            independent: false,
             rated: false,
             first: None,
             second: None,
@@ -44,6 +48,7 @@ impl Draft {
             id: Some(e.id),
             name: e.name.clone(),
             count: e.cylinders.count,
+            independent: e.cylinders.independent,
             rated,
             first: if rated {
                 e.cylinders.rated_cuft
@@ -132,6 +137,7 @@ impl Draft {
         };
         let set = CylinderSet {
             count: self.count,
+            independent: self.independent && self.count == 2,
             spec,
         };
         validate_cylinders(UnitSystem::Metric, "cylinders", &set)?;

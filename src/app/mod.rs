@@ -37,7 +37,8 @@ impl App {
         Ok(App { window, session })
     }
 
-    /// Follow the system's text size: 1 is normal, about 1.3 is Android's "large".
+    /// Follow the system's text size: 1 is normal; larger settings give more (from
+    /// memory: Android's reach about 1.3 on many devices).
     /// Kept within 0.8 to 2 so a stray value cannot make the app unusable.
     pub fn set_font_scale(&self, scale: f32) {
         use slint::ComponentHandle;

@@ -1,4 +1,4 @@
-//! `turnsheet chart TEAM.json`: wet-notes charts for every diver against every teammate.
+//! `turnsheet chart TEAM.json`: pairing charts for every diver against every teammate.
 
 use std::path::Path;
 
@@ -55,7 +55,7 @@ pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String
 pub fn chart_text(team: &crate::plan::TeamInput, charts: &[crate::plan::PairChart]) -> String {
     let u = team.units;
     let mut s = format!(
-        "Wet-notes charts: rule of {}, water {:.0} {}.\n\
+        "Pairing charts: rule of {}, water {:.0} {}.\n\
          Each chart gives the first diver's turn for their start (rows) and the teammate's start (columns),\n\
          each on their own gauge. With more than one teammate, keep the HIGHEST turn of your charts.\n\
          Between lines, read the next higher own start and the next lower teammate start.\n",

@@ -1,5 +1,5 @@
 //! The command line: `plan` prints a team's turn pressures, `gas` a cylinder's contents,
-//! `chart` wet-notes charts, `locker` the app's cylinder sets.
+//! `chart` pairing charts, `locker` the app's cylinder sets.
 //! Exit codes: 0 ok, 2 bad input (the message names the field), 3 a file or the output
 //! could not be written (full disk, closed pipe, read-only directory). Never a panic.
 
@@ -76,12 +76,12 @@ pub enum Command {
         #[arg(long)]
         json: bool,
     },
-    /// A printable team card (SVG, 100 × 150 mm, black on white) for wet notes, with
+    /// A printable team card (SVG, 100 × 150 mm, black on white), a page for a slate or notebook, with
     /// each diver's pairing charts on following pages if asked.
     Card(card_cmd::CardArgs),
     /// Gas content of a cylinder (both models), and its pressure after a temperature change.
     Gas(gas_cmd::GasArgs),
-    /// Print wet-notes charts: each diver's turn for a range of own and teammate start
+    /// Print pairing charts: each diver's turn for a range of own and teammate start
     /// pressures, to re-match a changed fill without a phone.
     ///
     /// With more than one teammate, read the chart against each teammate and keep the

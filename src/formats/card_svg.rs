@@ -1,4 +1,4 @@
-//! The team card: one page for wet notes (100 × 150 mm), as SVG text. Black on white,
+//! The team card: one notebook page (100 × 150 mm) or slate, as SVG text. Black on white,
 //! large turn figures, no colour needed to read it. Optional following pages carry each
 //! diver's pairing charts. No I/O here: the caller writes the text.
 

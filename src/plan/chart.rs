@@ -1,4 +1,4 @@
-//! Wet-notes charts: for a pair of divers, the turn pressure of one for a range of
+//! Pairing charts: for a pair of divers, the turn pressure of one for a range of
 //! start pressures of both, so a changed fill can be re-matched without a phone.
 //!
 //! With more than one teammate a diver reads the chart against each teammate and keeps

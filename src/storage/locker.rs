@@ -315,6 +315,7 @@ mod tests {
             name: name.to_string(),
             cylinders: CylindersFile {
                 count: 2,
+                independent: false,
                 water_l: Some(water_l),
                 working_bar: Some(232.0),
                 rated_cuft: None,

@@ -1,4 +1,4 @@
-//! ChartAdapter: the wet-notes chart of one diver against one teammate.
+//! ChartAdapter: the pairing chart of one diver against one teammate.
 
 use slint::ComponentHandle;
 

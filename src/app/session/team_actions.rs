@@ -12,10 +12,14 @@ use super::{ChartPair, Session};
 
 /// The demo team of an invented scenario, for the first launch.
 pub const DEMO_TEAM: &str = include_str!("../../../examples/hollowmere-team.json");
-const DEMO_STAGE_LABELS: [&str; 3] = ["Aluminium 40", "", "Single 7 L 232 bar"];
+const DEMO_STAGE_LABELS: [&str; 3] = [
+    "Single aluminium 40 cu ft 3000 psi",
+    "",
+    "Single 7 L 232 bar",
+];
 const DEMO_LABELS: [&str; 3] = [
     "Twin 12 L 232 bar",
-    "Sidemount 2 × aluminium 80",
+    "Sidemount aluminium 77.4 cu ft 3000 psi",
     "Twin 8.5 L 300 bar",
 ];
 

@@ -1,4 +1,4 @@
-//! The fill-to-water check and the wet-notes chart selection, each with its own
+//! The fill-to-water check and the pairing chart selection, each with its own
 //! methods, and the session actions that use them.
 
 use crate::plan::{PairChart, pair_chart, starts_around};
@@ -69,7 +69,7 @@ impl FillCheck {
     }
 }
 
-/// The wet-notes chart shown: one diver against one teammate, always two different
+/// The pairing chart shown: one diver against one teammate, always two different
 /// divers of the team.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
 pub struct ChartPair {

@@ -95,3 +95,12 @@ fn an_unread_diver_picking_a_rated_set_reads_psi() {
     t.set_cylinders(1, rated, "Twin steel 104").unwrap();
     assert_eq!(t.input().gauge_of(1).unit, PressureUnit::Bar);
 }
+
+#[test]
+fn a_saved_team_with_old_preset_names_loads_with_the_names_of_now() {
+    let mut state = demo().to_state();
+    state.cylinder_labels = vec!["Aluminium 80".into(), "My own".into(), String::new()];
+    let t = TeamController::from_state(&state).unwrap();
+    assert_eq!(t.labels()[0], "Single aluminium 77.4 cu ft 3000 psi");
+    assert_eq!(t.labels()[1], "My own");
+}

@@ -1,4 +1,4 @@
-//! The fill-to-water check and the wet-notes chart.
+//! The fill-to-water check and the pairing chart.
 
 use super::super::session::Session;
 use super::{pressure_down_text, temperature_text, whole_down};
