@@ -62,7 +62,8 @@ pub enum Command {
     ///  "depth": 30, "water": "fresh"|"salt",
     ///  "divers": [{"name": "…", "cylinders": {"count": 2, "water_l": 12, "working_bar": 232},
     ///              "mix": {"o2": 0.32, "he": 0.0}, "start": 220, "sac": 18}]}
-    /// Cylinders may instead be {"count": 2, "rated_cuft": 80, "rated_psi": 3000}.
+    /// Cylinders may instead be {"count": 2, "rated_cuft": 80, "rated_psi": 3000}; a pair
+    /// that is not on a manifold (sidemount) adds "independent": true.
     /// A diver who reads another gauge adds "gauge": {"unit": "bar"|"psi", "step": 5};
     /// their start (and stage start) is then in that unit, and so are their turns.
     /// Without "step", a gauge in the other unit reads 10 bar or 100 psi.
@@ -76,8 +77,8 @@ pub enum Command {
         #[arg(long)]
         json: bool,
     },
-    /// A printable team card (SVG, 100 × 150 mm, black on white), a page for a slate or notebook, with
-    /// each diver's pairing charts on following pages if asked.
+    /// A printable team card (SVG, 100 × 150 mm, black on white) for a notebook page or a
+    /// slate, with each diver's pairing charts on following pages if asked.
     Card(card_cmd::CardArgs),
     /// Gas content of a cylinder (both models), and its pressure after a temperature change.
     Gas(gas_cmd::GasArgs),
