@@ -5,7 +5,7 @@
 use criterion::{Criterion, criterion_group, criterion_main};
 use std::hint::black_box;
 use turnsheet::formats::team_file::TeamFile;
-use turnsheet::plan::gas_model::bracketed_pressure;
+use turnsheet::plan::bracketed_pressure;
 use turnsheet::plan::{ContentModel, Mix, Pressure, RealGasModel, Temperature, Volume, plan_team};
 
 fn benches(c: &mut Criterion) {
@@ -60,7 +60,7 @@ fn benches(c: &mut Criterion) {
     let rows: Vec<f64> = (0..41).map(|k| 230.0 - 5.0 * k as f64).collect();
     let cols: Vec<f64> = (0..41).map(|k| 205.0 - 4.0 * k as f64).collect();
     c.bench_function("pair_chart_41x41", |b| {
-        b.iter(|| turnsheet::plan::chart::pair_chart(black_box(&team), 0, 1, &rows, &cols).unwrap())
+        b.iter(|| turnsheet::plan::pair_chart(black_box(&team), 0, 1, &rows, &cols).unwrap())
     });
 }
 

@@ -12,7 +12,7 @@ use turnsheet::app::adapters::refresh_all;
 use turnsheet::app::nav::Screen;
 use turnsheet::app::session::EntryTarget;
 use turnsheet::formats::team_file::CylindersFile;
-use turnsheet::plan::catalogue::{Material, presets};
+use turnsheet::plan::{Material, presets};
 use turnsheet::storage::locker::LockerEntry;
 
 fn save_png(app: &App, path: &Path) {

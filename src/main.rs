@@ -18,7 +18,7 @@ fn main() {
     };
     let code = match cli.command {
         Some(command) => turnsheet::cli::run(command),
-        None => turnsheet::app::run_desktop(),
+        None => turnsheet::platform::desktop::run(),
     };
     std::process::exit(code);
 }

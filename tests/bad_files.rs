@@ -46,7 +46,7 @@ fn team_expectation(name: &str) -> &'static str {
         "count-overflow.json" => "divers[0].cylinders.count",
         "deep-nesting.json" => "divers[0][0]: invalid type: sequence",
         "duplicate-key.json" => "duplicate field",
-        "huge-start.json" => "divers[0].start: 1e308 bar",
+        "huge-start.json" => "divers[0].start (Ines): 1e308 bar",
         "long-name.json" => "divers[0].name",
         "many-divers.json" => "divers: a team has 2 to 6 divers",
         "nan-literal.json" => "divers[0].start",

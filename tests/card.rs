@@ -3,15 +3,16 @@
 //! app's own Roboto fonts) so layout regressions show.
 //!
 //! To refresh the golden image after an intended layout change:
-//! `TURNSHEET_UPDATE_GOLDEN=1 cargo test --test card`, then look at tests/data/card-demo.png.
+//! `TURNSHEET_UPDATE_GOLDEN=1 cargo test --test card`, then look at tests/data/card-demo.png
+//! (docs/card.png, the README's picture, is written from the same rendering).
 
 use std::path::PathBuf;
 
 use turnsheet::formats::card_svg::{CardHeading, card_svg};
 use turnsheet::formats::team_file::TeamFile;
-use turnsheet::plan::chart::team_charts;
 use turnsheet::plan::error::fmt_num;
 use turnsheet::plan::plan_team;
+use turnsheet::plan::team_charts;
 
 fn demo() -> turnsheet::plan::TeamInput {
     TeamFile::parse(include_str!("../examples/hollowmere-team.json"))
@@ -81,7 +82,7 @@ fn card_is_xml_with_every_name_and_turn() {
     }
     // The diver whose gas sets the allowance the turns use is named.
     let team = demo();
-    for a in turnsheet::plan::hand_check::allowance_sources(&team, &plan) {
+    for a in turnsheet::plan::allowance_sources(&team, &plan) {
         let c = &plan.divers[a.diver];
         assert!(text.contains(&format!("{} control", c.name)), "{}", c.name);
     }
@@ -122,12 +123,16 @@ fn demo_card_matches_its_golden_rendering() {
     let team = demo();
     let plan = plan_team(&team).unwrap();
     let svg = card_svg(&heading(), &team, &plan, &[]);
-    // 100 × 150 mm at 96 dpi × 1.5: 567 × 851 px.
+    // 100 × 150 mm at 96 px per inch (the CSS definition: CSS Values and Units Module
+    // Level 3, 1in = 96px; 1in = 25.4 mm) × 1.5: 377.95 × 1.5 = 567 by 851 px.
     let pixmap = render(&svg, 1.5);
     let golden = PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("tests/data/card-demo.png");
     if std::env::var_os("TURNSHEET_UPDATE_GOLDEN").is_some() {
         std::fs::create_dir_all(golden.parent().unwrap()).unwrap();
         pixmap.save_png(&golden).unwrap();
+        // The README's picture of the card is the same rendering.
+        let docs = PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("docs/card.png");
+        pixmap.save_png(docs).unwrap();
     }
     let decoder = png::Decoder::new(std::io::BufReader::new(
         std::fs::File::open(&golden).expect("golden image exists; see the file's header"),

@@ -1,11 +1,11 @@
-//! Wet-notes charts: every cell is the planning core's answer for that pair of starts,
+//! Pairing charts: every cell is the planning core's answer for that pair of starts,
 //! the chart is monotone, and "keep the highest turn over your charts" reproduces the
 //! full team plan (the team allowance is the smallest of all; a smaller allowance only
 //! raises a turn).
 
 use turnsheet::formats::team_file::TeamFile;
-use turnsheet::plan::chart::{pair_chart, starts_around, team_charts};
 use turnsheet::plan::{Mix, plan_team};
+use turnsheet::plan::{pair_chart, starts_around, team_charts};
 
 fn demo() -> turnsheet::plan::TeamInput {
     TeamFile::parse(include_str!("../examples/hollowmere-team.json"))

@@ -175,6 +175,45 @@ fn every_validation_error_names_the_field() {
 }
 
 #[test]
+fn an_error_about_a_diver_gives_the_field_and_the_name() {
+    let mut t = demo();
+    t["divers"][1]["start"] = 0.into();
+    let (code, _, err) = plan_json(&t);
+    assert_eq!(code, 2);
+    assert!(err.contains("divers[1].start (Bram):"), "{err}");
+    // A blank name is not repeated after the field.
+    let mut t = demo();
+    t["divers"][0]["name"] = "  ".into();
+    let (_, _, err) = plan_json(&t);
+    assert!(err.contains("divers[0].name:"), "{err}");
+}
+
+#[test]
+fn chart_and_gas_spell_the_unit_alike() {
+    let chart = |unit_flag: &str, unit: &str| {
+        let out = bin()
+            .args(["chart", "--mine", "2x12L@232bar", "--buddy", "1x18L@232bar"])
+            .args([unit_flag, unit, "--format", "csv"])
+            .output()
+            .unwrap();
+        assert_eq!(out.status.code(), Some(0), "{unit_flag} {unit}");
+        String::from_utf8(out.stdout).unwrap()
+    };
+    let psi = chart("--unit", "psi");
+    assert!(psi.starts_with("mine psi\\buddy psi"), "{psi}");
+    // The old spelling still works and means the same.
+    assert_eq!(chart("--units", "imperial"), psi);
+    assert_eq!(chart("--units", "metric"), chart("--unit", "bar"));
+    // Help shows the one spelling only.
+    let help = bin().args(["chart", "--help"]).output().unwrap();
+    let help = String::from_utf8(help.stdout).unwrap();
+    assert!(
+        help.contains("--unit <UNIT>") && !help.contains("--units <"),
+        "{help}"
+    );
+}
+
+#[test]
 fn unreadable_and_malformed_files_exit_2() {
     let out = bin()
         .args(["plan", "/nonexistent/team.json"])
@@ -202,7 +241,8 @@ fn gas_232(litres: &str) -> serde_json::Value {
 
 #[test]
 fn gas_command_reports_both_models_and_cooling() {
-    // CoolProp 8.0.0 (HEOS reference equation): air at 232 bar, 20 °C holds about 219 L per litre.
+    // CoolProp 8.0.0 (HEOS reference equation, tests/reference/gas_content.csv): air at
+    // 232 bar, 20 °C holds 218.03 L per litre.
     let v = gas_232("1");
     let real = v["content_l"].as_f64().unwrap();
     assert!((real - 218.0).abs() < 1.0, "{real}");

@@ -15,8 +15,8 @@ use proptest::test_runner::{Config, TestRunner};
 use serde_json::{Value, json};
 use turnsheet::formats::cylinder_spec::{format_cylinder_spec, parse_cylinder_spec};
 use turnsheet::formats::team_file::TeamFile;
-use turnsheet::plan::gas_model::{MAX_MODEL_PRESSURE_BAR, bracketed_pressure};
 use turnsheet::plan::{ContentModel, Mix, Pressure, RealGasModel, Temperature, Volume, plan_team};
+use turnsheet::plan::{MAX_MODEL_PRESSURE_BAR, bracketed_pressure};
 
 const DEMO: &str = include_str!("../examples/hollowmere-team.json");
 const SHORT: u32 = 300;

@@ -10,6 +10,7 @@ use turnsheet::plan::{
 fn stamped(count: u8, water_l: f64, working_bar: f64) -> CylinderSet {
     CylinderSet {
         count,
+        independent: false,
         spec: CylinderSpec::Stamped {
             water_l,
             working_bar,
@@ -20,6 +21,7 @@ fn stamped(count: u8, water_l: f64, working_bar: f64) -> CylinderSet {
 fn rated(count: u8, rated_cuft: f64, rated_psi: f64) -> CylinderSet {
     CylinderSet {
         count,
+        independent: false,
         spec: CylinderSpec::Rated {
             rated_cuft,
             rated_psi,
@@ -107,23 +109,35 @@ fn metric_worked_case_by_hand() {
 }
 
 #[test]
-fn published_tank_factors_are_reproduced() {
-    // Tank factors in cu ft per 100 psi (common practice, trade tables): aluminium
-    // 77.4 cu ft @ 3000 psi = 2.58; steel 85 cu ft @ 2640 psi = 3.22.
+fn tank_factors_are_the_rating_per_unit_of_pressure() {
+    // Tank factors (common practice): cu ft per 100 psi is the rated volume over the
+    // rated pressure times 100, and a metric cylinder holds its water capacity per bar.
+    // Worked by hand, on sizes of our own choosing:
+    //   aluminium 40 cu ft @ 3000 psi: 40 / 3000 × 100 = 1.3333 cu ft per 100 psi
+    //   steel 95 cu ft @ 2640 psi:     95 / 2640 × 100 = 3.5985 cu ft per 100 psi
+    //   7 L at 232 bar: 7 × 232 = 1624 L;  15 L at 232 bar: 15 × 232 = 3480 L
     use turnsheet::plan::{ContentModel, HandModel};
     let per_100_psi = |set: CylinderSet| {
         HandModel
             .content(set.water(ModelKind::Hand), Pressure::from_psi(100.0))
             .cuft()
     };
-    assert!((per_100_psi(rated(1, 77.4, 3000.0)) - 2.58).abs() < 1e-9);
-    assert!((per_100_psi(rated(1, 85.0, 2640.0)) - 3.22).abs() < 0.005);
-    // And 12 L at 232 bar is 12 × 232 = 2784 L by pencil.
-    let c = HandModel.content(
-        stamped(1, 12.0, 232.0).water(ModelKind::Hand),
-        Pressure::from_bar(232.0),
-    );
-    assert_eq!(c.litres(), 2784.0);
+    assert!((per_100_psi(rated(1, 40.0, 3000.0)) - 1.3333).abs() < 1e-4);
+    assert!((per_100_psi(rated(1, 95.0, 2640.0)) - 3.5985).abs() < 1e-4);
+    // At the rated pressure a rated cylinder holds its rating, and half of it at half.
+    let forty = rated(1, 40.0, 3000.0).water(ModelKind::Hand);
+    assert!((HandModel.content(forty, Pressure::from_psi(3000.0)).cuft() - 40.0).abs() < 1e-9);
+    assert!((HandModel.content(forty, Pressure::from_psi(1500.0)).cuft() - 20.0).abs() < 1e-9);
+    let litres = |water_l: f64| {
+        HandModel
+            .content(
+                stamped(1, water_l, 232.0).water(ModelKind::Hand),
+                Pressure::from_bar(232.0),
+            )
+            .litres()
+    };
+    assert_eq!(litres(7.0), 1624.0);
+    assert_eq!(litres(15.0), 3480.0);
 }
 
 #[test]
@@ -184,7 +198,11 @@ fn mixed_bar_and_psi_team_by_hand_both_ways() {
         b.gauge = Some(psi);
         let t = team(units, Rule::Thirds, units.default_gauge_step(), vec![a, b]);
         let plan = plan_team(&t).unwrap();
+        // 1 cu ft = 28.316846592 L exactly: the foot is 0.3048 m exactly (NIST SP 811,
+        // 2008 edition, Appendix B), and 0.3048³ m³ = 0.028316846592 m³.
         let b_litres = 126.0 * 28.316_846_592;
+        assert!((0.3048f64.powi(3) * 1000.0 - 28.316_846_592).abs() < 1e-12);
+        assert_eq!(turnsheet::plan::LITRES_PER_CUFT, 28.316_846_592);
         assert!((plan.divers[0].content_hand.litres() - 5280.0).abs() < 1e-9);
         assert!((plan.divers[1].content_hand.litres() - b_litres).abs() < 1e-9);
         assert_eq!(plan.controlling, 1, "{units:?}");

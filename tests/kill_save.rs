@@ -15,7 +15,7 @@ use std::process::{Command, Stdio};
 use std::time::{Duration, Instant};
 
 use turnsheet::formats::team_file::CylindersFile;
-use turnsheet::plan::catalogue::Material;
+use turnsheet::plan::Material;
 use turnsheet::storage::Store;
 use turnsheet::storage::atomic::{ReadOutcome, kept_aside, read_json};
 use turnsheet::storage::locker::{
@@ -42,6 +42,7 @@ fn big_locker(n: u64) -> LockerFile {
                 name,
                 cylinders: CylindersFile {
                     count: 1 + (i % 4) as u8,
+                    independent: false,
                     water_l: Some(3.0 + ((i as u64 + n) % 25) as f64),
                     working_bar: Some(if n.is_multiple_of(2) { 232.0 } else { 300.0 }),
                     rated_cuft: None,

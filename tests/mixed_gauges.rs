@@ -42,7 +42,8 @@ fn mixed_gauge_teams_match_the_coolprop_reference() {
                 e["turn"].as_f64().unwrap(),
             );
             // Pencil arithmetic is exact; real gas within the GERG-2008 / HEOS agreement
-            // (0.3 % of the start for air and nitrox, 1.5 % with helium in the team).
+            // (0.3 % of the start for air and nitrox, 1.5 % with helium in the team: our
+            // own tolerances).
             let start = d.gauge.value(d.start);
             let tol = start * if helium { 0.015 } else { 0.003 };
             assert!(

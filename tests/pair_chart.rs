@@ -3,10 +3,11 @@
 //! imperial, and bad SPECs name the form.
 
 use proptest::prelude::*;
-use turnsheet::cli::pair_chart_cmd::{ChartFormat, ChartUnits, PairArgs, csv, pair};
+use turnsheet::cli::PressureUnit;
+use turnsheet::cli::pair_chart_cmd::{ChartFormat, PairArgs, csv, pair};
 use turnsheet::plan::plan_team;
 
-fn args(mine: &str, buddy: &str, units: ChartUnits) -> PairArgs {
+fn args(mine: &str, buddy: &str, unit: PressureUnit) -> PairArgs {
     PairArgs {
         mine: Some(mine.into()),
         buddy: Some(buddy.into()),
@@ -15,7 +16,7 @@ fn args(mine: &str, buddy: &str, units: ChartUnits) -> PairArgs {
         from: None,
         to: None,
         every: None,
-        units,
+        unit,
         o2: 32.0,
         he: 0.0,
         temp: 15.0,
@@ -44,8 +45,8 @@ proptest! {
         r in 0usize..40,
         c in 0usize..40,
     ) {
-        let units = if imperial { ChartUnits::Imperial } else { ChartUnits::Metric };
-        let (team, chart) = pair(&args(SPECS[m], SPECS[b], units)).unwrap();
+        let unit = if imperial { PressureUnit::Psi } else { PressureUnit::Bar };
+        let (team, chart) = pair(&args(SPECS[m], SPECS[b], unit)).unwrap();
         let text = csv(&chart);
         let lines: Vec<Vec<&str>> = text.lines().map(|l| l.split(',').collect()).collect();
         let r = r % chart.my_starts.len();
@@ -74,8 +75,24 @@ fn a_bad_spec_shows_the_form() {
     let dir = tempfile::tempdir().unwrap();
     unsafe { std::env::set_var("TURNSHEET_DATA_DIR", dir.path()) };
     for bad in ["2x12@232", "twelve", "3x12L@3000psi", ""] {
-        let e = pair(&args(bad, "2x12L@232bar", ChartUnits::Metric)).unwrap_err();
+        let e = pair(&args(bad, "2x12L@232bar", PressureUnit::Bar)).unwrap_err();
         assert!(e.message.contains("COUNTxSIZE@RATING"), "{bad}: {e}");
         assert_eq!(e.field, "--mine");
     }
+}
+
+#[test]
+fn the_range_of_starts_may_be_given_in_either_order() {
+    let mut a = args("2x12L@232bar", "1x18L@232bar", PressureUnit::Bar);
+    (a.from, a.to) = (Some(220.0), Some(150.0));
+    let (_, down) = pair(&a).unwrap();
+    (a.from, a.to) = (Some(150.0), Some(220.0));
+    let (_, up) = pair(&a).unwrap();
+    assert_eq!(down.my_starts, up.my_starts);
+    assert_eq!(down.turns, up.turns);
+    assert_eq!(up.my_starts.first(), Some(&220.0));
+    assert_eq!(up.my_starts.last(), Some(&150.0));
+    // Each end is still checked on its own and names its option.
+    (a.from, a.to) = (Some(150.0), Some(900.0));
+    assert_eq!(pair(&a).unwrap_err().field, "--to");
 }

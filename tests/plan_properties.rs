@@ -33,6 +33,7 @@ fn cylinders() -> impl Strategy<Value = CylinderSet> {
     )
         .prop_map(|(count, water_l, working_bar)| CylinderSet {
             count,
+            independent: false,
             spec: CylinderSpec::Stamped {
                 water_l,
                 working_bar,
@@ -50,6 +51,7 @@ fn cylinders() -> impl Strategy<Value = CylinderSet> {
     )
         .prop_map(|(count, (rated_cuft, rated_psi))| CylinderSet {
             count,
+            independent: false,
             spec: CylinderSpec::Rated {
                 rated_cuft,
                 rated_psi,
@@ -205,7 +207,8 @@ proptest! {
     #[test]
     fn bar_or_psi_entry_plans_the_same_team(t in team()) {
         // The same physical team read on bar gauges (10 bar) or on psi gauges (100 psi):
-        // the same controlling diver, and turns within one graduation (10 bar = 145 psi).
+        // the same controlling diver, and turns within one graduation (10 bar = 145 psi:
+        // NIST SP 811, 1 psi = 6.894757 kPa, so 1000 kPa / 6.894757 kPa = 145.04 psi).
         let with = |unit: PressureUnit| {
             let mut x = t.clone();
             for d in &mut x.divers {

@@ -5,7 +5,8 @@
 use i_slint_backend_testing::ElementHandle;
 use slint::ComponentHandle;
 use slint::platform::{Key, WindowEvent};
-use turnsheet::app::{App, Nav, Page};
+use turnsheet::app::App;
+use turnsheet::app::ui::{Nav, Page};
 use turnsheet::formats::team_file::TeamFile;
 use turnsheet::plan::{
     CylinderSet, CylinderSpec, Gauge, Mix, Pressure, PressureUnit, UnitSystem, plan_team,
@@ -184,6 +185,7 @@ fn three_diver_team_entered_with_keypad_matches_the_core() {
     // The same team, built directly on the planning core.
     let stamped = |count, water_l, working_bar| CylinderSet {
         count,
+        independent: false,
         spec: CylinderSpec::Stamped {
             water_l,
             working_bar,
@@ -291,11 +293,11 @@ fn locker_add_edit_delete_survive_a_restart() {
         press(&app, "fewer cylinders");
         press(&app, "Save");
         // A second set, then delete it with undo.
-        press(&app, "copy Aluminium 40");
+        press(&app, "copy Single aluminium 40 cu ft 3000 psi");
         press(&app, "Save");
-        press(&app, "delete Aluminium 40");
+        press(&app, "delete Single aluminium 40 cu ft 3000 psi");
         press(&app, "undo delete");
-        press(&app, "delete Aluminium 40");
+        press(&app, "delete Single aluminium 40 cu ft 3000 psi");
     }
     let app = open_acknowledged(dir.path());
     let locker = &app.session.borrow().locker.file;
@@ -612,7 +614,7 @@ fn stages_get_drop_pressures_matching_the_core() {
     let app = open_acknowledged(dir.path());
     // The demo team carries stages already; replace them.
     press(&app, "stage of Ines");
-    press(&app, "pick Aluminium 40");
+    press(&app, "pick Single aluminium 40 cu ft 3000 psi");
     press(&app, "stage mix of Ines");
     press(&app, "custom mix O2 percent");
     press(&app, "clear");
@@ -639,6 +641,7 @@ fn stages_get_drop_pressures_matching_the_core() {
     input.divers[0].stage = Some(StageInput {
         cylinders: CylinderSet {
             count: 1,
+            independent: false,
             spec: CylinderSpec::Rated {
                 rated_cuft: 40.0,
                 rated_psi: 3000.0,
@@ -650,6 +653,7 @@ fn stages_get_drop_pressures_matching_the_core() {
     input.divers[2].stage = Some(StageInput {
         cylinders: CylinderSet {
             count: 1,
+            independent: false,
             spec: CylinderSpec::Stamped {
                 water_l: 10.0,
                 working_bar: 200.0,
@@ -698,8 +702,8 @@ fn stages_get_drop_pressures_matching_the_core() {
 }
 
 #[test]
-fn wet_notes_chart_page_shows_the_core_chart() {
-    use turnsheet::plan::chart::{pair_chart, starts_around};
+fn pairing_chart_page_shows_the_core_chart() {
+    use turnsheet::plan::{pair_chart, starts_around};
     init();
     let dir = tempfile::tempdir().unwrap();
     let app = open_acknowledged(dir.path());
@@ -761,6 +765,7 @@ fn the_set_marked_mine_starts_a_new_team() {
             d.cylinders,
             CylinderSet {
                 count: 2,
+                independent: false,
                 spec: CylinderSpec::Stamped {
                     water_l: 10.0,
                     working_bar: 300.0
@@ -1055,7 +1060,7 @@ fn two_divers_swap_locker_sets_from_the_locker_page() {
         let app = open_unread(&tmp.path().join("ana"));
         app.session.borrow_mut().exchange.export_dir = shared.clone();
         press(&app, "Locker");
-        press(&app, "copy Aluminium 40");
+        press(&app, "copy Single aluminium 40 cu ft 3000 psi");
         press(&app, "Save");
         press(&app, "export locker");
         let said = value(&app, "message");
@@ -1078,9 +1083,15 @@ fn two_divers_swap_locker_sets_from_the_locker_page() {
     .unwrap();
     press(&app, "import sets");
     let said = value(&app, "message");
-    assert!(said.contains("added Aluminium 40"), "{said}");
+    assert!(
+        said.contains("added Single aluminium 40 cu ft 3000 psi"),
+        "{said}"
+    );
     assert!(said.contains("the locker has 1 set"), "{said}");
-    assert_eq!(value(&app, "locker entry"), "Aluminium 40");
+    assert_eq!(
+        value(&app, "locker entry"),
+        "Single aluminium 40 cu ft 3000 psi"
+    );
     press(&app, "dismiss locker message");
     assert_eq!(count(&app, "message"), 0);
 }
@@ -1090,7 +1101,7 @@ fn quick_mixes(app: &App) -> Vec<String> {
     use slint::Model;
     let rows = app
         .window
-        .global::<turnsheet::app::PickerAdapter>()
+        .global::<turnsheet::app::ui::PickerAdapter>()
         .get_mix_rows();
     rows.iter()
         .flat_map(|r| {
@@ -1158,6 +1169,7 @@ fn a_custom_pair_entered_in_the_picker_plans_like_the_core() {
         .unwrap();
     input.divers[1].cylinders = CylinderSet {
         count: 2,
+        independent: false,
         spec: CylinderSpec::Stamped {
             water_l: 11.1,
             working_bar: 232.0,
@@ -1177,15 +1189,18 @@ fn save_to_my_locker_adds_the_set_and_does_not_make_it_mine() {
     let app = open_acknowledged(dir.path());
     press(&app, "save cylinders of Bram to my locker");
     assert!(
-        value(&app, "message").contains("Sidemount 2 × aluminium 80"),
+        value(&app, "message").contains("Sidemount aluminium 77.4 cu ft 3000 psi"),
         "{}",
         value(&app, "message")
     );
     // A second tap does not add it twice.
     press(&app, "save cylinders of Bram to my locker");
     press(&app, "Locker");
-    assert_eq!(value(&app, "locker entry"), "Sidemount 2 × aluminium 80");
-    find(&app, "mark Sidemount 2 × aluminium 80 as mine");
+    assert_eq!(
+        value(&app, "locker entry"),
+        "Sidemount aluminium 77.4 cu ft 3000 psi"
+    );
+    find(&app, "mark Sidemount aluminium 77.4 cu ft 3000 psi as mine");
     assert!(app.session.borrow().locker.mine().is_none());
     back_key(&app);
     // Not mine: a new team starts with the first generic size, not Bram's set.
@@ -1196,7 +1211,10 @@ fn save_to_my_locker_adds_the_set_and_does_not_make_it_mine() {
     drop(s);
     // It is offered in the picker, under my locker.
     press(&app, "cylinders of Me");
-    press(&app, "pick from my locker Sidemount 2 × aluminium 80");
+    press(
+        &app,
+        "pick from my locker Sidemount aluminium 77.4 cu ft 3000 psi",
+    );
     assert_eq!(
         app.session.borrow().team.input().divers[0].cylinders.count,
         2

@@ -9,7 +9,8 @@ use i_slint_backend_testing::ElementHandle;
 use slint::ComponentHandle;
 use slint::platform::PointerEventButton;
 use turnsheet::app::clock::ManualClock;
-use turnsheet::app::{App, Nav, Page};
+use turnsheet::app::App;
+use turnsheet::app::ui::{Nav, Page};
 use turnsheet::plan::plan_team;
 
 /// 3 December 2026, 23:58 UTC.
@@ -227,7 +228,7 @@ fn the_named_controller_is_the_one_whose_sums_are_shown() {
     press(&app, "show turns");
     let rule = value(&app, "rule line");
     let s = app.session.borrow();
-    let sources = turnsheet::plan::hand_check::allowance_sources(s.team.input(), s.team.plan());
+    let sources = turnsheet::plan::allowance_sources(s.team.input(), s.team.plan());
     for a in &sources {
         let name = &s.team.plan().divers[a.diver].name;
         // "4237 L (Buddy) ÷ 3 = 1412 L": the content, whose, the rule, the allowance.

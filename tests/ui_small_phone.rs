@@ -1,5 +1,7 @@
 //! A small phone: every page and overlay at 360 × 640 with the system text size at
-//! 1.3 (Android's "large"), through the real toolkit with the software renderer.
+//! 1.3, through the real toolkit with the software renderer. 1.3 is our own choice of a
+//! large system text setting (from memory: Android's font size setting reaches 1.3 on
+//! many devices).
 //!
 //! Checked for every state:
 //! - every text can be read whole (`layout_check`): none wider than its box, no word

@@ -1,10 +1,10 @@
 //! A locker entry being added or edited: the fields as typed, checked on save.
 
 use crate::formats::team_file::CylindersFile;
-use crate::plan::catalogue::{Material, Preset};
 use crate::plan::error::InputError;
-use crate::plan::team::validate_cylinders;
+use crate::plan::validate_cylinders;
 use crate::plan::{CylinderSet, CylinderSpec, UnitSystem};
+use crate::plan::{Material, Preset};
 use crate::storage::locker::LockerEntry;
 
 /// An entry being added or edited.
@@ -14,6 +14,9 @@ pub struct Draft {
     pub id: Option<u64>,
     pub name: String,
     pub count: u8,
+    /// For a pair: independent cylinders (sidemount) rather than twins. Kept as it was
+    /// through an edit.
+    pub independent: bool,
     /// Imperial rating (cu ft @ psi) rather than metric stamp (L @ bar).
     pub rated: bool,
     /// Water litres, or rated cu ft.
@@ -32,6 +35,7 @@ impl Draft {
             id: None,
             name: String::new(),
             count: 2,
+            independent: false,
             rated: false,
             first: None,
             second: None,
@@ -47,6 +51,7 @@ impl Draft {
             id: Some(e.id),
             name: e.name.clone(),
             count: e.cylinders.count,
+            independent: e.cylinders.independent,
             rated,
             first: if rated {
                 e.cylinders.rated_cuft
@@ -132,6 +137,7 @@ impl Draft {
         };
         Some(CylinderSet {
             count: self.count,
+            independent: self.independent && self.count == 2,
             spec,
         })
     }

@@ -1,5 +1,6 @@
 //! The app: controllers hold state and call the planning core; adapters connect them
-//! to the Slint globals; `run_desktop` opens the window.
+//! to the Slint globals (`ui`); `App` wires a window to a session. The platform layer
+//! (`crate::platform`) starts it.
 
 pub mod adapters;
 pub mod cautions;
@@ -11,9 +12,8 @@ pub mod nav;
 pub mod readings;
 pub mod session;
 pub mod team_controller;
+pub mod ui;
 pub mod view_models;
-
-slint::include_modules!();
 
 use std::cell::RefCell;
 
@@ -21,8 +21,8 @@ use slint::ComponentHandle;
 use std::rc::Rc;
 
 use crate::storage::Store;
-use crate::storage::data_dir::desktop_data_dir;
 use session::Session;
+use ui::{AppWindow, Theme};
 
 /// A window with its session, wired together.
 pub struct App {
@@ -69,7 +69,8 @@ impl App {
         })
     }
 
-    /// Follow the system's text size: 1 is normal, about 1.3 is Android's "large".
+    /// Follow the system's text size: 1 is normal; larger settings give more (from
+    /// memory: Android's reach about 1.3 on many devices).
     /// Kept within 0.8 to 2 so a stray value cannot make the app unusable.
     pub fn set_font_scale(&self, scale: f32) {
         let scale = if scale.is_finite() {
@@ -84,61 +85,4 @@ impl App {
     pub fn save(&self) {
         self.session.borrow_mut().save_all();
     }
-}
-
-/// Open the app window (desktop). Returns the process exit code.
-pub fn run_desktop() -> i32 {
-    let dir = desktop_data_dir();
-    let app = match App::new(&dir) {
-        Ok(a) => a,
-        Err(e) => {
-            eprintln!(
-                "turnsheet: cannot open a window ({e}). For servers use `turnsheet plan TEAM.json`."
-            );
-            return 1;
-        }
-    };
-    if let Some(scale) =
-        crate::platform::font_scale_from(std::env::var_os("TURNSHEET_FONT_SCALE").as_deref())
-    {
-        app.set_font_scale(scale);
-    }
-    #[cfg(not(target_os = "android"))]
-    reread_on_focus(&app);
-    crate::platform::first_frame::exit_after_first_frame_if_asked(app.window.window());
-    let result = app.window.run();
-    app.save();
-    match result {
-        Ok(()) => 0,
-        Err(e) => {
-            eprintln!("turnsheet: {e}");
-            1
-        }
-    }
-}
-
-/// When the window regains focus, re-read files another program changed meanwhile (the
-/// locker from the command line), as on an Android resume.
-#[cfg(not(target_os = "android"))]
-fn reread_on_focus(app: &App) {
-
-    use slint::winit_030::{EventResult, WinitWindowAccessor, winit};
-    let session = app.session.clone();
-    let window = app.window.as_weak();
-    app.window.window().on_winit_window_event(move |_, event| {
-        if matches!(event, winit::event::WindowEvent::Focused(true)) {
-            let (session, window) = (session.clone(), window.clone());
-            slint::Timer::single_shot(std::time::Duration::ZERO, move || {
-                let Ok(mut s) = session.try_borrow_mut() else {
-                    return;
-                };
-                let changed =
-                    crate::platform::handle_lifecycle(&mut s, crate::platform::Lifecycle::Resume);
-                if let (true, Some(w)) = (changed, window.upgrade()) {
-                    adapters::refresh_all(&w, &s);
-                }
-            });
-        }
-        EventResult::Propagate
-    });
 }

@@ -3,12 +3,11 @@
 use std::path::{Path, PathBuf};
 
 use crate::formats::card_svg::{CardHeading, card_svg};
-use crate::plan::chart::team_charts;
 use crate::plan::error::InputError;
-use crate::plan::plan_team;
+use crate::plan::team_charts;
 
 use super::CliError;
-use super::plan_cmd::read_team;
+use super::plan_cmd::{named, plan_named, read_team};
 
 /// Arguments of `card`.
 #[derive(clap::Args, Debug)]
@@ -33,9 +32,9 @@ pub struct CardArgs {
 /// The card's SVG text for a team file.
 pub fn card_text(args: &CardArgs) -> Result<String, InputError> {
     let team = read_team(&args.team)?;
-    let plan = plan_team(&team)?;
+    let plan = plan_named(&team)?;
     let charts = if args.charts {
-        team_charts(&team, 2, 7)?
+        team_charts(&team, 2, 7).map_err(|e| named(e, &team))?
     } else {
         Vec::new()
     };

@@ -1,13 +1,13 @@
-//! `turnsheet chart TEAM.json`: wet-notes charts for every diver against every teammate.
+//! `turnsheet chart TEAM.json`: pairing charts for every diver against every teammate.
 
 use std::path::Path;
 
 use serde::Serialize;
 
-use crate::plan::chart::team_charts;
 use crate::plan::error::{InputError, fmt_num};
+use crate::plan::team_charts;
 
-use super::plan_cmd::read_team;
+use super::plan_cmd::{named, read_team};
 
 #[derive(Serialize, Debug)]
 struct JsonChart {
@@ -32,8 +32,8 @@ pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String
     }
     let team = read_team(path)?;
     // A chart pairs a diver with a teammate: a team of one (or none) has none to print.
-    team.validate()?;
-    let charts = team_charts(&team, above, below)?;
+    team.validate().map_err(|e| named(e, &team))?;
+    let charts = team_charts(&team, above, below).map_err(|e| named(e, &team))?;
     let name = |i: usize| team.divers[i].name.clone();
     if json {
         let out: Vec<JsonChart> = charts
@@ -54,13 +54,10 @@ pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String
 }
 
 /// Charts as text, each on its own divers' gauges.
-pub fn chart_text(
-    team: &crate::plan::TeamInput,
-    charts: &[crate::plan::chart::PairChart],
-) -> String {
+pub fn chart_text(team: &crate::plan::TeamInput, charts: &[crate::plan::PairChart]) -> String {
     let u = team.units;
     let mut s = format!(
-        "Wet-notes charts: rule of {}, water {:.0} {}.\n\
+        "Pairing charts: rule of {}, water {:.0} {}.\n\
          Each chart gives the first diver's turn for their start (rows) and the teammate's start (columns),\n\
          each on their own gauge. With more than one teammate, keep the HIGHEST turn of your charts.\n\
          Between lines, read the next higher own start and the next lower teammate start.\n",

@@ -3,7 +3,7 @@
 use serde::Serialize;
 
 use crate::plan::error::{InputError, check_range, fmt_num};
-use crate::plan::temperature::pressure_after_temperature_change;
+use crate::plan::pressure_after_temperature_change;
 use crate::plan::{ContentModel, HandModel, Mix, Pressure, RealGasModel, Temperature, Volume};
 
 use super::PressureUnit;

@@ -7,7 +7,7 @@ use serde::Serialize;
 
 use crate::formats::cylinder_spec::{SPEC_FORM, format_cylinder_spec, parse_cylinder_spec};
 use crate::formats::team_file::CylindersFile;
-use crate::plan::catalogue::Material;
+use crate::plan::Material;
 use crate::plan::error::InputError;
 use crate::plan::text;
 use crate::storage::Store;

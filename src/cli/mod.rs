@@ -1,5 +1,5 @@
 //! The command line: `plan` prints a team's turn pressures, `gas` a cylinder's contents,
-//! `chart` wet-notes charts, `locker` the app's cylinder sets.
+//! `chart` pairing charts, `locker` the app's cylinder sets.
 //! Exit codes: 0 ok, 2 bad input (the message names the field), 3 a file or the output
 //! could not be written (full disk, closed pipe, read-only directory). Never a panic.
 
@@ -63,7 +63,8 @@ pub enum Command {
     ///  "depth": 30, "water": "fresh"|"salt",
     ///  "divers": [{"name": "…", "cylinders": {"count": 2, "water_l": 12, "working_bar": 232},
     ///              "mix": {"o2": 0.32, "he": 0.0}, "start": 220, "sac": 18}]}
-    /// Cylinders may instead be {"count": 2, "rated_cuft": 80, "rated_psi": 3000}.
+    /// Cylinders may instead be {"count": 2, "rated_cuft": 80, "rated_psi": 3000}; a pair
+    /// that is not on a manifold (sidemount) adds "independent": true.
     /// A diver who reads another gauge adds "gauge": {"unit": "bar"|"psi", "step": 5};
     /// their start (and stage start) is then in that unit, and so are their turns.
     /// Without "step", a gauge in the other unit reads 10 bar or 100 psi.
@@ -77,12 +78,12 @@ pub enum Command {
         #[arg(long)]
         json: bool,
     },
-    /// A printable team card (SVG, 100 × 150 mm, black on white) for wet notes, with
-    /// each diver's pairing charts on following pages if asked.
+    /// A printable team card (SVG, 100 × 150 mm, black on white) for a notebook page or a
+    /// slate, with each diver's pairing charts on following pages if asked.
     Card(card_cmd::CardArgs),
     /// Gas content of a cylinder (both models), and its pressure after a temperature change.
     Gas(gas_cmd::GasArgs),
-    /// Print wet-notes charts: each diver's turn for a range of own and teammate start
+    /// Print pairing charts: each diver's turn for a range of own and teammate start
     /// pressures, to re-match a changed fill without a phone.
     ///
     /// With more than one teammate, read the chart against each teammate and keep the
@@ -119,9 +120,14 @@ working pressure) or 1x80cuft@3000psi (one cylinder rated 80 cu ft at 3000 psi).
     },
 }
 
+/// A pressure unit on the command line: `--unit bar|psi` for `gas` and `chart`.
 #[derive(clap::ValueEnum, Clone, Copy, Debug, PartialEq, Eq)]
 pub enum PressureUnit {
+    /// Bar (also read as `metric`, the old `chart --units` value).
+    #[value(alias = "metric")]
     Bar,
+    /// Psi (also read as `imperial`).
+    #[value(alias = "imperial")]
     Psi,
 }
 

@@ -6,14 +6,14 @@ use std::path::PathBuf;
 
 use crate::formats::card_svg::charts_svg;
 use crate::formats::cylinder_spec::parse_cylinder_spec;
-use crate::plan::chart::{PairChart, pair_chart};
 use crate::plan::error::{InputError, check_range, fmt_num};
-use crate::plan::rounding::round_down_to_step;
-use crate::plan::team::validate_step;
+use crate::plan::round_down_to_step;
+use crate::plan::validate_step;
 use crate::plan::{CylinderSet, DiverInput, Mix, Rule, TeamInput, Temperature, UnitSystem, Water};
+use crate::plan::{PairChart, pair_chart};
 use crate::storage::Store;
 
-use super::CliError;
+use super::{CliError, PressureUnit};
 
 /// Output format of a pairing chart.
 #[derive(clap::ValueEnum, Clone, Copy, Debug, PartialEq, Eq)]
@@ -21,13 +21,6 @@ pub enum ChartFormat {
     Text,
     Csv,
     Svg,
-}
-
-/// Units of a pairing chart: pressures (and the gauge) in bar or psi.
-#[derive(clap::ValueEnum, Clone, Copy, Debug, PartialEq, Eq)]
-pub enum ChartUnits {
-    Metric,
-    Imperial,
 }
 
 /// The options of a pairing chart for two sets.
@@ -45,18 +38,20 @@ pub struct PairArgs {
     /// Gauge graduation (default 10 bar or 100 psi).
     #[arg(long)]
     pub step: Option<f64>,
-    /// Highest start in the chart, both sets (default: each set's working pressure).
+    /// One end of the range of starts, both sets (default: each set's working pressure).
     #[arg(long, allow_negative_numbers = true)]
     pub from: Option<f64>,
-    /// Lowest start in the chart (default: half of each set's working pressure).
+    /// The other end (default: half of each set's working pressure). The two ends may be
+    /// given in either order: the chart runs from the higher down to the lower.
     #[arg(long, allow_negative_numbers = true)]
     pub to: Option<f64>,
     /// Distance between rows and columns (default: the step).
     #[arg(long)]
     pub every: Option<f64>,
-    /// Pressures in bar (metric) or psi (imperial).
-    #[arg(long, value_enum, default_value = "metric")]
-    pub units: ChartUnits,
+    /// Pressure unit: bar or psi (as for `gas --unit`; `--units metric|imperial` is
+    /// still read).
+    #[arg(long, alias = "units", value_enum, default_value_t = PressureUnit::Bar)]
+    pub unit: PressureUnit,
     /// Oxygen in both sets, percent.
     #[arg(long, default_value_t = 21.0)]
     pub o2: f64,
@@ -108,9 +103,9 @@ fn starts(from: f64, to: f64, every: f64) -> Vec<f64> {
 pub fn pair(args: &PairArgs) -> Result<(TeamInput, PairChart), InputError> {
     let mine = set_of("--mine", args.mine.as_deref().unwrap_or_default())?;
     let buddy = set_of("--buddy", args.buddy.as_deref().unwrap_or_default())?;
-    let units = match args.units {
-        ChartUnits::Metric => UnitSystem::Metric,
-        ChartUnits::Imperial => UnitSystem::Imperial,
+    let units = match args.unit {
+        PressureUnit::Bar => UnitSystem::Metric,
+        PressureUnit::Psi => UnitSystem::Imperial,
     };
     let unit = units.pressure_unit();
     let step = args.step.unwrap_or(unit.default_step());
@@ -139,15 +134,11 @@ pub fn pair(args: &PairArgs) -> Result<(TeamInput, PairChart), InputError> {
         let wp = unit.value(set.working_pressure());
         let from = args.from.unwrap_or(round_down_to_step(wp, step));
         let to = args.to.unwrap_or(round_down_to_step(wp / 2.0, step));
-        check_range(
-            "--from",
-            from,
-            step,
-            unit.value(crate::plan::Pressure::from_bar(400.0)),
-            unit.label(),
-        )?;
-        check_range("--to", to, step, from, unit.label())?;
-        Ok(starts(from, to, every))
+        let top = unit.value(crate::plan::Pressure::from_bar(400.0));
+        check_range("--from", from, step, top, unit.label())?;
+        check_range("--to", to, step, top, unit.label())?;
+        // Either order: the rows run from the higher end down.
+        Ok(starts(from.max(to), from.min(to), every))
     };
     let (rows, cols) = (range(&mine)?, range(&buddy)?);
     let mix = Mix {

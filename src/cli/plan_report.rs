@@ -3,9 +3,9 @@
 use serde::Serialize;
 
 use crate::plan::error::fmt_num;
-use crate::plan::hand_check::{allowance_sentence, hand_working, turn_sentence};
-use crate::plan::out_of_gas::margin_for_display;
+use crate::plan::margin_for_display;
 use crate::plan::{PressureUnit, TeamInput, TeamPlan, UnitSystem};
+use crate::plan::{allowance_sentence, hand_working, turn_sentence};
 
 #[derive(Serialize, Debug)]
 pub struct JsonPlan {
@@ -150,7 +150,7 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
         format!("real gas {vu}"),
         "min"
     ));
-    let controllers: Vec<usize> = crate::plan::hand_check::allowance_sources(input, plan)
+    let controllers: Vec<usize> = crate::plan::allowance_sources(input, plan)
         .iter()
         .map(|a| a.diver)
         .collect();
@@ -178,7 +178,7 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
     }
     s.push_str(&format!(
         "\n* controlling diver: {}\n",
-        crate::plan::hand_check::allowance_source_sentence(input, plan)
+        crate::plan::allowance_source_sentence(input, plan)
     ));
     s.push_str(
         "Turn the dive when the FIRST diver reaches their turn pressure, or at any other limit.\n",

@@ -1,8 +1,8 @@
-//! The team card: one page for wet notes (100 × 150 mm), as SVG text. Black on white,
+//! The team card: one notebook page (100 × 150 mm) or slate, as SVG text. Black on white,
 //! large turn figures, no colour needed to read it. Optional following pages carry each
 //! diver's pairing charts. No I/O here: the caller writes the text.
 
-use crate::plan::chart::PairChart;
+use crate::plan::PairChart;
 use crate::plan::error::fmt_num;
 use crate::plan::{TeamInput, TeamPlan};
 
@@ -152,7 +152,7 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
 
     let n = plan.divers.len().max(1) as f64;
     let block = ((PAGE_H - y - 38.0) / n).clamp(15.0, 24.0);
-    let controllers: Vec<usize> = crate::plan::hand_check::allowance_sources(team, plan)
+    let controllers: Vec<usize> = crate::plan::allowance_sources(team, plan)
         .iter()
         .map(|a| a.diver)
         .collect();
@@ -224,7 +224,7 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
     // The core's warnings first, in the words the app and `plan` use.
     let warnings = plan.warning_texts().into_iter();
     let mut notes: Vec<String> = warnings.map(|w| format!("WARNING: {w}")).collect();
-    notes.push(crate::plan::hand_check::allowance_source_sentence(team, plan));
+    notes.push(crate::plan::allowance_source_sentence(team, plan));
     if plan.stress.margin.is_finite() {
         // The same verdict-first words as the app and `plan`.
         notes.push(format!("Out of gas at the turn: {}", plan.margin_text()));

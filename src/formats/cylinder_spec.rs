@@ -10,8 +10,8 @@
 //! No I/O here.
 
 use crate::plan::error::InputError;
-use crate::plan::team::{MAX_CYLINDERS, validate_cylinders};
 use crate::plan::{CylinderSet, CylinderSpec, UnitSystem};
+use crate::plan::{MAX_CYLINDERS, validate_cylinders};
 
 /// How the form is shown in every error message.
 pub const SPEC_FORM: &str = "COUNTxSIZE@RATING, e.g. 2x12L@232bar or 1x80cuft@3000psi";
@@ -137,7 +137,7 @@ pub fn parse_cylinder_spec(text: &str) -> Result<CylinderSet, InputError> {
             ));
         }
     };
-    let set = CylinderSet { count, spec };
+    let set = CylinderSet::new(count, spec);
     validate_cylinders(UnitSystem::Metric, "SPEC", &set)?;
     Ok(set)
 }
@@ -164,6 +164,7 @@ mod tests {
     fn stamped(count: u8, water_l: f64, working_bar: f64) -> CylinderSet {
         CylinderSet {
             count,
+            independent: false,
             spec: CylinderSpec::Stamped {
                 water_l,
                 working_bar,
@@ -181,6 +182,7 @@ mod tests {
             parse_cylinder_spec("1x80cuft@3000psi").unwrap(),
             CylinderSet {
                 count: 1,
+                independent: false,
                 spec: CylinderSpec::Rated {
                     rated_cuft: 80.0,
                     rated_psi: 3000.0

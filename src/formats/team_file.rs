@@ -80,6 +80,10 @@ pub struct StageFile {
 pub struct CylindersFile {
     #[serde(default = "one")]
     pub count: u8,
+    /// A pair of independent cylinders (sidemount) rather than twins; only written
+    /// when true, and read as false from files that do not have it.
+    #[serde(default, skip_serializing_if = "std::ops::Not::not")]
+    pub independent: bool,
     #[serde(default, skip_serializing_if = "Option::is_none")]
     pub water_l: Option<f64>,
     #[serde(default, skip_serializing_if = "Option::is_none")]
@@ -98,6 +102,7 @@ impl CylindersFile {
     pub fn from_set(set: &CylinderSet) -> Self {
         let mut f = CylindersFile {
             count: set.count,
+            independent: set.is_independent_pair(),
             water_l: None,
             working_bar: None,
             rated_cuft: None,
@@ -146,6 +151,7 @@ impl CylindersFile {
         };
         Ok(CylinderSet {
             count: self.count,
+            independent: self.independent && self.count == 2,
             spec,
         })
     }

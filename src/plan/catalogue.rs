@@ -41,26 +41,57 @@ pub struct Preset {
 }
 
 const fn stamped(count: u8, water_l: f64, working_bar: f64) -> CylinderSet {
-    CylinderSet {
+    CylinderSet::new(
         count,
-        spec: CylinderSpec::Stamped {
+        CylinderSpec::Stamped {
             water_l,
             working_bar,
         },
-    }
+    )
 }
 
 const fn rated(count: u8, rated_cuft: f64, rated_psi: f64) -> CylinderSet {
-    CylinderSet {
+    CylinderSet::new(
         count,
-        spec: CylinderSpec::Rated {
+        CylinderSpec::Rated {
             rated_cuft,
             rated_psi,
         },
-    }
+    )
 }
 
-/// The catalogue: metric stamps first, then imperial ratings.
+/// A sidemount pair: two independent cylinders.
+const fn sidemount(set: CylinderSet) -> CylinderSet {
+    CylinderSet::independent_pair(set.spec)
+}
+
+/// Preset names given up, and the name each preset has now: a team or locker saved
+/// with an old name still finds its preset.
+const RENAMED: [(&str, &str); 4] = [
+    ("Aluminium 80", "Single aluminium 77.4 cu ft 3000 psi"),
+    ("Aluminium 40", "Single aluminium 40 cu ft 3000 psi"),
+    (
+        "Sidemount 2 × aluminium 80",
+        "Sidemount aluminium 77.4 cu ft 3000 psi",
+    ),
+    (
+        "Sidemount 2 × aluminium 11.1 L 207 bar",
+        "Sidemount aluminium 11.1 L 207 bar",
+    ),
+];
+
+/// The name a preset has now, for a name that may be an old one; any other name as it is.
+pub fn current_preset_name(name: &str) -> &str {
+    RENAMED
+        .iter()
+        .find(|(old, _)| *old == name)
+        .map_or(name, |(_, now)| now)
+}
+
+/// The catalogue: metric stamps first, then imperial ratings. Each name gives the count
+/// (single, twin, sidemount pair), the material where it is not steel or the rating is
+/// imperial, and the water capacity and working pressure, or the rated volume and
+/// pressure.
 pub fn presets() -> Vec<Preset> {
     use Material::*;
     vec![
@@ -105,22 +136,22 @@ pub fn presets() -> Vec<Preset> {
             material: Steel,
         },
         Preset {
-            name: "Sidemount 2 × aluminium 11.1 L 207 bar",
-            set: stamped(2, 11.1, 207.0),
+            name: "Sidemount aluminium 11.1 L 207 bar",
+            set: sidemount(stamped(2, 11.1, 207.0)),
             material: Aluminium,
         },
         Preset {
-            name: "Sidemount 2 × aluminium 80",
-            set: rated(2, 77.4, 3000.0),
+            name: "Sidemount aluminium 77.4 cu ft 3000 psi",
+            set: sidemount(rated(2, 77.4, 3000.0)),
             material: Aluminium,
         },
         Preset {
-            name: "Aluminium 80",
+            name: "Single aluminium 77.4 cu ft 3000 psi",
             set: rated(1, 77.4, 3000.0),
             material: Aluminium,
         },
         Preset {
-            name: "Aluminium 40",
+            name: "Single aluminium 40 cu ft 3000 psi",
             set: rated(1, 40.0, 3000.0),
             material: Aluminium,
         },
@@ -187,8 +218,28 @@ mod tests {
             );
         }
         for p in &all {
-            crate::plan::team::validate_cylinders(crate::plan::UnitSystem::Metric, p.name, &p.set)
+            // Sidemount presets are independent pairs; twins are not.
+            assert_eq!(
+                p.set.independent,
+                p.name.starts_with("Sidemount"),
+                "{}",
+                p.name
+            );
+            crate::plan::validate_cylinders(crate::plan::UnitSystem::Metric, p.name, &p.set)
                 .unwrap_or_else(|e| panic!("{e}"));
         }
+    }
+
+    #[test]
+    fn old_preset_names_still_find_their_preset() {
+        let all = presets();
+        for (old, now) in RENAMED {
+            assert_eq!(current_preset_name(old), now);
+            assert!(all.iter().any(|p| p.name == now), "{now}");
+            assert!(all.iter().all(|p| p.name != old), "{old}");
+        }
+        assert_eq!(current_preset_name("My twins"), "My twins");
+        // Every name fits a locker entry's name (40 characters).
+        assert!(all.iter().all(|p| p.name.chars().count() <= 40));
     }
 }

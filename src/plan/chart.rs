@@ -1,4 +1,4 @@
-//! Wet-notes charts: for a pair of divers, the turn pressure of one for a range of
+//! Pairing charts: for a pair of divers, the turn pressure of one for a range of
 //! start pressures of both, so a changed fill can be re-matched without a phone.
 //!
 //! With more than one teammate a diver reads the chart against each teammate and keeps
@@ -6,7 +6,7 @@
 //! only raises a turn pressure.
 
 use super::error::InputError;
-use super::matching::round_down_to_step;
+use super::rounding::round_down_to_step;
 use super::supply::SupplyModels;
 use super::team::{DiverInput, TeamInput, validate_start};
 use super::units::{Gauge, Pressure, Volume};

@@ -105,22 +105,47 @@ fn trim(x: f64) -> String {
 #[derive(Clone, Copy, Debug, PartialEq, Serialize, Deserialize)]
 pub struct CylinderSet {
     /// How many identical cylinders: 1 to
-    /// [`MAX_CYLINDERS`](crate::plan::team::MAX_CYLINDERS), checked when a team is
+    /// [`MAX_CYLINDERS`](crate::plan::MAX_CYLINDERS), checked when a team is
     /// validated.
     pub count: u8,
+    /// For a pair: two independent cylinders (sidemount, independent doubles) rather
+    /// than twins on a manifold. Planning sums both alike; only the name differs.
+    /// Meaningless for one, three or four cylinders.
+    #[serde(default, skip_serializing_if = "std::ops::Not::not")]
+    pub independent: bool,
     /// What each cylinder is; in a file its fields sit beside `count`.
     #[serde(flatten)]
     pub spec: CylinderSpec,
 }
 
 impl CylinderSet {
+    /// `count` cylinders of `spec`; a pair is manifolded twins.
+    pub const fn new(count: u8, spec: CylinderSpec) -> Self {
+        CylinderSet {
+            count,
+            independent: false,
+            spec,
+        }
+    }
     /// One cylinder of `spec`.
     pub fn single(spec: CylinderSpec) -> Self {
-        CylinderSet { count: 1, spec }
+        CylinderSet::new(1, spec)
     }
-    /// Two cylinders of `spec` (a manifolded twin set or a sidemount pair).
+    /// Two cylinders of `spec` on a manifold (twins).
     pub fn twins(spec: CylinderSpec) -> Self {
-        CylinderSet { count: 2, spec }
+        CylinderSet::new(2, spec)
+    }
+    /// Two independent cylinders of `spec` (sidemount, independent doubles).
+    pub const fn independent_pair(spec: CylinderSpec) -> Self {
+        CylinderSet {
+            count: 2,
+            independent: true,
+            spec,
+        }
+    }
+    /// Whether this is a pair of independent cylinders (not twins on a manifold).
+    pub fn is_independent_pair(&self) -> bool {
+        self.count == 2 && self.independent
     }
     /// Total water capacity of the set as the given model sees it.
     pub fn water(&self, kind: ModelKind) -> Volume {
@@ -132,14 +157,17 @@ impl CylinderSet {
     pub fn working_pressure(&self) -> Pressure {
         self.spec.working_pressure()
     }
-    /// Short description, e.g. "2 × 12 L 232 bar"; a single cylinder has no count.
+    /// The set's one name, the same in the app, on the command line and on the card:
+    /// "Single 15 L 232 bar", "Twin 12 L 232 bar", "2 × 12 L 232 bar, independent",
+    /// "3 × 40 cu ft 3000 psi".
     pub fn describe(&self) -> String {
-        // "2 ×" for any pair: the set does not say whether it is manifolded.
-        let prefix = match self.count {
-            1 => String::new(),
-            n => format!("{n} × "),
-        };
-        format!("{prefix}{}", self.spec.describe())
+        let one = self.spec.describe();
+        match self.count {
+            1 => format!("Single {one}"),
+            2 if self.independent => format!("2 × {one}, independent"),
+            2 => format!("Twin {one}"),
+            n => format!("{n} × {one}"),
+        }
     }
 }
 
@@ -160,7 +188,7 @@ mod tests {
         assert!((real - 11.1).abs() < 0.15, "real {real}");
         assert!(hand < real - 0.4, "hand {hand}");
         // Pencil arithmetic (common practice): rated cu ft × gauge psi / rated psi.
-        use crate::plan::gas_model::{ContentModel, HandModel};
+        use crate::plan::{ContentModel, HandModel};
         let at = |psi: f64| {
             HandModel
                 .content(
@@ -180,6 +208,35 @@ mod tests {
             working_bar: 232.0,
         };
         assert_eq!(CylinderSet::twins(s).water(ModelKind::Real).litres(), 24.0);
-        assert_eq!(CylinderSet::twins(s).describe(), "2 × 12 L 232 bar");
+        let side = CylinderSet::independent_pair(s);
+        assert_eq!(side.water(ModelKind::Real).litres(), 24.0);
+    }
+
+    #[test]
+    fn a_set_has_one_name_that_tells_twins_from_independent_pairs() {
+        let s = CylinderSpec::Stamped {
+            water_l: 12.0,
+            working_bar: 232.0,
+        };
+        assert_eq!(CylinderSet::twins(s).describe(), "Twin 12 L 232 bar");
+        assert_eq!(
+            CylinderSet::independent_pair(s).describe(),
+            "2 × 12 L 232 bar, independent"
+        );
+        assert_eq!(CylinderSet::single(s).describe(), "Single 12 L 232 bar");
+        let forty = CylinderSpec::Rated {
+            rated_cuft: 40.0,
+            rated_psi: 3000.0,
+        };
+        assert_eq!(
+            CylinderSet::new(3, forty).describe(),
+            "3 × 40 cu ft 3000 psi"
+        );
+        // Only a pair can be independent; the flag is not written for twins.
+        let mut three = CylinderSet::new(3, forty);
+        three.independent = true;
+        assert!(!three.is_independent_pair());
+        let json = serde_json::to_string(&CylinderSet::twins(s)).unwrap();
+        assert!(!json.contains("independent"), "{json}");
     }
 }

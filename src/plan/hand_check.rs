@@ -13,7 +13,8 @@
 
 use super::cylinders::CylinderSpec;
 use super::error::fmt_num;
-use super::matching::{TeamPlan, round_up_to_step};
+use super::matching::TeamPlan;
+use super::rounding::round_up_to_step;
 use super::team::TeamInput;
 use super::units::{BAR_PER_PSI, LITRES_PER_CUFT, PressureUnit, UnitSystem};
 

@@ -132,9 +132,6 @@ impl TeamPlan {
     }
 }
 
-// The rounding helpers live in `rounding.rs`; re-exported so callers keep compiling.
-pub use super::rounding::{round_down_to_step, round_up_to_step};
-
 /// One gas supply to match: a diver's main cylinders or a stage.
 struct Supply<'a> {
     cylinders: &'a CylinderSet,
@@ -347,20 +344,5 @@ trait MaxZero {
 impl MaxZero for Volume {
     fn max_zero(self) -> Volume {
         Volume::from_litres(self.litres().max(0.0))
-    }
-}
-
-#[cfg(test)]
-mod tests {
-    use super::*;
-
-    #[test]
-    fn rounding_toward_safety() {
-        assert_eq!(round_up_to_step(143.3, 10.0), 150.0);
-        assert_eq!(round_up_to_step(150.0, 10.0), 150.0);
-        assert_eq!(round_up_to_step(150.000_000_000_01, 10.0), 150.0);
-        assert_eq!(round_up_to_step(1501.0, 100.0), 1600.0);
-        assert_eq!(round_down_to_step(79.9, 5.0), 75.0);
-        assert_eq!(round_down_to_step(80.0, 5.0), 80.0);
     }
 }

@@ -138,7 +138,7 @@ impl ContentModel for RealGasModel {
 #[cfg(test)]
 mod tests {
     use super::*;
-    use crate::plan::units::Volume;
+    use crate::plan::Volume;
 
     #[test]
     fn air_at_232_bar_holds_less_than_ideal() {

@@ -30,6 +30,16 @@ mod tests {
     use super::*;
 
     #[test]
+    fn rounding_toward_safety() {
+        assert_eq!(round_up_to_step(143.3, 10.0), 150.0);
+        assert_eq!(round_up_to_step(150.0, 10.0), 150.0);
+        assert_eq!(round_up_to_step(150.000_000_000_01, 10.0), 150.0);
+        assert_eq!(round_up_to_step(1501.0, 100.0), 1600.0);
+        assert_eq!(round_down_to_step(79.9, 5.0), 75.0);
+        assert_eq!(round_down_to_step(80.0, 5.0), 80.0);
+    }
+
+    #[test]
     fn next_step_lands_on_the_gauge_marks() {
         assert_eq!(next_step(210.0, 10.0, 1), 220.0);
         assert_eq!(next_step(210.0, 10.0, -1), 200.0);

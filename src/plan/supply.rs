@@ -1,12 +1,12 @@
 //! One gas supply's models (a diver's main cylinders or a stage): its water capacity in
 //! each model, its gas and the gauge it is read on, and the turn for an allowance.
-//! Both the team plan and the wet-notes charts go through here, so they cannot differ.
+//! Both the team plan and the pairing charts go through here, so they cannot differ.
 
 use super::cylinders::CylinderSet;
 use super::gas_model::{ContentModel, HandModel, ModelKind};
-use super::matching::round_up_to_step;
 use super::mix::Mix;
 use super::real_gas::RealGasModel;
+use super::rounding::round_up_to_step;
 use super::units::{Gauge, Pressure, Temperature, Volume};
 
 /// A supply's models, built once and reused for any start pressure.

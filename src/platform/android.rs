@@ -25,8 +25,9 @@ fn lifecycle(event: &PollEvent<'_>) -> Lifecycle {
 #[unsafe(no_mangle)]
 fn android_main(app: slint::android::AndroidApp) {
     let dir = android_data_dir(app.internal_data_path());
-    let session: Rc<RefCell<Option<(Rc<RefCell<Session>>, slint::Weak<crate::app::AppWindow>)>>> =
-        Rc::new(RefCell::new(None));
+    let session: Rc<
+        RefCell<Option<(Rc<RefCell<Session>>, slint::Weak<crate::app::ui::AppWindow>)>>,
+    > = Rc::new(RefCell::new(None));
     let listener_session = session.clone();
     slint::android::init_with_event_listener(app, move |event| {
         let Ok(slot) = listener_session.try_borrow() else {

@@ -1,6 +1,7 @@
 //! Platform glue kept to plain Rust, so the desktop tests cover it: where the data
-//! lives, and what each Android lifecycle event does. The Android entry point itself
-//! (`android.rs`) only translates events and calls into here.
+//! lives, and what each Android lifecycle event does. The two starts sit here, above the
+//! app: `desktop.rs` (the `turnsheet` command without a subcommand) and `android.rs` (the
+//! Android entry point, which only translates events and calls into here).
 
 use std::path::PathBuf;
 
@@ -8,6 +9,8 @@ use crate::app::session::Session;
 
 #[cfg(target_os = "android")]
 mod android;
+#[cfg(not(target_os = "android"))]
+pub mod desktop;
 #[cfg(not(target_os = "android"))]
 pub mod first_frame;
 
@@ -54,9 +57,6 @@ pub fn handle_lifecycle(session: &mut Session, event: Lifecycle) -> bool {
     }
 }
 
-/// The app's data directory on Android: the app-private internal storage
-/// (`Context.getFilesDir()`), which needs no permission. Falls back to the
-/// desktop rules when the platform gives none.
 /// The text size asked for by `TURNSHEET_FONT_SCALE` (desktop; e.g. `1.3`), if it is
 /// a number.
 pub fn font_scale_from(value: Option<&std::ffi::OsStr>) -> Option<f32> {
@@ -68,6 +68,9 @@ pub fn font_scale_from(value: Option<&std::ffi::OsStr>) -> Option<f32> {
         .filter(|x| x.is_finite())
 }
 
+/// The app's data directory on Android: the app-private internal storage
+/// (`Context.getFilesDir()`), which needs no permission. Falls back to the
+/// desktop rules when the platform gives none.
 pub fn android_data_dir(internal: Option<PathBuf>) -> PathBuf {
     match internal {
         Some(p) if !p.as_os_str().is_empty() => p.join("turnsheet"),

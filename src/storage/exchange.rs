@@ -95,6 +95,7 @@ mod tests {
             name: "Twin 12s".into(),
             cylinders: crate::formats::team_file::CylindersFile {
                 count: 2,
+                independent: false,
                 water_l: Some(12.0),
                 working_bar: Some(232.0),
                 rated_cuft: None,

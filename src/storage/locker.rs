@@ -6,10 +6,10 @@ use serde::{Deserialize, Serialize};
 
 use super::atomic::{MAX_FILE_BYTES, WithinLimits, check_envelope, one_line, read_text};
 use crate::formats::team_file::CylindersFile;
-use crate::plan::catalogue::Material;
+use crate::plan::Material;
 use crate::plan::error::InputError;
-use crate::plan::team::validate_cylinders;
 use crate::plan::text;
+use crate::plan::validate_cylinders;
 use crate::plan::{CylinderSet, UnitSystem};
 
 pub const LOCKER_SCHEMA: u32 = 1;
@@ -240,6 +240,7 @@ mod tests {
             name: name.to_string(),
             cylinders: CylindersFile {
                 count: 2,
+                independent: false,
                 water_l: Some(water_l),
                 working_bar: Some(232.0),
                 rated_cuft: None,

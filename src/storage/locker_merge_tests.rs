@@ -2,7 +2,7 @@
 
 use super::*;
 use crate::formats::team_file::CylindersFile;
-use crate::plan::catalogue::Material;
+use crate::plan::Material;
 use crate::storage::locker::LOCKER_SCHEMA;
 
 fn entry(id: u64, name: &str, water_l: f64) -> LockerEntry {
@@ -15,6 +15,7 @@ fn entry(id: u64, name: &str, water_l: f64) -> LockerEntry {
             working_bar: Some(232.0),
             rated_cuft: None,
             rated_psi: None,
+            independent: false,
         },
         material: Material::Steel,
         note: String::new(),

@@ -6,8 +6,8 @@ use serde_json::{Map, Value};
 
 use super::atomic::{WithinLimits, one_line};
 
+use crate::plan::WATER_TEMP_RANGE_C;
 use crate::plan::error::fmt_num;
-use crate::plan::team::WATER_TEMP_RANGE_C;
 use crate::plan::{PressureUnit, Rule, UnitSystem};
 
 pub const SETTINGS_SCHEMA: u32 = 1;

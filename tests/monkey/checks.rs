@@ -4,7 +4,7 @@
 //! the checks do not lean on the view code they check.
 
 use slint::ComponentHandle;
-use turnsheet::app::{Nav, Page};
+use turnsheet::app::ui::{Nav, Page};
 use turnsheet::plan::{TeamInput, TeamPlan, plan_team};
 
 use super::{Robot, Seen};

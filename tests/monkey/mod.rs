@@ -12,7 +12,8 @@ use slint::ComponentHandle;
 use slint::platform::{Key, PointerEventButton, WindowEvent};
 use turnsheet::app::clock::ManualClock;
 use turnsheet::app::session::GAUGES;
-use turnsheet::app::{App, CLOCK_WATCH, KeypadAdapter};
+use turnsheet::app::ui::KeypadAdapter;
+use turnsheet::app::{App, CLOCK_WATCH};
 
 /// 3 December 2026, 23:20 UTC: the first readings of a run are taken before midnight
 /// and the robot's clock jumps carry it past.

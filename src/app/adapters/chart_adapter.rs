@@ -1,11 +1,11 @@
-//! ChartAdapter: the wet-notes chart of one diver against one teammate.
+//! ChartAdapter: the pairing chart of one diver against one teammate.
 
 use slint::ComponentHandle;
 
 use super::super::nav::Screen;
 use super::super::session::Session;
+use super::super::ui::{AppWindow, ChartAdapter, ChartRow};
 use super::super::view_models as vm;
-use super::super::{AppWindow, ChartAdapter, ChartRow};
 use super::{Shared, act, handles, model, strings};
 
 pub fn connect(ui: &AppWindow, s: &Shared) {

@@ -3,8 +3,8 @@
 use slint::ComponentHandle;
 
 use super::super::session::{EntryTarget, Session};
+use super::super::ui::{AppWindow, FillAdapter};
 use super::super::view_models as vm;
-use super::super::{AppWindow, FillAdapter};
 use super::{Shared, act, handles};
 
 pub fn connect(ui: &AppWindow, s: &Shared) {

@@ -4,7 +4,7 @@ use slint::ComponentHandle;
 
 use super::super::session::Session;
 use super::super::view_models as vm;
-use super::super::{AppWindow, GaugeChoice, GaugeChooserAdapter};
+use super::super::ui::{AppWindow, GaugeChoice, GaugeChooserAdapter};
 use super::{Shared, act, handles, model};
 
 pub fn connect(ui: &AppWindow, s: &Shared) {

@@ -3,8 +3,8 @@
 use slint::ComponentHandle;
 
 use super::super::session::Session;
+use super::super::ui::{AppWindow, KeypadAdapter};
 use super::super::view_models as vm;
-use super::super::{AppWindow, KeypadAdapter};
 use super::{Shared, act, handles};
 
 pub fn connect(ui: &AppWindow, s: &Shared) {

@@ -18,8 +18,8 @@ use std::rc::Rc;
 
 use slint::{ComponentHandle, ModelRc, SharedString, VecModel};
 
-use super::AppWindow;
 use super::session::Session;
+use super::ui::AppWindow;
 
 pub type Shared = Rc<RefCell<Session>>;
 

@@ -3,7 +3,7 @@
 use slint::ComponentHandle;
 
 use super::super::nav::Screen;
-use super::super::{AppWindow, Nav, Page, StatusAdapter};
+use super::super::ui::{AppWindow, Nav, Page, StatusAdapter};
 use super::{Shared, act, handles};
 use crate::app::session::Session;
 use crate::app::view_models as vm;

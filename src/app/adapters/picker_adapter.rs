@@ -3,8 +3,8 @@
 use slint::ComponentHandle;
 
 use super::super::session::{EntryTarget, Session};
+use super::super::ui::{AppWindow, CustomSetView, MixItem, MixRow, PickRow, PickerAdapter};
 use super::super::view_models as vm;
-use super::super::{AppWindow, CustomSetView, MixItem, MixRow, PickRow, PickerAdapter};
 use super::{Shared, act, handles, model};
 
 pub fn connect(ui: &AppWindow, s: &Shared) {

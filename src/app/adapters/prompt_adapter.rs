@@ -4,7 +4,7 @@
 use slint::{CloseRequestResponse, ComponentHandle};
 
 use super::super::session::{AfterPrompt, Session};
-use super::super::{AppWindow, PromptAdapter, PromptChoice};
+use super::super::ui::{AppWindow, PromptAdapter, PromptChoice};
 use super::{Shared, act, handles, model};
 
 pub fn connect(ui: &AppWindow, s: &Shared) {

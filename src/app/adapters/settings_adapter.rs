@@ -3,8 +3,8 @@
 use slint::ComponentHandle;
 
 use super::super::session::{EntryTarget, Session};
+use super::super::ui::{AppWindow, CautionsAdapter, SettingsAdapter};
 use super::super::view_models as vm;
-use super::super::{AppWindow, CautionsAdapter, SettingsAdapter};
 use super::{Shared, act, handles, strings};
 use crate::plan::UnitSystem;
 

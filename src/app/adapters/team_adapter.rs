@@ -3,8 +3,8 @@
 use slint::ComponentHandle;
 
 use super::super::session::{EntryTarget, Session};
+use super::super::ui::{AppWindow, DiverCard, TeamAdapter};
 use super::super::view_models as vm;
-use super::super::{AppWindow, DiverCard, TeamAdapter};
 use super::{Shared, act, handles, model, strings};
 
 pub fn connect(ui: &AppWindow, s: &Shared) {

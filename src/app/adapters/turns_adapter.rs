@@ -3,8 +3,8 @@
 use slint::ComponentHandle;
 
 use super::super::session::Session;
+use super::super::ui::{AppWindow, BuddyAdapter, BuddyRow, TurnRow, TurnsAdapter};
 use super::super::view_models as vm;
-use super::super::{AppWindow, BuddyAdapter, BuddyRow, TurnRow, TurnsAdapter};
 use super::{Shared, act, handles, model, strings};
 
 pub fn connect(ui: &AppWindow, s: &Shared) {

@@ -2,9 +2,9 @@
 
 use crate::formats::team_file::CylindersFile;
 use crate::plan::CylinderSet;
-use crate::plan::catalogue::{Material, Preset};
 use crate::plan::error::InputError;
 use crate::plan::text;
+use crate::plan::{Material, Preset};
 use crate::storage::locker::{
     LockerEntry, LockerFile, MAX_LOCKER_SETS, MAX_SET_NAME_CHARS, check_set_name, check_set_note,
 };

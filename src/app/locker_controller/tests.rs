@@ -97,13 +97,14 @@ fn stamped(count: u8, water_l: f64, working_bar: f64) -> CylinderSet {
             water_l,
             working_bar,
         },
+        independent: false,
     }
 }
 
 #[test]
 fn a_name_made_from_the_sizes_follows_them() {
     let mut l = LockerController::default();
-    let twin12 = crate::plan::catalogue::presets()
+    let twin12 = crate::plan::presets()
         .into_iter()
         .find(|p| p.name == "Twin 12 L 232 bar")
         .unwrap();

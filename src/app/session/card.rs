@@ -6,7 +6,7 @@ use std::path::PathBuf;
 use chrono::TimeZone;
 
 use crate::formats::card_svg::{CardHeading, card_svg};
-use crate::plan::chart::team_charts;
+use crate::plan::team_charts;
 
 use super::Session;
 

@@ -42,7 +42,9 @@ impl CustomSet {
         };
         CustomSet {
             count: set.count,
-            independent: label.contains("sidemount") || label.contains("independent"),
+            independent: set.is_independent_pair()
+                || label.contains("sidemount")
+                || label.contains("independent"),
             rated,
             first: Some(first),
             second: Some(second),
@@ -53,6 +55,7 @@ impl CustomSet {
     fn draft(&self) -> Draft {
         Draft {
             count: self.count,
+            independent: self.independent,
             rated: self.rated,
             first: self.first,
             second: self.second,
@@ -70,16 +73,12 @@ impl CustomSet {
         self.draft().to_set()
     }
 
-    /// The name the diver's card shows: "Single 15 L 232 bar", "Twin 11.1 L 232 bar",
-    /// "2 × 11.1 L 232 bar, independent", "3 × 40 cu ft 3000 psi".
+    /// The name the diver's card shows: the core's name of the set
+    /// ([`CylinderSet::describe`]), as entered here (twins or independent).
     pub fn label(&self, set: &CylinderSet) -> String {
-        let one = set.spec.describe();
-        match (set.count, self.independent) {
-            (1, _) => format!("Single {one}"),
-            (2, false) => format!("Twin {one}"),
-            (2, true) => format!("2 × {one}, independent"),
-            (n, _) => format!("{n} × {one}"),
-        }
+        let mut set = *set;
+        set.independent = self.count == 2 && self.independent;
+        set.describe()
     }
 
     /// 1 to 4 cylinders; other counts are ignored.
@@ -118,7 +117,7 @@ impl Session {
             } else {
                 Some(d.cylinders)
             };
-            let first = crate::plan::catalogue::presets()[0].set;
+            let first = crate::plan::presets()[0].set;
             let set = CustomSet::from_set(&current.unwrap_or(first), label);
             self.picker = Picker::Custom { diver, stage, set };
         }
@@ -232,6 +231,12 @@ mod tests {
         });
         let side = CustomSet::from_set(&twelves, "Sidemount 2 × 12 L");
         assert_eq!(side.label(&twelves), "2 × 12 L 232 bar, independent");
+        assert!(
+            side.to_set().unwrap().is_independent_pair(),
+            "the set keeps it"
+        );
+        let saved = CylinderSet::independent_pair(twelves.spec);
+        assert!(CustomSet::from_set(&saved, "Mine").independent);
         let mut c = CustomSet::from_set(&twelves, "Twin 12 L 232 bar");
         let set = c.to_set().unwrap();
         assert_eq!(c.label(&set), "Twin 12 L 232 bar");

@@ -7,10 +7,10 @@
 //! both places is kept twice, with a line saying so. Regaining focus or resuming
 //! re-reads it too (`refresh_locker`).
 
-use crate::plan::catalogue::{Material, presets};
 use crate::plan::error::InputError;
 use crate::storage::locker_merge::merge_changes;
 use crate::storage::store::LockerError;
+use crate::plan::{Material, presets};
 
 use super::super::locker_controller::Added;
 use super::super::nav::Screen;

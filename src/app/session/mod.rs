@@ -8,7 +8,7 @@
 //! - navigation and status (`NavController`, `Status`), here;
 //! - the open keypad entry (`entry/`) and picker (`pickers.rs`, with the custom set in
 //!   `custom_set.rs` and the mix choices in `mix_picker.rs`);
-//! - the fill-to-water check and the wet-notes chart selection (`tools.rs`).
+//! - the fill-to-water check and the pairing chart selection (`tools.rs`).
 
 use crate::plan::UnitSystem;
 use crate::plan::error::InputError;

@@ -3,8 +3,8 @@
 //! set is in `custom_set.rs`; the mix choices and Done in `mix_picker.rs`.
 
 use crate::plan::Mix;
-use crate::plan::catalogue::presets;
-use crate::plan::team::validate_mix;
+use crate::plan::presets;
+use crate::plan::validate_mix;
 
 use super::Session;
 use super::custom_set::CustomSet;

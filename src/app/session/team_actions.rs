@@ -2,7 +2,7 @@
 //! give a new team its defaults (Settings page).
 
 use crate::formats::team_file::TeamFile;
-use crate::plan::catalogue::presets;
+use crate::plan::presets;
 use crate::plan::{Rule, Temperature, UnitSystem};
 use crate::storage::settings::Settings;
 use crate::storage::team_state::{TEAM_SCHEMA, TeamState};
@@ -12,10 +12,14 @@ use super::{ChartPair, Session};
 
 /// The demo team of an invented scenario, for the first launch.
 pub const DEMO_TEAM: &str = include_str!("../../../examples/hollowmere-team.json");
-const DEMO_STAGE_LABELS: [&str; 3] = ["Aluminium 40", "", "Single 7 L 232 bar"];
+const DEMO_STAGE_LABELS: [&str; 3] = [
+    "Single aluminium 40 cu ft 3000 psi",
+    "",
+    "Single 7 L 232 bar",
+];
 const DEMO_LABELS: [&str; 3] = [
     "Twin 12 L 232 bar",
-    "Sidemount 2 × aluminium 80",
+    "Sidemount aluminium 77.4 cu ft 3000 psi",
     "Twin 8.5 L 300 bar",
 ];
 
@@ -224,7 +228,7 @@ impl Session {
         let current = u.temperature_value(Temperature::from_celsius(self.settings.water_temp_c));
         let t = u.temperature(current.round() + f64::from(dir.signum()));
         let c = t.celsius();
-        let (lo, hi) = crate::plan::team::WATER_TEMP_RANGE_C;
+        let (lo, hi) = crate::plan::WATER_TEMP_RANGE_C;
         if (lo..=hi).contains(&c) || (c > hi && dir < 0) || (c < lo && dir > 0) {
             self.remember_water_temp(t);
         }

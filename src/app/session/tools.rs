@@ -1,9 +1,9 @@
-//! The fill-to-water check and the wet-notes chart selection, each with its own
+//! The fill-to-water check and the pairing chart selection, each with its own
 //! methods, and the session actions that use them.
 
-use crate::plan::chart::{PairChart, pair_chart, starts_around};
-use crate::plan::temperature::{TemperatureChange, pressure_after_temperature_change};
+use crate::plan::{PairChart, pair_chart, starts_around};
 use crate::plan::{Pressure, TeamInput, Temperature, UnitSystem};
+use crate::plan::{TemperatureChange, pressure_after_temperature_change};
 
 use super::super::view_models::whole_down;
 use super::Session;
@@ -69,7 +69,7 @@ impl FillCheck {
     }
 }
 
-/// The wet-notes chart shown: one diver against one teammate, always two different
+/// The pairing chart shown: one diver against one teammate, always two different
 /// divers of the team.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
 pub struct ChartPair {

@@ -3,8 +3,8 @@
 
 use crate::app::readings::{Readings, Source, StartStatus};
 use crate::plan::error::InputError;
-use crate::plan::rounding::round_down_to_step;
 use crate::plan::Gauge;
+use crate::plan::round_down_to_step;
 
 use super::TeamController;
 

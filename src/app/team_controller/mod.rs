@@ -3,9 +3,11 @@
 
 use crate::formats::team_file::TeamFile;
 use crate::plan::error::InputError;
-use crate::plan::rounding::next_step;
-use crate::plan::rounding::round_down_to_step;
-use crate::plan::{Gauge, Mix, Pressure, Rule, TeamInput, TeamPlan, UnitSystem, plan_team};
+use crate::plan::next_step;
+use crate::plan::round_down_to_step;
+use crate::plan::{
+    Gauge, Mix, Pressure, Rule, TeamInput, TeamPlan, UnitSystem, current_preset_name, plan_team,
+};
 use crate::storage::team_state::{TEAM_SCHEMA, TeamState};
 
 use super::readings::Readings;
@@ -66,13 +68,16 @@ impl TeamController {
     }
 
     pub fn from_state(state: &TeamState) -> Result<Self, InputError> {
-        let mut t = Self::new(state.team.to_input()?, state.cylinder_labels.clone())?;
+        // A label that names a preset by an old name gets the preset's name now.
+        let now = |l: &String| current_preset_name(l).to_string();
+        let labels = state.cylinder_labels.iter().map(now).collect();
+        let mut t = Self::new(state.team.to_input()?, labels)?;
         t.readings = Readings::from_saved(&state.start_readings, t.len());
         t.stage_readings = Readings::from_saved(&state.stage_readings, t.len());
         t.demo = state.demo;
         for (i, l) in state.stage_labels.iter().enumerate() {
             if i < t.stage_labels.len() && !l.is_empty() && t.input.divers[i].stage.is_some() {
-                t.stage_labels[i] = l.clone();
+                t.stage_labels[i] = now(l);
             }
         }
         Ok(t)

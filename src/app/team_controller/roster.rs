@@ -3,9 +3,9 @@
 
 use super::TeamController;
 use crate::plan::error::InputError;
-use crate::plan::rounding::round_down_to_step;
-use crate::plan::team::{MAX_DIVERS, MIN_DIVERS};
+use crate::plan::round_down_to_step;
 use crate::plan::{CylinderSet, DiverInput, Mix, Temperature};
+use crate::plan::{MAX_DIVERS, MIN_DIVERS};
 
 impl TeamController {
     /// Give a diver a cylinder set. If the start pressure does not fit the new set, the
@@ -79,7 +79,7 @@ impl TeamController {
                 ));
                 let old = self.input.divers[i].stage.clone();
                 let kept = old.as_ref().map(|st| st.start).filter(|p| {
-                    p.bar() <= set.working_pressure().bar() * crate::plan::team::MAX_FILL_RATIO
+                    p.bar() <= set.working_pressure().bar() * crate::plan::MAX_FILL_RATIO
                 });
                 let mix = old.map(|st| st.mix).unwrap_or(Mix::nitrox(0.5));
                 self.try_update(|t| {

@@ -2,7 +2,7 @@
 
 use super::super::session::{EntryTarget, Session};
 use crate::plan::error::fmt_num;
-use crate::plan::warning::{Supply, Warning};
+use crate::plan::{Supply, Warning};
 
 pub struct KeypadVm {
     pub letters: bool,

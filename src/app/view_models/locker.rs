@@ -1,9 +1,8 @@
 //! The cylinder locker and its editor.
 
 use super::super::session::Session;
-use crate::plan::catalogue::{Material, Preset, presets};
 use crate::plan::error::fmt_num;
-use crate::plan::{CylinderSpec, ModelKind};
+use crate::plan::{CylinderSpec, Material, ModelKind, Preset, presets};
 
 pub struct LockerRowVm {
     pub id: i32,

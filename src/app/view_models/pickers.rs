@@ -4,8 +4,8 @@
 use super::super::session::{Picker, Session};
 use super::locker::preset_detail;
 use crate::plan::ModelKind;
-use crate::plan::catalogue::presets;
 use crate::plan::error::{first_upper, fmt_num};
+use crate::plan::presets;
 
 /// Quick mixes per row: four fit a 360 px phone at 64 px or more each.
 const MIXES_PER_ROW: usize = 4;
@@ -245,7 +245,10 @@ mod tests {
         assert!(p.pairs.iter().all(|r| all[r.index].set.count == 2));
         assert_eq!(p.singles.len() + p.pairs.len(), all.len());
         // Every twin and sidemount preset is among the pairs.
-        for name in ["Twin 12 L 232 bar", "Sidemount 2 × aluminium 80"] {
+        for name in [
+            "Twin 12 L 232 bar",
+            "Sidemount aluminium 77.4 cu ft 3000 psi",
+        ] {
             assert!(p.pairs.iter().any(|r| r.title == name), "{name}");
         }
         // Each row shows what to check on the cylinder: the stamp, or the rating.

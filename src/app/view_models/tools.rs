@@ -1,4 +1,4 @@
-//! The fill-to-water check and the wet-notes chart.
+//! The fill-to-water check and the pairing chart.
 
 use super::super::session::Session;
 use super::{pressure_down_text, temperature_text, whole_down};
@@ -75,7 +75,7 @@ pub fn fill(s: &Session) -> FillVm {
 
 /// A warning about a main start against its set's working pressure.
 fn is_main_fill(w: &Warning) -> bool {
-    use crate::plan::warning::Supply::Main;
+    use crate::plan::Supply::Main;
     matches!(
         w,
         Warning::AboveWorking { supply: Main, .. }

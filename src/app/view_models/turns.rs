@@ -4,7 +4,7 @@
 use super::super::session::Session;
 use super::{gauge_text, reading, temperature_text, turn_text};
 use crate::app::readings::{StartStatus, when_text};
-use crate::plan::hand_check::{
+use crate::plan::{
     allowance_sentence, allowance_source_sentence, allowance_sources, hand_working, turn_how,
     turn_sentence,
 };

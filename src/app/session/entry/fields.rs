@@ -6,7 +6,7 @@
 use crate::app::keypad::KeypadBuffer;
 use crate::app::view_models as vm;
 use crate::plan::error::{InputError, check_range, fmt_num};
-use crate::plan::team::validate_start;
+use crate::plan::validate_start;
 use crate::plan::{Pressure, PressureUnit, Volume};
 
 use super::super::Session;
@@ -66,10 +66,10 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                     // Two or more cylinders not on a manifold each have a gauge.
                     let separate = d.cylinders.count > 1 && !label.starts_with("Twin");
                     format!(
-                        "Start pressure for {} ({label}), read in the water{}",
+                        "Start for {} ({label}), read in the water{}",
                         d.name,
                         if separate {
-                            ". Balance the cylinders first; enter what every gauge reads"
+                            ". Balance the cylinders; enter what each gauge reads"
                         } else {
                             ""
                         }

@@ -7,7 +7,7 @@
 use crate::app::view_models as vm;
 use crate::app::keypad::{KeypadBuffer, parse_value};
 use crate::plan::error::{InputError, fmt_num};
-use crate::plan::rounding::next_step;
+use crate::plan::next_step;
 
 use super::Session;
 

@@ -3,8 +3,8 @@
 
 use crate::app::keypad::KeypadBuffer;
 use crate::app::view_models as vm;
+use crate::plan::WATER_TEMP_RANGE_C;
 use crate::plan::error::{InputError, check_range};
-use crate::plan::team::WATER_TEMP_RANGE_C;
 use crate::plan::{Temperature, UnitSystem};
 
 use super::super::Session;

@@ -163,13 +163,13 @@ fn a_physical_keyboard_types_into_the_open_keypad() {
     let g = s.team.input().gauge_of(0);
     assert_eq!(
         s.entry.as_ref().unwrap().buffer().text(),
-        fmt_num(crate::plan::rounding::next_step(215.0, g.step, -1))
+        fmt_num(crate::plan::next_step(215.0, g.step, -1))
     );
     assert!(s.keyboard("\n"));
     assert!(s.entry.is_none(), "Enter is Done");
     assert_eq!(
         s.team.input().divers[0].start.bar(),
-        crate::plan::rounding::next_step(215.0, g.step, -1)
+        crate::plan::next_step(215.0, g.step, -1)
     );
     s.open_entry(EntryTarget::DiverName(0));
     for k in ["b", "o", "\u{7f}", "e", " ", "l", "3"] {

@@ -1,0 +1,60 @@
+//! The desktop start: the window over the desktop data directory, the text size from
+//! `TURNSHEET_FONT_SCALE`, and a save when the window closes.
+
+use slint::ComponentHandle;
+
+use crate::app::App;
+use crate::storage::data_dir::desktop_data_dir;
+
+use super::font_scale_from;
+
+/// Open the app window (desktop). Returns the process exit code.
+pub fn run() -> i32 {
+    let dir = desktop_data_dir();
+    let app = match App::new(&dir) {
+        Ok(a) => a,
+        Err(e) => {
+            eprintln!(
+                "turnsheet: cannot open a window ({e}). For servers use `turnsheet plan TEAM.json`."
+            );
+            return 1;
+        }
+    };
+    if let Some(scale) = font_scale_from(std::env::var_os("TURNSHEET_FONT_SCALE").as_deref()) {
+        app.set_font_scale(scale);
+    }
+    reread_on_focus(&app);
+    super::first_frame::exit_after_first_frame_if_asked(app.window.window());
+    let result = app.window.run();
+    app.save();
+    match result {
+        Ok(()) => 0,
+        Err(e) => {
+            eprintln!("turnsheet: {e}");
+            1
+        }
+    }
+}
+
+/// When the window regains focus, re-read files another program changed meanwhile (the
+/// locker from the command line), as on an Android resume.
+fn reread_on_focus(app: &App) {
+    use slint::winit_030::{EventResult, WinitWindowAccessor, winit};
+    let session = app.session.clone();
+    let window = app.window.as_weak();
+    app.window.window().on_winit_window_event(move |_, event| {
+        if matches!(event, winit::event::WindowEvent::Focused(true)) {
+            let (session, window) = (session.clone(), window.clone());
+            slint::Timer::single_shot(std::time::Duration::ZERO, move || {
+                let Ok(mut s) = session.try_borrow_mut() else {
+                    return;
+                };
+                let changed = super::handle_lifecycle(&mut s, super::Lifecycle::Resume);
+                if let (true, Some(w)) = (changed, window.upgrade()) {
+                    crate::app::adapters::refresh_all(&w, &s);
+                }
+            });
+        }
+        EventResult::Propagate
+    });
+}
