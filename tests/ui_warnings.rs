@@ -216,7 +216,7 @@ fn a_locker_name_never_contradicts_its_sizes_without_a_word() {
     // The picker's generic sizes show what to check on the cylinder: the stamp, or the
     // rating (trade facts, from memory: an aluminium 80 is 77.4 cu ft at 3000 psi).
     press(&app, "cylinders of Ines");
-    let al80 = value(&app, "pick Aluminium 80");
+    let al80 = value(&app, "pick Single aluminium 77.4 cu ft 3000 psi");
     assert!(al80.contains("77.4 cu ft at 3000 psi"), "{al80}");
     let twin = value(&app, "pick Twin 12 L 232 bar");
     assert!(twin.contains("12 L at 232 bar"), "{twin}");
@@ -250,7 +250,7 @@ fn a_locker_name_never_contradicts_its_sizes_without_a_word() {
     assert_eq!(value(&app, "edit NAME"), "Cave");
     let w = value(&app, "name warning");
     assert!(
-        w.contains("2 × 11 L 232 bar") && w.contains("now holds 11 L 232 bar"),
+        w.contains("Twin 11 L 232 bar") && w.contains("now holds Single 11 L 232 bar"),
         "{w}"
     );
 }

@@ -184,7 +184,11 @@ mod tests {
         assert_eq!(status_of(None, at(9, 0, 2)), StartStatus::Missing);
         let read = r(at(9, 0, 2), Source::Gauge);
         assert_eq!(status_of(read, at(11, 59, 2)), StartStatus::Fresh);
-        assert_eq!(status_of(read, at(12, 0, 2)), StartStatus::Fresh, "exactly 3 h");
+        assert_eq!(
+            status_of(read, at(12, 0, 2)),
+            StartStatus::Fresh,
+            "exactly 3 h"
+        );
         assert_eq!(
             status_of(read, at(12, 1, 2)),
             StartStatus::Old { at: at(9, 0, 2) }
@@ -192,12 +196,18 @@ mod tests {
         // Read at 23:58, diving at 00:05: the same dive.
         let late = r(at(23, 58, 2), Source::Gauge);
         assert_eq!(status_of(late, at(0, 5, 3)), StartStatus::Fresh);
-        assert!(matches!(status_of(late, at(2, 59, 3)), StartStatus::Old { .. }));
+        assert!(matches!(
+            status_of(late, at(2, 59, 3)),
+            StartStatus::Old { .. }
+        ));
         let predicted = r(at(9, 0, 2), Source::Prediction);
         assert_eq!(status_of(predicted, at(9, 30, 2)), StartStatus::Predicted);
         assert!(StartStatus::Predicted.usable() && !StartStatus::Missing.usable());
         // A clock set back before the entry is not fresh either.
-        assert!(matches!(status_of(read, at(8, 0, 2)), StartStatus::Old { .. }));
+        assert!(matches!(
+            status_of(read, at(8, 0, 2)),
+            StartStatus::Old { .. }
+        ));
     }
 
     #[test]

@@ -58,7 +58,10 @@ pub struct PencilAllowance {
 pub fn pencil_allowance(team: &TeamInput, plan: &TeamPlan) -> PencilAllowance {
     let (diver, content) = (0..plan.divers.len())
         .map(|i| (i, pencil_content(team, plan, i).1))
-        .fold((0, f64::INFINITY), |best, c| if c.1 < best.1 { c } else { best });
+        .fold(
+            (0, f64::INFINITY),
+            |best, c| if c.1 < best.1 { c } else { best },
+        );
     let content = if content.is_finite() { content } else { 0.0 };
     PencilAllowance {
         diver,
@@ -231,10 +234,13 @@ pub fn turn_how(plan: &TeamPlan, i: usize) -> String {
     let p = &plan.divers[i];
     let g = p.gauge;
     if p.turn_shown_value >= g.value(p.start) - 1e-9 {
-        return "The turn is the start itself: almost no gas to spend before turning."
-            .to_string();
+        return "The turn is the start itself: almost no gas to spend before turning.".to_string();
     }
-    let mark = format!("rounded up to the next {} {} mark", fmt_num(g.step), g.label());
+    let mark = format!(
+        "rounded up to the next {} {} mark",
+        fmt_num(g.step),
+        g.label()
+    );
     match p.set_by {
         super::gas_model::ModelKind::Hand => format!("By hand (tank factor), {mark}."),
         super::gas_model::ModelKind::Real => {
@@ -345,7 +351,11 @@ pub fn allowance_source_sentence(team: &TeamInput, plan: &TeamPlan) -> String {
                 .collect();
             let mut who: Vec<usize> = sources.iter().map(|a| a.diver).collect();
             who.dedup();
-            let verb = if who.len() == 1 { "controls" } else { "control" };
+            let verb = if who.len() == 1 {
+                "controls"
+            } else {
+                "control"
+            };
             format!(
                 "{} {} {verb}: least usable gas in each method.",
                 parts.join(" "),
@@ -424,7 +434,10 @@ mod tests {
             .iter()
             .find(|a| a.model == crate::plan::gas_model::ModelKind::Hand)
             .expect("at 220 and 280 bar the hand method sets a turn");
-        assert_eq!((hand.diver, hand.content, hand.allowance), (1, 3920.0, 1306.6));
+        assert_eq!(
+            (hand.diver, hand.content, hand.allowance),
+            (1, 3920.0, 1306.6)
+        );
         let used: usize = sources.iter().map(|a| a.turns.len()).sum();
         assert_eq!(used, 2, "every shown turn has one source");
         let s = turn_sentence(&plan, 0);

@@ -110,13 +110,18 @@ mod tests {
         let names = vec!["A".to_string(), "B".to_string()];
         let text = describe_margin(&stress_check(&c, &u), &names);
         assert!(
-            text.starts_with("Enough to bring a teammate out at 1.00 × normal breathing; at 1.5 × it is not"),
+            text.starts_with(
+                "Enough to bring a teammate out at 1.00 × normal breathing; at 1.5 × it is not"
+            ),
             "{text}"
         );
         // Sixths: (1 − 1/6) / (2/6) = 2.5 ×.
         let u = vec![Volume::from_litres(500.0); 2];
         let text = describe_margin(&stress_check(&c, &u), &names);
-        assert!(text.starts_with("Enough to bring a teammate out at up to 2.50 ×"), "{text}");
+        assert!(
+            text.starts_with("Enough to bring a teammate out at up to 2.50 ×"),
+            "{text}"
+        );
         // Halves: (1 − 1/2) / 1 = 0.5 ×.
         let u = vec![Volume::from_litres(1500.0); 2];
         let text = describe_margin(&stress_check(&c, &u), &names);

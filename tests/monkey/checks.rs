@@ -64,18 +64,27 @@ fn check_turns(t: &Truth, shown: &[(String, String)], prefix: &str) -> Result<us
         };
         let (num, unit) = value.split_once(' ').unwrap_or((value, ""));
         if unit != d.gauge.label() {
-            return Err(format!("{label} = {value}: not on the gauge ({})", d.gauge.label()));
+            return Err(format!(
+                "{label} = {value}: not on the gauge ({})",
+                d.gauge.label()
+            ));
         }
         if !t.all_usable {
             if num != "—" {
-                return Err(format!("{label} = {value} while a start is not read (usable: {:?})", t.usable));
+                return Err(format!(
+                    "{label} = {value} while a start is not read (usable: {:?})",
+                    t.usable
+                ));
             }
         } else {
             let v: f64 = num
                 .parse()
                 .map_err(|_| format!("{label} = {value}: no turn while every start is read"))?;
             if (v - d.turn_shown_value).abs() > 1e-9 {
-                return Err(format!("{label} = {value}, the core says {}", d.turn_shown_value));
+                return Err(format!(
+                    "{label} = {value}, the core says {}",
+                    d.turn_shown_value
+                ));
             }
         }
         n += 1;
@@ -97,7 +106,9 @@ pub fn check(robot: &Robot, seen: &[Seen]) -> Result<usize, String> {
     {
         n += 1;
         if !value.contains(&rule) || !value.contains('°') {
-            return Err(format!("{label} = {value:?}: the rule ({rule}) or the water is missing"));
+            return Err(format!(
+                "{label} = {value:?}: the rule ({rule}) or the water is missing"
+            ));
         }
         // No allowance sum and no controlling diver named from unread starts.
         if !t.all_usable && (value.contains('÷') || value.contains(" controls:")) {
@@ -134,7 +145,10 @@ fn check_chart(seen: &[Seen], t: &Truth) -> Result<usize, String> {
         return Err("a boxed chart cell without a pair".into());
     };
     if !(t.usable[me] && t.usable[buddy]) {
-        return Err(format!("chart cell boxed while a start of the pair is not read: {:?}", t.usable));
+        return Err(format!(
+            "chart cell boxed while a start of the pair is not read: {:?}",
+            t.usable
+        ));
     }
     let mut pair = t.input.clone();
     pair.divers = vec![t.input.divers[me].clone(), t.input.divers[buddy].clone()];
@@ -155,7 +169,10 @@ fn check_cards(robot: &Robot, t: &Truth) -> Result<usize, String> {
     let seen = robot.cards_seen.get();
     robot.cards_seen.set(count);
     if count > seen && !(t.all_usable && t.stages_usable) {
-        return Err(format!("a card was written while a start was not read: {:?}", t.usable));
+        return Err(format!(
+            "a card was written while a start was not read: {:?}",
+            t.usable
+        ));
     }
     Ok(1)
 }

@@ -166,7 +166,9 @@ impl Robot {
         let (w, h) = self.size;
         seen.iter()
             .filter(|e| e.button && e.enabled && e.w > 0.0)
-            .filter(|e| (0.0..w).contains(&(e.x + e.w / 2.0)) && (0.0..h).contains(&(e.y + e.h / 2.0)))
+            .filter(|e| {
+                (0.0..w).contains(&(e.x + e.w / 2.0)) && (0.0..h).contains(&(e.y + e.h / 2.0))
+            })
             .collect()
     }
 
@@ -244,7 +246,13 @@ impl Robot {
         match rng.below(100) {
             0..=5 => Action::Back,
             6..=11 => Action::Clock(
-                [60, 20 * 60, 2 * 3600 + 50 * 60, 3 * 3600 + 5 * 60, 10 * 3600][rng.below(5)],
+                [
+                    60,
+                    20 * 60,
+                    2 * 3600 + 50 * 60,
+                    3 * 3600 + 5 * 60,
+                    10 * 3600,
+                ][rng.below(5)],
             ),
             12..=15 => Action::Scroll(if rng.chance(50) { -240.0 } else { 240.0 }),
             16..=19 => Action::Wait(rng.below(600) as u64),
@@ -254,7 +262,9 @@ impl Robot {
                 let reading: Vec<&String> = buttons
                     .iter()
                     .map(|e| &e.label)
-                    .filter(|l| l.starts_with("confirm start of") || l.starts_with("start pressure of"))
+                    .filter(|l| {
+                        l.starts_with("confirm start of") || l.starts_with("start pressure of")
+                    })
                     .collect();
                 if reading.is_empty() {
                     label(rng).map_or(Action::Back, Action::Press)

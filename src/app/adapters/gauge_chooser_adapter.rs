@@ -3,8 +3,8 @@
 use slint::ComponentHandle;
 
 use super::super::session::Session;
-use super::super::view_models as vm;
 use super::super::ui::{AppWindow, GaugeChoice, GaugeChooserAdapter};
+use super::super::view_models as vm;
 use super::{Shared, act, handles, model};
 
 pub fn connect(ui: &AppWindow, s: &Shared) {

@@ -161,7 +161,7 @@ fn a_typed_name_gets_a_warning_when_the_sizes_change() {
     assert_eq!(d.name, "Cave set", "a typed name is the diver's");
     let w = d.name_warning().expect("a warning");
     assert!(
-        w.contains("2 × 12 L 232 bar") && w.contains("2 × 11 L 232 bar"),
+        w.contains("Twin 12 L 232 bar") && w.contains("Twin 11 L 232 bar"),
         "{w}"
     );
     // Back to the sizes it was typed for: no warning; typed again: none either.

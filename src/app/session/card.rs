@@ -48,9 +48,7 @@ impl Session {
         let heading = CardHeading {
             dive: None,
             date: Some(stamp.format("%-d %b %Y %H:%M").to_string()),
-            read_at: (0..input.divers.len())
-                .map(|i| self.read_text(i))
-                .collect(),
+            read_at: (0..input.divers.len()).map(|i| self.read_text(i)).collect(),
         };
         let svg = card_svg(&heading, input, self.team.plan(), &charts);
         let path = self

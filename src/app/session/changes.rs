@@ -154,7 +154,13 @@ mod tests {
         let (_dir, mut s) = session();
         read_all(&mut s);
         let before = s.team.to_state();
-        let old: Vec<f64> = s.team.plan().divers.iter().map(|d| d.turn_shown_value).collect();
+        let old: Vec<f64> = s
+            .team
+            .plan()
+            .divers
+            .iter()
+            .map(|d| d.turn_shown_value)
+            .collect();
         s.set_rule(rule_index(Rule::Quarters));
         let text = s.undo_text().to_string();
         assert!(text.starts_with("Rule now quarters. Turns: "), "{text}");
@@ -188,7 +194,11 @@ mod tests {
         s.set_rule(halves);
         s.answer_prompt(1);
         assert_eq!(s.team.input().rule, Rule::Halves);
-        assert!(s.undo_text().starts_with("Rule now halves"), "{}", s.undo_text());
+        assert!(
+            s.undo_text().starts_with("Rule now halves"),
+            "{}",
+            s.undo_text()
+        );
     }
 
     #[test]
@@ -201,7 +211,11 @@ mod tests {
             s.key(k);
         }
         s.entry_done();
-        assert!(s.undo_text().starts_with("Depth now 30"), "{}", s.undo_text());
+        assert!(
+            s.undo_text().starts_with("Depth now 30"),
+            "{}",
+            s.undo_text()
+        );
         assert!(s.undo_text().contains("(same)"), "depth moves no turn");
         s.toggle_water();
         assert!(s.undo_text().starts_with("Water now "), "{}", s.undo_text());
@@ -211,7 +225,8 @@ mod tests {
         s.mix_done();
         let name = &s.team.input().divers[1].name;
         assert!(
-            s.undo_text().starts_with(&format!("Mix of {name} now EAN36")),
+            s.undo_text()
+                .starts_with(&format!("Mix of {name} now EAN36")),
             "{}",
             s.undo_text()
         );

@@ -24,7 +24,12 @@ impl Session {
         self.begin_action();
         let now = self.now;
         let seen: Vec<(StartStatus, Option<StartStatus>)> = (0..self.team.len())
-            .map(|i| (self.team.start_status(i, now), self.team.stage_status(i, now)))
+            .map(|i| {
+                (
+                    self.team.start_status(i, now),
+                    self.team.stage_status(i, now),
+                )
+            })
             .collect();
         let changed = seen != self.seen_statuses;
         self.seen_statuses = seen;
@@ -74,7 +79,10 @@ mod tests {
         }
         clock.advance(7 * 60); // 00:05 the next day
         s.begin_action();
-        assert!(s.team.turns_ready(s.now()), "seven minutes later, a new day");
+        assert!(
+            s.team.turns_ready(s.now()),
+            "seven minutes later, a new day"
+        );
         assert!(s.read_text(0).starts_with("read "), "{}", s.read_text(0));
         clock.advance(3 * 3600 - 7 * 60 + 1); // three hours and a second after reading
         s.begin_action();
@@ -133,10 +141,17 @@ mod tests {
         clock.advance(600);
         s.begin_action();
         s.next_dive();
-        assert_eq!(s.team.input(), &before.team.to_input().unwrap(), "same divers");
+        assert_eq!(
+            s.team.input(),
+            &before.team.to_input().unwrap(),
+            "same divers"
+        );
         assert_eq!(s.team.labels(), &before.cylinder_labels[..]);
         assert_eq!(s.team.readings().blocking(s.now()).len(), s.team.len());
-        assert!(s.team.stages_blocking(s.now()).contains(&0), "stage unread too");
+        assert!(
+            s.team.stages_blocking(s.now()).contains(&0),
+            "stage unread too"
+        );
         assert!(s.undo_text().contains("Next dive"), "{}", s.undo_text());
         // Saved: a restart shows the next dive, not the last one.
         let again = Session::open_with_clock(Store::new(dir.path()), Rc::new(clock.clone()));

@@ -88,7 +88,11 @@ mod tests {
         s.open_gauge_chooser(1);
         s.choose_gauge(unit);
         assert_ne!(s.team.input().gauge_of(1).unit, g.unit);
-        assert!(s.undo_text().contains("No turns until"), "{}", s.undo_text());
+        assert!(
+            s.undo_text().contains("No turns until"),
+            "{}",
+            s.undo_text()
+        );
         assert!(matches!(
             GAUGES[unit].unit,
             PressureUnit::Bar | PressureUnit::Psi

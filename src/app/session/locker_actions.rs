@@ -8,9 +8,9 @@
 //! re-reads it too (`refresh_locker`).
 
 use crate::plan::error::InputError;
+use crate::plan::{Material, presets};
 use crate::storage::locker_merge::merge_changes;
 use crate::storage::store::LockerError;
-use crate::plan::{Material, presets};
 
 use super::super::locker_controller::Added;
 use super::super::nav::Screen;

@@ -2,8 +2,8 @@
 //! today, and what changing a gauge does to it.
 
 use crate::app::readings::{Readings, Source, StartStatus};
-use crate::plan::error::InputError;
 use crate::plan::Gauge;
+use crate::plan::error::InputError;
 use crate::plan::round_down_to_step;
 
 use super::TeamController;

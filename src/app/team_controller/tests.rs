@@ -30,7 +30,10 @@ fn nudges_land_on_the_step() {
 fn units_switch_keeps_physical_pressures() {
     let mut t = demo();
     // Bram's start was read on his bar gauge; Sol's was never read.
-    t.mark_read(1, crate::app::clock::Clock::now(&crate::app::clock::SystemClock));
+    t.mark_read(
+        1,
+        crate::app::clock::Clock::now(&crate::app::clock::SystemClock),
+    );
     let bar = t.input().divers[1].start.bar();
     t.set_units(UnitSystem::Imperial).unwrap();
     assert_eq!(t.input().gauge_step, 100.0);
@@ -91,7 +94,10 @@ fn an_unread_diver_picking_a_rated_set_reads_psi() {
     assert_eq!(t.input().gauge_of(0).unit, PressureUnit::Psi);
     // A diver whose start was read keeps the gauge it was read on.
     // (Bram's 205 bar still fits the new set, so his reading stands.)
-    t.mark_read(1, crate::app::clock::Clock::now(&crate::app::clock::SystemClock));
+    t.mark_read(
+        1,
+        crate::app::clock::Clock::now(&crate::app::clock::SystemClock),
+    );
     t.set_cylinders(1, rated, "Twin steel 104").unwrap();
     assert_eq!(t.input().gauge_of(1).unit, PressureUnit::Bar);
 }

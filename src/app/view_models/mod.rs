@@ -25,8 +25,8 @@ pub use locker::{LockerEditVm, LockerRowVm, locker_edit, locker_rows, preset_row
 pub use pickers::{CustomVm, MixRowVm, PickRowVm, PickerVm, picker, picker_title};
 pub use settings::{SettingsVm, cautions, settings};
 pub use team::{
-    DiverCardVm, GaugeChooserVm, TeamPageVm, demo_note, gauge_chooser, depth_label, diver_cards, status, team_page, team_summary,
-    water_temp_text, water_text,
+    DiverCardVm, GaugeChooserVm, TeamPageVm, demo_note, depth_label, diver_cards, gauge_chooser,
+    status, team_page, team_summary, water_temp_text, water_text,
 };
 pub use tools::{ChartRowVm, ChartVm, FillVm, chart, fill};
 pub use turns::{

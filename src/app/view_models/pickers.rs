@@ -254,7 +254,7 @@ mod tests {
         // Each row shows what to check on the cylinder: the stamp, or the rating.
         // Trade fact, from memory: an aluminium 80 is rated 77.4 cu ft at 3000 psi.
         let row = |t: &str| p.singles.iter().chain(&p.pairs).find(|r| r.title == t);
-        let al80 = &row("Aluminium 80").unwrap().detail;
+        let al80 = &row("Single aluminium 77.4 cu ft 3000 psi").unwrap().detail;
         assert!(al80.contains("77.4 cu ft at 3000 psi"), "{al80}");
         let twin = &row("Twin 12 L 232 bar").unwrap().detail;
         assert!(twin.contains("each 12 L at 232 bar"), "{twin}");

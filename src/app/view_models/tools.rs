@@ -199,7 +199,10 @@ mod tests {
         let c = chart(&s).unwrap();
         assert_eq!(c.rows.iter().filter(|r| r.planned).count(), 1);
         assert_eq!(c.planned_column, -1, "Bram is still unread");
-        assert!(c.note.starts_with("No planned start is boxed: the start of Bram "));
+        assert!(
+            c.note
+                .starts_with("No planned start is boxed: the start of Bram ")
+        );
         s.confirm_start(1);
         let c = chart(&s).unwrap();
         assert!(!c.note.contains("boxed"), "{}", c.note);

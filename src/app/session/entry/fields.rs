@@ -50,8 +50,8 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             let d = input.divers.get(i)?;
             let g = input.gauge_of(i);
             // A start nobody read opens empty: the number must come from the gauge.
-            let unread = s.team.start_status(i, s.now())
-                == crate::app::readings::StartStatus::Missing;
+            let unread =
+                s.team.start_status(i, s.now()) == crate::app::readings::StartStatus::Missing;
             Field {
                 buffer: KeypadBuffer::digits(
                     &if unread {
@@ -99,8 +99,8 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             let st = d.stage.as_ref()?;
             let g = input.gauge_of(i);
             // A stage nobody read today opens empty, as a main start does.
-            let unread = s.team.stage_status(i, s.now())
-                == Some(crate::app::readings::StartStatus::Missing);
+            let unread =
+                s.team.stage_status(i, s.now()) == Some(crate::app::readings::StartStatus::Missing);
             Field {
                 buffer: KeypadBuffer::digits(
                     &if unread {

@@ -4,8 +4,8 @@
 //! entry started from. Cancel puts that value back. What each field is lives in
 //! `fields.rs`.
 
-use crate::app::view_models as vm;
 use crate::app::keypad::{KeypadBuffer, parse_value};
+use crate::app::view_models as vm;
 use crate::plan::error::{InputError, fmt_num};
 use crate::plan::next_step;
 
