@@ -41,52 +41,9 @@ pub fn up1(x: f64) -> f64 {
     ((x * 10.0) - 1e-6).ceil() / 10.0
 }
 
-/// The team's hand allowance as the pencil gets it: the smallest of the divers' pencil
-/// contents (each as `hand_working` prints it), and that content × the rule's fraction,
-/// rounded down to one decimal. Every figure is the one printed elsewhere on the page.
-#[derive(Clone, Copy, Debug, PartialEq)]
-pub struct PencilAllowance {
-    /// The diver whose content is smallest (the first on a tie).
-    pub diver: usize,
-    /// That content, in the team's volume unit, as printed.
-    pub content: f64,
-    /// The allowance, in the team's volume unit, as printed.
-    pub allowance: f64,
-}
-
-/// The pencil allowance of the team.
-pub fn pencil_allowance(team: &TeamInput, plan: &TeamPlan) -> PencilAllowance {
-    let (diver, content) = (0..plan.divers.len())
-        .map(|i| (i, pencil_content(team, plan, i).1))
-        .fold(
-            (0, f64::INFINITY),
-            |best, c| if c.1 < best.1 { c } else { best },
-        );
-    let content = if content.is_finite() { content } else { 0.0 };
-    PencilAllowance {
-        diver,
-        content,
-        allowance: down1(content / f64::from(team.rule.denominator())),
-    }
-}
-
-/// The team's hand allowance sentence, e.g. "Allowance by hand: the smallest content
-/// 3920 L (Tomas) ÷ 3 = 1306.6 L".
-pub fn allowance_sentence(team: &TeamInput, plan: &TeamPlan) -> String {
-    let vu = team.units.volume_label();
-    let a = pencil_allowance(team, plan);
-    format!(
-        "Allowance by hand: the smallest content {} {vu} ({}) ÷ {} = {} {vu}",
-        fmt_num(a.content),
-        plan.divers[a.diver].name,
-        team.rule.denominator(),
-        fmt_num(a.allowance)
-    )
-}
-
 /// Diver `i`'s content sum and its result in the team's volume unit, as printed (one
 /// decimal, rounded down).
-fn pencil_content(team: &TeamInput, plan: &TeamPlan, i: usize) -> (String, f64) {
+pub(super) fn pencil_content(team: &TeamInput, plan: &TeamPlan, i: usize) -> (String, f64) {
     let u = team.units;
     let d = &team.divers[i];
     let g = plan.divers[i].gauge;
@@ -174,7 +131,7 @@ pub fn hand_working(team: &TeamInput, plan: &TeamPlan, i: usize) -> HandWorking 
     let gu = g.label();
     let start = g.value(team.divers[i].start);
     let (content, c) = pencil_content(team, plan, i);
-    let a = pencil_allowance(team, plan).allowance;
+    let a = super::allowance::pencil_allowance(team, plan).allowance;
     let drop = if c > 0.0 { down1(start * a / c) } else { 0.0 };
     let exact = up1(start - drop);
     let rounded = round_up_to_step(exact, g.step).min(start);
@@ -249,124 +206,9 @@ pub fn turn_how(plan: &TeamPlan, i: usize) -> String {
     }
 }
 
-/// Whose gas sets the allowance that a group of shown turns uses.
-#[derive(Clone, Debug, PartialEq)]
-pub struct AllowanceSource {
-    /// The model whose allowance these turns use.
-    pub model: super::gas_model::ModelKind,
-    /// The diver with the least gas in that model.
-    pub diver: usize,
-    /// The smallest content, in the team's volume unit, rounded down.
-    pub content: f64,
-    /// The allowance, in the team's volume unit, rounded down.
-    pub allowance: f64,
-    /// The divers whose shown turn this allowance sets, in team order.
-    pub turns: Vec<usize>,
-}
-
-/// The allowances the shown turns use: one entry per model that sets at least one
-/// shown turn (hand first). The hand entry's figures are the pencil figures.
-pub fn allowance_sources(team: &TeamInput, plan: &TeamPlan) -> Vec<AllowanceSource> {
-    use super::gas_model::ModelKind;
-    let u = team.units;
-    let by = |m: ModelKind| -> Vec<usize> {
-        (0..plan.divers.len())
-            .filter(|&i| plan.divers[i].set_by == m)
-            .collect()
-    };
-    let mut out = Vec::new();
-    let hand = by(ModelKind::Hand);
-    if !hand.is_empty() {
-        let a = pencil_allowance(team, plan);
-        out.push(AllowanceSource {
-            model: ModelKind::Hand,
-            diver: a.diver,
-            content: a.content,
-            allowance: a.allowance,
-            turns: hand,
-        });
-    }
-    let real = by(ModelKind::Real);
-    if !real.is_empty() {
-        let c = plan.controlling;
-        out.push(AllowanceSource {
-            model: ModelKind::Real,
-            diver: c,
-            content: down1(u.volume_value(plan.divers[c].content_real)),
-            allowance: down1(u.volume_value(plan.team_allowance_real)),
-            turns: real,
-        });
-    }
-    out
-}
-
-/// Where the shown turns' allowance comes from and who controls, in words: "Each diver
-/// may use 1412 L going in: 4237 L (Bram) ÷ 3 = 1412 L, by hand. Bram controls: least
-/// usable gas." When the hand method and real gas set different divers' turns, both
-/// sums and both controlling divers. Whole units, rounded down.
-pub fn allowance_source_sentence(team: &TeamInput, plan: &TeamPlan) -> String {
-    use super::gas_model::ModelKind;
-    let vu = team.units.volume_label();
-    let n = team.rule.denominator();
-    let whole = |x: f64| fmt_num((x + 1e-6).floor());
-    let sources = allowance_sources(team, plan);
-    let how = |m: ModelKind| match m {
-        ModelKind::Hand => "by hand",
-        ModelKind::Real => "by real gas",
-    };
-    let sum = |a: &AllowanceSource| {
-        format!(
-            "{} {vu} ({}) ÷ {n} = {} {vu}",
-            whole(a.content),
-            plan.divers[a.diver].name,
-            whole(a.allowance)
-        )
-    };
-    let names = |v: &[usize]| {
-        v.iter()
-            .map(|&i| plan.divers[i].name.as_str())
-            .collect::<Vec<_>>()
-            .join(", ")
-    };
-    match sources.as_slice() {
-        [] => String::new(),
-        [a] => format!(
-            "Each diver may use {} {vu} going in: {}, {}. {} controls: least usable gas.",
-            whole(a.allowance),
-            sum(a),
-            how(a.model),
-            plan.divers[a.diver].name
-        ),
-        _ => {
-            let parts: Vec<String> = sources
-                .iter()
-                .map(|a| {
-                    format!(
-                        "Turns of {} use the allowance {}: {}.",
-                        names(&a.turns),
-                        how(a.model),
-                        sum(a)
-                    )
-                })
-                .collect();
-            let mut who: Vec<usize> = sources.iter().map(|a| a.diver).collect();
-            who.dedup();
-            let verb = if who.len() == 1 {
-                "controls"
-            } else {
-                "control"
-            };
-            format!(
-                "{} {} {verb}: least usable gas in each method.",
-                parts.join(" "),
-                names(&who).replace(", ", " and ")
-            )
-        }
-    }
-}
-
 #[cfg(test)]
 mod tests {
+    use super::super::allowance::{allowance_sentence, allowance_sources};
     use super::*;
     use crate::plan::{
         CylinderSet, DiverInput, Gauge, Mix, Pressure, Rule, Temperature, Water, plan_team,
@@ -382,6 +224,13 @@ mod tests {
             stage: None,
             gauge,
         }
+    }
+
+    fn stamped_twins(water_l: f64, working_bar: f64) -> CylinderSet {
+        CylinderSet::twins(CylinderSpec::Stamped {
+            water_l,
+            working_bar,
+        })
     }
 
     fn metric_team(divers: Vec<DiverInput>) -> TeamInput {
@@ -403,19 +252,13 @@ mod tests {
         let t = metric_team(vec![
             diver(
                 "Ines",
-                CylinderSet::twins(CylinderSpec::Stamped {
-                    water_l: 12.0,
-                    working_bar: 232.0,
-                }),
+                stamped_twins(12.0, 232.0),
                 Pressure::from_bar(220.0),
                 None,
             ),
             diver(
                 "Tomas",
-                CylinderSet::twins(CylinderSpec::Stamped {
-                    water_l: 7.0,
-                    working_bar: 300.0,
-                }),
+                stamped_twins(7.0, 300.0),
                 Pressure::from_bar(280.0),
                 None,
             ),
@@ -494,10 +337,7 @@ mod tests {
         let t = metric_team(vec![
             diver(
                 "Bram",
-                CylinderSet::twins(CylinderSpec::Stamped {
-                    water_l: 12.0,
-                    working_bar: 232.0,
-                }),
+                stamped_twins(12.0, 232.0),
                 Pressure::from_psi(2950.0),
                 Some(Gauge {
                     unit: PressureUnit::Psi,
@@ -506,10 +346,7 @@ mod tests {
             ),
             diver(
                 "Sol",
-                CylinderSet::twins(CylinderSpec::Stamped {
-                    water_l: 10.0,
-                    working_bar: 300.0,
-                }),
+                stamped_twins(10.0, 300.0),
                 Pressure::from_bar(230.0),
                 None,
             ),

@@ -41,6 +41,7 @@
 //! # Ok::<(), turnsheet::plan::InputError>(())
 //! ```
 
+mod allowance;
 mod catalogue;
 mod chart;
 mod cylinders;
@@ -92,9 +93,10 @@ pub use matching::{DiverPlan, StagePlan, TeamPlan, plan_team};
 pub use out_of_gas::{StressCheck, margin_for_display};
 pub use warning::{OVERFILL_SHARE, Supply, Warning};
 // Pencil sums beside the plan, pairing charts, and a pressure after a temperature change.
-pub use chart::{PairChart, pair_chart, starts_around, team_charts};
-pub use hand_check::{
-    AllowanceSource, HandWorking, PencilAllowance, allowance_sentence, allowance_source_sentence,
-    allowance_sources, hand_working, pencil_allowance, turn_how, turn_sentence,
+pub use allowance::{
+    AllowanceSource, PencilAllowance, allowance_sentence, allowance_source_sentence,
+    allowance_sources, pencil_allowance,
 };
+pub use chart::{PairChart, pair_chart, starts_around, team_charts};
+pub use hand_check::{HandWorking, hand_working, turn_how, turn_sentence};
 pub use temperature::{TemperatureChange, pressure_after_temperature_change};
