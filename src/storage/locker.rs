@@ -15,7 +15,7 @@ use crate::plan::{CylinderSet, UnitSystem};
 pub const LOCKER_SCHEMA: u32 = 1;
 
 /// Most sets a locker holds.
-pub const MAX_LOCKER_SETS: usize = 200;
+pub const MAX_LOCKER_SETS: usize = 500;
 /// Longest set name, in characters (after trimming).
 pub const MAX_SET_NAME_CHARS: usize = 40;
 /// Longest note on a set, in characters.

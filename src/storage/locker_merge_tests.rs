@@ -99,7 +99,10 @@ fn renamed_names_fit_the_limit_and_a_full_locker_refuses() {
     let e = full
         .merge(&locker(vec![entry(1, "One more", 12.0)]))
         .unwrap_err();
-    assert!(e.message.contains("at most 200"), "{e}");
+    assert!(
+        e.message.contains(&format!("at most {MAX_LOCKER_SETS}")),
+        "{e}"
+    );
 }
 
 fn names(l: &LockerFile) -> Vec<&str> {
@@ -165,11 +168,14 @@ fn a_deleted_set_changed_elsewhere_is_kept_and_the_same_addition_counts_once() {
 fn a_merge_past_the_limit_changes_nothing() {
     let base = locker(vec![]);
     let full = locker(
-        (1..=200)
+        (1..=MAX_LOCKER_SETS as u64)
             .map(|i| entry(i, &format!("S{i}"), 12.0))
             .collect(),
     );
     let ours = locker(vec![entry(1, "Extra", 12.0)]);
     let e = merge_changes(&base, &ours, &full).unwrap_err();
-    assert!(e.message.contains("at most 200"), "{e}");
+    assert!(
+        e.message.contains(&format!("at most {MAX_LOCKER_SETS}")),
+        "{e}"
+    );
 }

@@ -56,7 +56,7 @@ w(l + "long-name.json", json.dumps({"schema": 1, "entries": [dict(set12, name="N
 w(l + "long-note.json", json.dumps({"schema": 1, "entries": [dict(set12, note="n" * 61)]}))
 w(l + "empty-name.json", json.dumps({"schema": 1, "entries": [dict(set12, name="  ")]}))
 w(l + "too-many-sets.json", json.dumps(
-    {"schema": 1, "entries": [dict(set12, id=k + 1, name=f"S{k}") for k in range(201)]}))
+    {"schema": 1, "entries": [dict(set12, id=k + 1, name=f"S{k}") for k in range(501)]}))
 w(l + "deep-nesting.json", b'{"schema": 1, "entries": ' + nest(5000) + b"}")
 w(l + "negative-id.json", json.dumps({"schema": 1, "entries": [dict(set12, id=-1)]}))
 w(l + "nul-bytes.json", b"\x00" * 64)
