@@ -40,7 +40,10 @@ fn main() {
     let out = Path::new(env!("CARGO_MANIFEST_DIR")).join("docs/screenshots");
     std::fs::create_dir_all(&out).unwrap();
     let data = tempfile::tempdir().unwrap();
-    let app = App::new(data.path()).expect("app");
+    // A fixed clock (5 December 2026, 09:42 UTC), so the read times on the pictures do
+    // not change from one run to the next.
+    let clock = turnsheet::app::clock::ManualClock::at(1_796_463_720);
+    let app = App::with_clock(data.path(), std::rc::Rc::new(clock)).expect("app");
     app.window
         .window()
         .set_size(slint::LogicalSize::new(412.0, 915.0));
@@ -178,4 +181,14 @@ fn main() {
         s.go(Screen::Turns);
     });
     shot("23-small-chart", &|s| s.go(Screen::Chart));
+    shot("24-small-buddy", &|s| s.go(Screen::Buddy));
+    // A stray tap on the rule once turns are shown: what it did, and Undo.
+    shot("25-small-rule-changed", &|s| {
+        s.back();
+        s.back();
+        s.back();
+        s.set_rule(3);
+    });
+    // The gauge of a diver is chosen, the current one marked.
+    shot("26-small-gauge-chooser", &|s| s.open_gauge_chooser(1));
 }

@@ -55,6 +55,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
                 controlling: r.controlling,
                 stage: vm::keep_units_together(&r.stage_short).into(),
                 read: r.read_short.clone().into(),
+                info: vm::keep_units_together(&r.buddy_info()).into(),
             })
             .collect(),
     ));

@@ -71,6 +71,24 @@ pub struct TurnRowVm {
     pub read_short: String,
 }
 
+impl TurnRowVm {
+    /// The buddy view's line under the turn: who controls, when the start was read, the
+    /// stage drop.
+    pub fn buddy_info(&self) -> String {
+        let mut parts = Vec::new();
+        if self.controlling {
+            parts.push("● controls: least gas".to_string());
+        }
+        if !self.read_short.is_empty() {
+            parts.push(self.read_short.clone());
+        }
+        if !self.stage_short.is_empty() {
+            parts.push(self.stage_short.clone());
+        }
+        parts.join(" · ")
+    }
+}
+
 /// Why there are no turns yet, naming each diver whose start is not a reading taken
 /// today; None when every start is.
 pub fn starts_blocking(s: &Session) -> Option<String> {
