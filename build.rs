@@ -8,7 +8,12 @@ fn main() {
         .unwrap_or(false);
     let config = slint_build::CompilerConfiguration::new()
         .with_style("material-dark".into())
-        .with_debug_info(debug);
+        .with_debug_info(debug)
+        // The gettext catalogues, one per language; the Rust side reads the same files,
+        // so messages carry no context (one msgid, one meaning, app-wide).
+        .with_bundled_translations("lang")
+        .with_default_translation_context(slint_build::DefaultTranslationContext::None);
     slint_build::compile_with_config("ui/app_window.slint", config).expect("Slint build failed");
     println!("cargo:rerun-if-changed=ui");
+    println!("cargo:rerun-if-changed=lang");
 }

@@ -6,6 +6,7 @@
 pub mod app;
 pub mod cli;
 pub mod formats;
+pub mod i18n;
 pub mod plan;
 pub mod platform;
 pub mod storage;

@@ -10,8 +10,8 @@ use std::path::PathBuf;
 
 use turnsheet::formats::card_svg::{CardHeading, card_svg};
 use turnsheet::formats::team_file::TeamFile;
-use turnsheet::plan::error::fmt_num;
 use turnsheet::plan::plan_team;
+use turnsheet::plan::shown;
 use turnsheet::plan::team_charts;
 
 fn demo() -> turnsheet::plan::TeamInput {
@@ -70,12 +70,12 @@ fn card_is_xml_with_every_name_and_turn() {
         .join("\n");
     for d in &plan.divers {
         assert!(text.contains(&d.name), "{} missing", d.name);
-        let turn = format!("{} {}", fmt_num(d.turn_shown_value), d.gauge.label());
+        let turn = format!("{} {}", shown::num(d.turn_shown_value), d.gauge.label());
         assert!(text.contains(&turn), "{turn} missing");
         if let Some(st) = &d.stage {
             assert!(text.contains(&format!(
                 "drop stage at {} {}",
-                fmt_num(st.drop_shown_value),
+                shown::num(st.drop_shown_value),
                 d.gauge.label()
             )));
         }
@@ -111,7 +111,7 @@ fn charts_add_one_page_per_pairing() {
     for c in &charts {
         for row in &c.turns {
             for cell in row.iter().flatten() {
-                assert!(texts.contains(&fmt_num(*cell).as_str()));
+                assert!(texts.contains(&shown::num(*cell).as_str()));
             }
         }
     }

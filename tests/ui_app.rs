@@ -1139,7 +1139,7 @@ fn a_custom_pair_entered_in_the_picker_plans_like_the_core() {
     );
     press(&app, "clear");
     type_keys(&app, "11");
-    press(&app, "decimal point");
+    press(&app, "decimal separator");
     type_keys(&app, "1");
     press(&app, "done");
     press(&app, "custom working pressure");

@@ -76,7 +76,7 @@ fn on_keypad(label: &str) -> bool {
         "delete",
         "clear",
         "space",
-        "decimal point",
+        "decimal separator",
         "minus one step",
         "plus one step",
     ]

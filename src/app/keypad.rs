@@ -61,7 +61,7 @@ impl KeypadBuffer {
         parse_value(&self.text)
     }
 
-    /// Apply one key: a digit or letter, ".", "del", "clear" or " ". Unknown keys are ignored.
+    /// Apply one key: a digit or letter, "." or ",", "del", "clear" or " ". Unknown keys are ignored.
     pub fn press(&mut self, key: &str) {
         if self.selected {
             self.selected = false;
@@ -81,11 +81,12 @@ impl KeypadBuffer {
             }
             "clear" => self.text.clear(),
             _ if self.text.chars().count() >= self.max_len => {}
-            "." if !self.letters && self.decimal && !self.text.contains('.') => {
+            // Either separator types the one of the language shown (157,5 or 157.5).
+            "." | "," if !self.letters && self.decimal && !self.text.contains(['.', ',']) => {
                 if self.text.is_empty() {
                     self.text.push('0');
                 }
-                self.text.push('.');
+                self.text.push(crate::plan::shown::decimal().mark());
             }
             k if !self.letters && k.len() == 1 && k.as_bytes()[0].is_ascii_digit() => {
                 if self.text == "0" {
@@ -115,13 +116,9 @@ impl KeypadBuffer {
     }
 }
 
-/// The number in a keypad text, if it is one.
+/// The number in a keypad text, if it is one (either decimal separator).
 pub fn parse_value(text: &str) -> Option<f64> {
-    if text.is_empty() || text == "." {
-        None
-    } else {
-        text.parse().ok()
-    }
+    crate::plan::shown::parse(text)
 }
 
 #[cfg(test)]
@@ -179,5 +176,21 @@ mod tests {
             b.press(k);
         }
         assert_eq!(b.text(), "Mari Lu-Ka");
+    }
+
+    #[test]
+    fn the_decimal_key_types_the_language_separator() {
+        use crate::plan::shown::{Decimal, DecimalScope};
+        let _comma = DecimalScope::new(Decimal::Comma);
+        let mut b = KeypadBuffer::digits("", true);
+        for k in ["1", "5", "7", ".", ",", "5"] {
+            b.press(k);
+        }
+        assert_eq!(b.text(), "157,5", "one separator, the language's");
+        assert_eq!(b.value(), Some(157.5));
+        let mut b = KeypadBuffer::digits("", true);
+        b.press(",");
+        assert_eq!(b.text(), "0,");
+        assert_eq!(b.value(), Some(0.0));
     }
 }

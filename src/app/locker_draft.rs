@@ -216,10 +216,16 @@ fn count_word(count: u8) -> String {
 /// `name` with the sizes of `old` replaced by those of `now`; None when the name does not
 /// state the old cylinder's sizes (a name of the diver's own).
 fn rename(name: &str, old: &CylinderSet, now: &CylinderSet) -> Option<String> {
-    let (was, is) = (old.spec.describe(), now.spec.describe());
-    if !name.contains(&was) {
-        return None;
-    }
+    use crate::plan::shown::{Decimal, DecimalScope};
+    // A name made in another language may hold the other decimal separator.
+    let was = [Decimal::Point, Decimal::Comma]
+        .map(|d| {
+            let _scope = DecimalScope::new(d);
+            old.spec.describe()
+        })
+        .into_iter()
+        .find(|w| name.contains(w.as_str()))?;
+    let is = now.spec.describe();
     let mut name = name.replacen(&was, &is, 1);
     if old.count != now.count {
         let (w, n) = (count_word(old.count), count_word(now.count));
@@ -237,7 +243,7 @@ fn rename(name: &str, old: &CylinderSet, now: &CylinderSet) -> Option<String> {
 
 /// The material's word in `name` (as written, or with a capital) replaced by the new one's.
 fn replace_material(name: &str, old: Material, now: Material) -> String {
-    let cap = |m: Material| crate::plan::error::first_upper(m.name());
+    let cap = |m: Material| crate::plan::text::first_upper(m.name());
     if name.contains(old.name()) {
         name.replacen(old.name(), now.name(), 1)
     } else if name.contains(&cap(old)) {

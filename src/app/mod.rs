@@ -81,6 +81,13 @@ impl App {
         self.window.global::<Theme>().set_font_scale(scale);
     }
 
+    /// The system's language, as the platform reads it; the words and numbers on
+    /// screen follow it unless Settings chose another.
+    pub fn set_system_language(&self, l: crate::i18n::Language) {
+        self.session.borrow_mut().system_language = l;
+        adapters::refresh_all(&self.window, &self.session.borrow());
+    }
+
     /// Save everything now (lifecycle events).
     pub fn save(&self) {
         self.session.borrow_mut().save_all();

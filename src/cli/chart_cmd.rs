@@ -4,7 +4,8 @@ use std::path::Path;
 
 use serde::Serialize;
 
-use crate::plan::error::{InputError, fmt_num};
+use crate::plan::error::InputError;
+use crate::plan::shown;
 use crate::plan::team_charts;
 
 use super::plan_cmd::{named, read_team};
@@ -68,7 +69,7 @@ pub fn chart_text(team: &crate::plan::TeamInput, charts: &[crate::plan::PairChar
     let width = charts
         .iter()
         .flat_map(|c| c.buddy_starts.iter().chain(c.my_starts.iter()))
-        .map(|v| fmt_num(*v).len())
+        .map(|v| shown::num(*v).len())
         .max()
         .unwrap_or(3)
         .max(3)
@@ -99,11 +100,11 @@ pub fn chart_text(team: &crate::plan::TeamInput, charts: &[crate::plan::PairChar
             whose(&me.name),
             whose(&buddy.name),
             whose(&me.name),
-            fmt_num(c.my_gauge.step)
+            shown::num(c.my_gauge.step)
         ));
         s.push_str(&format!("{:>w$} │", format!("{mu}\\{bu}"), w = width + 2));
         for b in &c.buddy_starts {
-            s.push_str(&format!("{:>width$}", fmt_num(*b)));
+            s.push_str(&format!("{:>width$}", shown::num(*b)));
         }
         s.push('\n');
         s.push_str(&format!(
@@ -112,9 +113,9 @@ pub fn chart_text(team: &crate::plan::TeamInput, charts: &[crate::plan::PairChar
             "─".repeat(width * c.buddy_starts.len())
         ));
         for (r, mine) in c.my_starts.iter().enumerate() {
-            s.push_str(&format!("{:>w$} │", fmt_num(*mine), w = width + 2));
+            s.push_str(&format!("{:>w$} │", shown::num(*mine), w = width + 2));
             for cell in &c.turns[r] {
-                let text = cell.map(fmt_num).unwrap_or_else(|| "-".into());
+                let text = cell.map(shown::turn).unwrap_or_else(|| "-".into());
                 s.push_str(&format!("{text:>width$}"));
             }
             s.push('\n');

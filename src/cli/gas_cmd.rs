@@ -2,8 +2,9 @@
 
 use serde::Serialize;
 
-use crate::plan::error::{InputError, check_range, fmt_num};
+use crate::plan::error::{InputError, check_range};
 use crate::plan::pressure_after_temperature_change;
+use crate::plan::shown;
 use crate::plan::{ContentModel, HandModel, Mix, Pressure, RealGasModel, Temperature, Volume};
 
 use super::PressureUnit;
@@ -108,9 +109,9 @@ pub fn run(a: &GasArgs) -> Result<String, InputError> {
         a.temp,
         real.litres().floor(),
         real.cuft(),
-        fmt_num(a.litres),
-        fmt_num((p.bar() * 10.0 + 1e-6).floor() / 10.0),
-        fmt_num((hand.litres() * 10.0 + 1e-6).floor() / 10.0),
+        shown::num(a.litres),
+        shown::num(shown::down(p.bar(), 1)),
+        shown::num(shown::down(hand.litres(), 1)),
         hand.cuft()
     );
     if let (Some(c), Some(t2)) = (after, a.to_temp) {

@@ -6,8 +6,9 @@ use std::path::PathBuf;
 
 use crate::formats::card_svg::charts_svg;
 use crate::formats::cylinder_spec::parse_cylinder_spec;
-use crate::plan::error::{InputError, check_range, fmt_num};
+use crate::plan::error::{InputError, check_range};
 use crate::plan::round_down_to_step;
+use crate::plan::shown;
 use crate::plan::validate_step;
 use crate::plan::{CylinderSet, DiverInput, Mix, Rule, TeamInput, Temperature, UnitSystem, Water};
 use crate::plan::{PairChart, pair_chart};
@@ -176,15 +177,15 @@ pub fn csv(chart: &PairChart) -> String {
     );
     for b in &chart.buddy_starts {
         s.push(',');
-        s.push_str(&fmt_num(*b));
+        s.push_str(&shown::num(*b));
     }
     s.push('\n');
     for (r, m) in chart.my_starts.iter().enumerate() {
-        s.push_str(&fmt_num(*m));
+        s.push_str(&shown::num(*m));
         for cell in &chart.turns[r] {
             s.push(',');
             if let Some(t) = cell {
-                s.push_str(&fmt_num(*t));
+                s.push_str(&shown::num(*t));
             }
         }
         s.push('\n');

@@ -2,8 +2,8 @@
 
 use serde::Serialize;
 
-use crate::plan::error::fmt_num;
 use crate::plan::margin_for_display;
+use crate::plan::shown;
 use crate::plan::{PressureUnit, TeamInput, TeamPlan, UnitSystem};
 use crate::plan::{allowance_sentence, hand_working, turn_sentence};
 
@@ -160,19 +160,19 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
         let mark = if controllers.contains(&i) { "*" } else { " " };
         let minutes = d
             .minutes_to_turn
-            .map(|m| format!("{}", m.floor() as i64))
+            .map(shown::minutes)
             .unwrap_or_else(|| "-".into());
         s.push_str(&format!(
             "{mark} {:<16} {:<26} {:<10} {:>7} {:>7} {:<4} {:<9} {:<12} {:>14} {:>8}\n",
             d.name,
             inp.cylinders.describe(),
             inp.mix.label(),
-            fmt_num((g.value(d.start) + 1e-9).floor()),
-            fmt_num(d.turn_shown_value),
+            shown::start(g.value(d.start)),
+            shown::turn(d.turn_shown_value),
             g.label(),
-            format!("{} {}", fmt_num(g.step), g.label()),
+            format!("{} {}", shown::num(g.step), g.label()),
             d.set_by.describe(),
-            format!("{:.0}", u.volume_value(d.content_real).floor()),
+            shown::start(u.volume_value(d.content_real)),
             minutes
         ));
     }
@@ -211,10 +211,10 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
                     "{} {:<16} drop stage at {} {u} ({}, {}, start {} {u}; {})\n",
                     if st.controlling { "*" } else { " " },
                     d.name,
-                    fmt_num(st.drop_shown_value),
+                    shown::turn(st.drop_shown_value),
                     si.cylinders.describe(),
                     si.mix.label(),
-                    fmt_num((g.value(st.start) + 1e-9).floor()),
+                    shown::start(g.value(st.start)),
                     st.set_by.describe(),
                     u = g.label(),
                 ));
@@ -225,7 +225,7 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
         s.push_str(&format!(
             "First to reach turn: {} after about {} min at the planned depth.\n",
             names[i],
-            plan.divers[i].minutes_to_turn.unwrap_or(0.0).floor() as i64
+            shown::minutes(plan.divers[i].minutes_to_turn.unwrap_or(0.0))
         ));
     }
     s.push_str("\nCheck by hand (tank factors; bar taken as atmospheres):\n");

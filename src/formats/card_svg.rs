@@ -3,7 +3,7 @@
 //! diver's pairing charts. No I/O here: the caller writes the text.
 
 use crate::plan::PairChart;
-use crate::plan::error::fmt_num;
+use crate::plan::shown;
 use crate::plan::{TeamInput, TeamPlan};
 
 /// Page size in millimetres.
@@ -122,9 +122,9 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
         .map(|d| {
             format!(
                 ", {} {}",
-                fmt_num(match u {
-                    crate::plan::UnitSystem::Metric => d.metres().floor(),
-                    crate::plan::UnitSystem::Imperial => d.feet().floor(),
+                shown::start(match u {
+                    crate::plan::UnitSystem::Metric => d.metres(),
+                    crate::plan::UnitSystem::Imperial => d.feet(),
                 }),
                 u.depth_label()
             )
@@ -143,7 +143,7 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
                 crate::plan::Water::Fresh => "fresh",
                 crate::plan::Water::Salt => "salt",
             },
-            fmt_num(u.temperature_value(team.water_temp).floor()),
+            shown::degrees(u.temperature_value(team.water_temp)),
             u.temperature_label()
         ),
     );
@@ -182,14 +182,10 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
             &match heading.read_at.get(i).filter(|r| !r.is_empty()) {
                 Some(read) => format!(
                     "start {} {} ({read})",
-                    fmt_num((g.value(d.start) + 1e-9).floor()),
+                    shown::start(g.value(d.start)),
                     g.label()
                 ),
-                None => format!(
-                    "start {} {}",
-                    fmt_num((g.value(d.start) + 1e-9).floor()),
-                    g.label()
-                ),
+                None => format!("start {} {}", shown::start(g.value(d.start)), g.label()),
             },
         );
         p.text(right - 38.0, top + 4.3, 2.6, false, "end", "TURN");
@@ -199,7 +195,7 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
             8.5,
             true,
             "end",
-            &format!("{} {}", fmt_num(d.turn_shown_value), g.label()),
+            &format!("{} {}", shown::turn(d.turn_shown_value), g.label()),
         );
         if let (Some(st), Some(si)) = (&d.stage, &inp.stage) {
             p.text(
@@ -210,10 +206,10 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
                 "start",
                 &format!(
                     "drop stage at {} {u} ({}, {}, start {} {u})",
-                    fmt_num(st.drop_shown_value),
+                    shown::turn(st.drop_shown_value),
                     si.cylinders.describe(),
                     si.mix.label(),
-                    fmt_num((g.value(st.start) + 1e-9).floor()),
+                    shown::start(g.value(st.start)),
                     u = g.label()
                 ),
             );
@@ -299,7 +295,7 @@ fn chart_page(team: &TeamInput, chart: &PairChart) -> Page {
             size,
             true,
             "middle",
-            &fmt_num(*b),
+            &shown::num(*b),
         );
     }
     p.line(
@@ -313,9 +309,18 @@ fn chart_page(team: &TeamInput, chart: &PairChart) -> Page {
     let planned_buddy = chart.buddy_gauge.value(buddy.start);
     for (r, m) in chart.my_starts.iter().enumerate() {
         let ry = y + cell_h * (r as f64 + 1.0);
-        p.text(MARGIN, ry + cell_h * 0.7, size, true, "start", &fmt_num(*m));
+        p.text(
+            MARGIN,
+            ry + cell_h * 0.7,
+            size,
+            true,
+            "start",
+            &shown::num(*m),
+        );
         for (c, b) in chart.buddy_starts.iter().enumerate() {
-            let text = chart.turns[r][c].map(fmt_num).unwrap_or_else(|| "-".into());
+            let text = chart.turns[r][c]
+                .map(shown::turn)
+                .unwrap_or_else(|| "-".into());
             let cx = x0 + cell_w * c as f64;
             p.text(
                 cx + cell_w * 0.5,

@@ -2,9 +2,9 @@
 //! method (each figure the one printed elsewhere on the page), which diver's gas sets the
 //! allowance in each model, and the words that say so.
 
-use super::error::fmt_num;
 use super::hand_check::{down1, pencil_content};
 use super::matching::TeamPlan;
+use super::shown;
 use super::team::TeamInput;
 
 /// The team's hand allowance as the pencil gets it: the smallest of the divers' pencil
@@ -43,10 +43,10 @@ pub fn allowance_sentence(team: &TeamInput, plan: &TeamPlan) -> String {
     let a = pencil_allowance(team, plan);
     format!(
         "Allowance by hand: the smallest content {} {vu} ({}) ÷ {} = {} {vu}",
-        fmt_num(a.content),
+        shown::num(a.content),
         plan.divers[a.diver].name,
         team.rule.denominator(),
-        fmt_num(a.allowance)
+        shown::num(a.allowance)
     )
 }
 
@@ -109,7 +109,7 @@ pub fn allowance_source_sentence(team: &TeamInput, plan: &TeamPlan) -> String {
     use super::gas_model::ModelKind;
     let vu = team.units.volume_label();
     let n = team.rule.denominator();
-    let whole = |x: f64| fmt_num((x + 1e-6).floor());
+    let whole = |x: f64| shown::num(shown::whole_down(x));
     let sources = allowance_sources(team, plan);
     let how = |m: ModelKind| match m {
         ModelKind::Hand => "by hand",

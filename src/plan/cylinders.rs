@@ -96,8 +96,7 @@ impl CylinderSpec {
 }
 
 fn trim(x: f64) -> String {
-    let s = format!("{x:.1}");
-    s.trim_end_matches('0').trim_end_matches('.').to_string()
+    super::shown::num((x * 10.0).round() / 10.0)
 }
 
 /// One to four identical cylinders breathed as one supply for planning

@@ -12,9 +12,9 @@
 //! allowance and drops down, turns up.
 
 use super::cylinders::CylinderSpec;
-use super::error::fmt_num;
 use super::matching::TeamPlan;
 use super::rounding::round_up_to_step;
+use super::shown;
 use super::team::TeamInput;
 use super::units::{BAR_PER_PSI, LITRES_PER_CUFT, PressureUnit, UnitSystem};
 
@@ -33,12 +33,12 @@ pub struct HandWorking {
 
 /// Round down to one decimal, tolerating float noise.
 pub fn down1(x: f64) -> f64 {
-    ((x * 10.0) + 1e-6).floor() / 10.0
+    super::shown::down(x, 1)
 }
 
 /// Round up to one decimal, tolerating float noise.
 pub fn up1(x: f64) -> f64 {
-    ((x * 10.0) - 1e-6).ceil() / 10.0
+    super::shown::up(x, 1)
 }
 
 /// Diver `i`'s content sum and its result in the team's volume unit, as printed (one
@@ -62,7 +62,7 @@ pub(super) fn pencil_content(team: &TeamInput, plan: &TeamPlan, i: usize) -> (St
                     let bar = down1(start * BAR_PER_PSI);
                     (
                         bar,
-                        format!("{} psi = {} bar; ", fmt_num(start), fmt_num(bar)),
+                        format!("{} psi = {} bar; ", shown::num(start), shown::num(bar)),
                     )
                 }
             };
@@ -71,15 +71,15 @@ pub(super) fn pencil_content(team: &TeamInput, plan: &TeamPlan, i: usize) -> (St
                 UnitSystem::Metric => (String::new(), litres),
                 UnitSystem::Imperial => {
                     let cuft = down1(litres / LITRES_PER_CUFT);
-                    (format!(" = {} cu ft", fmt_num(cuft)), cuft)
+                    (format!(" = {} cu ft", shown::num(cuft)), cuft)
                 }
             };
             (
                 format!(
                     "{read}{count}{} L × {} bar = {} L{tail}",
-                    fmt_num(water_l),
-                    fmt_num(bar),
-                    fmt_num(litres)
+                    shown::num(water_l),
+                    shown::num(bar),
+                    shown::num(litres)
                 ),
                 value,
             )
@@ -93,10 +93,10 @@ pub(super) fn pencil_content(team: &TeamInput, plan: &TeamPlan, i: usize) -> (St
                 PressureUnit::Bar => {
                     // To a hundredth (rounded down), so the sums that follow agree with
                     // the plan's own hand content to the decimal shown.
-                    let psi = ((start / BAR_PER_PSI) * 100.0 + 1e-6).floor() / 100.0;
+                    let psi = shown::down(start / BAR_PER_PSI, 2);
                     (
                         psi,
-                        format!("{} bar = {} psi; ", fmt_num(start), fmt_num(psi)),
+                        format!("{} bar = {} psi; ", shown::num(start), shown::num(psi)),
                     )
                 }
             };
@@ -105,16 +105,16 @@ pub(super) fn pencil_content(team: &TeamInput, plan: &TeamPlan, i: usize) -> (St
                 UnitSystem::Imperial => (String::new(), cuft),
                 UnitSystem::Metric => {
                     let litres = down1(cuft * LITRES_PER_CUFT);
-                    (format!(" = {} L", fmt_num(litres)), litres)
+                    (format!(" = {} L", shown::num(litres)), litres)
                 }
             };
             (
                 format!(
                     "{read}{count}{} cu ft × {} psi ÷ {} psi = {} cu ft{tail}",
-                    fmt_num(rated_cuft),
-                    fmt_num(psi),
-                    fmt_num(rated_psi),
-                    fmt_num(cuft)
+                    shown::num(rated_cuft),
+                    shown::num(psi),
+                    shown::num(rated_psi),
+                    shown::num(cuft)
                 ),
                 value,
             )
@@ -137,13 +137,13 @@ pub fn hand_working(team: &TeamInput, plan: &TeamPlan, i: usize) -> HandWorking 
     let rounded = round_up_to_step(exact, g.step).min(start);
     let turn = format!(
         "{} {gu} × {} {vu} ÷ {} {vu} = {} {gu} to spend; {} − {} = {} {gu}",
-        fmt_num(start),
-        fmt_num(a),
-        fmt_num(c),
-        fmt_num(drop),
-        fmt_num(start),
-        fmt_num(drop),
-        fmt_num(exact),
+        shown::num(start),
+        shown::num(a),
+        shown::num(c),
+        shown::num(drop),
+        shown::num(start),
+        shown::num(drop),
+        shown::num(exact),
     );
     HandWorking {
         content,
@@ -164,23 +164,23 @@ pub fn turn_sentence(plan: &TeamPlan, i: usize) -> String {
     let start = g.value(p.start);
     let hand = g.value(p.turn_hand);
     let real = g.value(p.turn_real);
-    let shown = fmt_num(p.turn_shown_value);
+    let shown = shown::num(p.turn_shown_value);
     let capped = p.turn_shown_value >= start - 1e-9;
     let rounding = if capped {
-        format!("(capped at the start {} {gu})", fmt_num(start))
+        format!("(capped at the start {} {gu})", shown::num(start))
     } else {
-        format!("(rounded up to {} {gu})", fmt_num(g.step))
+        format!("(rounded up to {} {gu})", shown::num(g.step))
     };
     match p.set_by {
         super::gas_model::ModelKind::Hand => format!(
             "hand {} → {shown} {gu} {rounding}; real gas {} {gu} is lower, not used",
-            fmt_num(up1(hand)),
-            fmt_num(up1(real))
+            shown::num(up1(hand)),
+            shown::num(up1(real))
         ),
         super::gas_model::ModelKind::Real => format!(
             "real gas {} → {shown} {gu} {rounding}, higher than hand {} {gu}, so real gas sets it",
-            fmt_num(up1(real)),
-            fmt_num(up1(hand))
+            shown::num(up1(real)),
+            shown::num(up1(hand))
         ),
     }
 }
@@ -195,7 +195,7 @@ pub fn turn_how(plan: &TeamPlan, i: usize) -> String {
     }
     let mark = format!(
         "rounded up to the next {} {} mark",
-        fmt_num(g.step),
+        shown::num(g.step),
         g.label()
     );
     match p.set_by {

@@ -45,8 +45,7 @@ mod allowance;
 mod catalogue;
 mod chart;
 mod cylinders;
-/// Input errors, and the text helpers `fmt_num` and `first_upper` (public by path for
-/// now: the front ends' shown numbers use them).
+/// Input errors that name the field.
 pub mod error;
 mod gas_model;
 mod hand_check;
@@ -56,9 +55,13 @@ mod out_of_gas;
 mod real_gas;
 mod rounding;
 mod rule;
+/// Shown numbers: rounding toward safety and the decimal separator, decided once for
+/// the app, the command line and the card.
+pub mod shown;
 mod supply;
 mod team;
 mod temperature;
+/// The check of names and notes, and small text helpers.
 pub mod text;
 mod units;
 mod warning;

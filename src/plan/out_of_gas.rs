@@ -38,7 +38,7 @@ pub fn stress_check(contents: &[Volume], used: &[Volume]) -> StressCheck {
 
 /// The margin rounded DOWN to hundredths, for display.
 pub fn margin_for_display(margin: f64) -> f64 {
-    (margin * 100.0 + 1e-7).floor() / 100.0
+    super::shown::down(margin, 2)
 }
 
 /// One sentence saying what the margin means for this team.
@@ -77,10 +77,10 @@ pub fn describe_margin_at_first_turn(
 ) -> String {
     match (at_turn, first, minutes) {
         (Some(check), Some(i), Some(m)) if check.margin.is_finite() => format!(
-            "With the breathing rates entered, the team turns when {} does, after about {} min; the others have used less by then, so it is enough at up to {:.2} × normal breathing.",
+            "With the breathing rates entered, the team turns when {} does, after about {} min; the others have used less by then, so it is enough at up to {} × normal breathing.",
             names[i],
-            m.floor() as i64,
-            margin_for_display(check.margin)
+            super::shown::minutes(m),
+            super::shown::fixed(margin_for_display(check.margin), 2)
         ),
         _ => String::new(),
     }

@@ -1,10 +1,11 @@
 //! A team's planning inputs, in the team's own units, and their validation.
 
 use super::cylinders::{CylinderSet, CylinderSpec};
-use super::error::{InputError, check_range, fmt_num};
+use super::error::{InputError, check_range};
 use super::gas_model::ModelKind;
 use super::mix::Mix;
 use super::rule::Rule;
+use super::shown;
 use super::units::{Depth, Gauge, Pressure, PressureUnit, Temperature, UnitSystem, Water};
 use super::warning::{OVERFILL_SHARE, Supply, Warning};
 
@@ -206,7 +207,7 @@ fn fill_warning(
 ) {
     let (s, wp) = (g.value(start), g.value(working));
     // Shown figures: the start rounded down, the working pressure to the nearest unit.
-    let (start, working, unit) = ((s + 1e-9).floor(), wp.round(), g.unit);
+    let (start, working, unit) = (shown::whole_down(s), wp.round(), g.unit);
     if s > wp * (1.0 + OVERFILL_SHARE) + 1e-9 {
         out.push(Warning::Overfill {
             diver,
@@ -299,10 +300,12 @@ pub(crate) fn validate_cylinders(
                 return Err(InputError::new(
                     format!("{field}.rated_cuft"),
                     format!(
-                        "{} cu ft at {} psi means {:.1} L of water per cylinder; allowed {MIN_WATER_L} to {MAX_WATER_L} L",
-                        fmt_num(rated_cuft),
-                        fmt_num(rated_psi),
-                        w
+                        "{} cu ft at {} psi means {} L of water per cylinder; allowed {} to {} L",
+                        shown::num(rated_cuft),
+                        shown::num(rated_psi),
+                        shown::fixed(w, 1),
+                        shown::num(MIN_WATER_L),
+                        shown::num(MAX_WATER_L)
                     ),
                 ));
             }
@@ -403,8 +406,8 @@ pub fn validate_start(
             field,
             format!(
                 "{} {unit} is not a fill; a start pressure is at least one graduation ({} {unit})",
-                fmt_num((v * 100.0).floor() / 100.0),
-                fmt_num(g.step)
+                shown::num(shown::down(v, 2)),
+                shown::num(g.step)
             ),
         ));
     }
@@ -414,9 +417,9 @@ pub fn validate_start(
             field,
             format!(
                 "{} {unit} is more than 1.5 × the {} {unit} working pressure (limit {} {unit}): check the gauge and bar or psi",
-                fmt_num(v.round()),
-                fmt_num((g.value(working) * 10.0).floor() / 10.0),
-                fmt_num(g.value(Pressure::from_bar(cap)).floor())
+                shown::num(v.round()),
+                shown::num(shown::down(g.value(working), 1)),
+                shown::start(g.value(Pressure::from_bar(cap)))
             ),
         ));
     }
@@ -425,8 +428,8 @@ pub fn validate_start(
             field,
             format!(
                 "{} {unit} is above the highest pressure planned for ({} {unit})",
-                fmt_num(v.round()),
-                fmt_num(g.value(Pressure::from_bar(MAX_START_BAR)).floor())
+                shown::num(v.round()),
+                shown::start(g.value(Pressure::from_bar(MAX_START_BAR)))
             ),
         ));
     }

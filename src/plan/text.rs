@@ -70,6 +70,15 @@ pub fn shown(text: &str) -> String {
         .collect()
 }
 
+/// The first letter upper case, the rest as it is.
+pub fn first_upper(s: &str) -> String {
+    let mut c = s.chars();
+    match c.next() {
+        Some(f) => f.to_uppercase().collect::<String>() + c.as_str(),
+        None => String::new(),
+    }
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;

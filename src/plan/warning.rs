@@ -1,7 +1,8 @@
 //! Observations about a plan that do not stop it: typed values (which diver, which
 //! kind, the figures), put into words only where they are shown.
 
-use super::error::{first_upper, fmt_num};
+use super::shown;
+use super::text::first_upper;
 use super::units::PressureUnit;
 
 /// Which of a diver's gas supplies a warning is about.
@@ -115,8 +116,8 @@ impl Warning {
             } => format!(
                 "{} {} {u} is above the working pressure {} {u}; check the fill and the cylinder's rating.",
                 first_upper(supply.noun()),
-                fmt_num(start),
-                fmt_num(working),
+                shown::num(start),
+                shown::num(working),
                 u = unit.label()
             ),
             Warning::Overfill {
@@ -128,8 +129,8 @@ impl Warning {
             } => format!(
                 "Overfill: {} {} {u} is more than 10 % above the working pressure {} {u}. Check the cylinder is rated for it, or do not use it.",
                 supply.noun(),
-                fmt_num(start),
-                fmt_num(working),
+                shown::num(start),
+                shown::num(working),
                 u = unit.label()
             ),
             Warning::LowFill {
@@ -140,7 +141,7 @@ impl Warning {
             } => format!(
                 "{} {} {} is under half the working pressure; a low fill leaves little to share.",
                 first_upper(supply.noun()),
-                fmt_num(start),
+                shown::num(start),
                 unit.label()
             ),
             Warning::TurnEqualsStart { .. } => {

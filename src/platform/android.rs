@@ -1,5 +1,5 @@
 //! Android entry point: the same window as desktop, storage in app-private files,
-//! saves on lifecycle events. Everything it calls is covered by the desktop tests.
+//! the device locale's language, saves on lifecycle events. Everything it calls is covered by the desktop tests.
 
 use std::cell::RefCell;
 use std::rc::Rc;
@@ -25,6 +25,12 @@ fn lifecycle(event: &PollEvent<'_>) -> Lifecycle {
 #[unsafe(no_mangle)]
 fn android_main(app: slint::android::AndroidApp) {
     let dir = android_data_dir(app.internal_data_path());
+    // The device locale's language ("de", "pt"), from the activity's configuration.
+    let system_language = app
+        .config()
+        .language()
+        .and_then(|code| crate::i18n::from_tag(&code))
+        .unwrap_or_default();
     let session: Rc<
         RefCell<Option<(Rc<RefCell<Session>>, slint::Weak<crate::app::ui::AppWindow>)>>,
     > = Rc::new(RefCell::new(None));
@@ -47,6 +53,7 @@ fn android_main(app: slint::android::AndroidApp) {
     })
     .expect("Slint Android backend");
     let app = App::new(dir).expect("app window");
+    app.set_system_language(system_language);
     use slint::ComponentHandle;
     *session.borrow_mut() = Some((app.session.clone(), app.window.as_weak()));
     let _ = app.window.run();

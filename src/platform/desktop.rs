@@ -1,4 +1,5 @@
-//! The desktop start: the window over the desktop data directory, the text size from
+//! The desktop start: the window over the desktop data directory, the language from
+//! the environment (`TURNSHEET_LANG`, then gettext's order), the text size from
 //! `TURNSHEET_FONT_SCALE`, and a save when the window closes.
 
 use slint::ComponentHandle;
@@ -20,6 +21,7 @@ pub fn run() -> i32 {
             return 1;
         }
     };
+    app.set_system_language(crate::i18n::from_env(|k| std::env::var(k).ok()));
     if let Some(scale) = font_scale_from(std::env::var_os("TURNSHEET_FONT_SCALE").as_deref()) {
         app.set_font_scale(scale);
     }

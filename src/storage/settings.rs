@@ -7,7 +7,7 @@ use serde_json::{Map, Value};
 use super::atomic::{WithinLimits, one_line};
 
 use crate::plan::WATER_TEMP_RANGE_C;
-use crate::plan::error::fmt_num;
+use crate::plan::shown;
 use crate::plan::{PressureUnit, Rule, UnitSystem};
 
 pub const SETTINGS_SCHEMA: u32 = 1;
@@ -26,6 +26,10 @@ pub struct Settings {
     pub water_temp_c: f64,
     /// The cautions were read and acknowledged.
     pub cautions_acknowledged: bool,
+    /// The language chosen in Settings (a catalogue code such as "de"); none follows
+    /// the system's.
+    #[serde(default)]
+    pub language: Option<String>,
 }
 
 impl Default for Settings {
@@ -38,6 +42,7 @@ impl Default for Settings {
             rule: Rule::Thirds,
             water_temp_c: 20.0,
             cautions_acknowledged: false,
+            language: None,
         }
     }
 }
@@ -100,7 +105,11 @@ fn within(lo: f64, hi: f64, unit: &'static str) -> impl Fn(&f64) -> Result<(), S
         if x.is_finite() && (lo..=hi).contains(x) {
             Ok(())
         } else {
-            Err(format!("allowed {} to {} {unit}", fmt_num(lo), fmt_num(hi)))
+            Err(format!(
+                "allowed {} to {} {unit}",
+                shown::num(lo),
+                shown::num(hi)
+            ))
         }
     }
 }
@@ -151,6 +160,19 @@ impl Settings {
             any,
             &mut notes,
         );
+        let language = field(
+            &mut m,
+            "language",
+            None,
+            "the system's",
+            |code: &Option<String>| match code {
+                Some(c) if crate::i18n::Language::from_code(c).is_none() => {
+                    Err("not a language the app speaks".to_string())
+                }
+                _ => Ok(()),
+            },
+            &mut notes,
+        );
         for key in m.keys() {
             notes.push(format!("{}: not a setting; left out", one_line(key, 40)));
         }
@@ -162,6 +184,7 @@ impl Settings {
             rule,
             water_temp_c,
             cautions_acknowledged,
+            language,
         };
         (settings, notes)
     }

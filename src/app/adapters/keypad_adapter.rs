@@ -37,6 +37,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
             a.set_warning(k.warning.into());
             a.set_selected(k.selected);
             a.set_can_decimal(k.can_decimal);
+            a.set_decimal_mark(k.decimal_mark.into());
             a.set_can_step(k.can_step);
             a.set_step_text(k.step_text.into());
         }

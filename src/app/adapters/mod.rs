@@ -5,6 +5,7 @@ mod chart_adapter;
 mod fill_adapter;
 mod gauge_chooser_adapter;
 mod keypad_adapter;
+mod language_adapter;
 mod locker_adapter;
 mod nav_adapter;
 mod picker_adapter;
@@ -63,6 +64,7 @@ pub fn connect_all(ui: &AppWindow, s: &Shared) {
 }
 
 pub fn refresh_all(ui: &AppWindow, s: &Session) {
+    language_adapter::apply(s.language());
     nav_adapter::refresh(ui, s);
     team_adapter::refresh(ui, s);
     turns_adapter::refresh(ui, s);

@@ -25,6 +25,8 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
     let (w, st) = handles(ui, s);
     a.on_set_step(move |i| act(&w, &st, |x| x.set_default_step(i as usize)));
     let (w, st) = handles(ui, s);
+    a.on_set_language(move |i| act(&w, &st, |x| x.choose_language(i.max(0) as usize)));
+    let (w, st) = handles(ui, s);
     a.on_nudge_temp(move |d| act(&w, &st, |x| x.nudge_default_water_temp(d)));
     let (w, st) = handles(ui, s);
     a.on_edit_temp(move || act(&w, &st, |x| x.open_entry(EntryTarget::DefaultWaterTemp)));
@@ -45,6 +47,8 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
     a.set_water_temp(v.water_temp.into());
     a.set_cautions(strings(vm::cautions()));
     a.set_about(v.about.into());
+    a.set_language_options(strings(v.language_options));
+    a.set_language_index(v.language_index);
     ui.global::<CautionsAdapter>()
         .set_cautions(strings(vm::cautions()));
 }

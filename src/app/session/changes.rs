@@ -9,8 +9,8 @@ use crate::plan::{Rule, TeamPlan};
 use crate::storage::team_state::TeamState;
 
 use super::super::team_controller::TeamController;
-use super::super::view_models::turn_text;
 use super::{Prompt, Session};
+use crate::plan::shown;
 
 /// The team before a change and the turns it showed (None while turns were hidden).
 pub(super) struct Before {
@@ -25,7 +25,7 @@ fn turns_of(plan: &TeamPlan) -> Vec<(String, String)> {
         .map(|d| {
             (
                 d.name.clone(),
-                format!("{} {}", turn_text(d.turn_shown_value), d.gauge.label()),
+                format!("{} {}", shown::turn(d.turn_shown_value), d.gauge.label()),
             )
         })
         .collect()

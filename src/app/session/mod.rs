@@ -28,6 +28,7 @@ mod custom_set;
 mod dives;
 mod entry;
 mod gauge_chooser;
+mod language;
 mod locker_actions;
 mod locker_exchange;
 mod mix_picker;
@@ -84,6 +85,8 @@ pub struct Session {
     pub prompt: Prompt,
     /// Where locker exports go and imports come from.
     pub exchange: Exchange,
+    /// The system's language (the platform says; English until it does).
+    pub system_language: crate::i18n::Language,
 }
 
 impl Session {
@@ -149,6 +152,7 @@ impl Session {
             pending_change: None,
             unsaved: Unsaved::default(),
             prompt: Prompt::None,
+            system_language: crate::i18n::Language::English,
         };
         if settings_repaired {
             session.save_settings();

@@ -70,7 +70,7 @@ impl Session {
             Prompt::LooseRule(rule) => Some((
                 format!(
                     "{} is an open-water rule: it keeps no gas to bring a teammate out of an overhead. Every turn goes down. Keep the rule of {}?",
-                    crate::plan::error::first_upper(rule.name()),
+                    crate::plan::text::first_upper(rule.name()),
                     self.team.input().rule.name()
                 ),
                 vec![

@@ -52,7 +52,7 @@ impl Session {
                 |s| {
                     format!(
                         "Gauge step now {} {}",
-                        crate::plan::error::fmt_num(step),
+                        crate::plan::shown::num(step),
                         s.units().pressure_label()
                     )
                 },

@@ -5,8 +5,8 @@ use crate::plan::{PairChart, pair_chart, starts_around};
 use crate::plan::{Pressure, TeamInput, Temperature, UnitSystem};
 use crate::plan::{TemperatureChange, pressure_after_temperature_change};
 
-use super::super::view_models::whole_down;
 use super::Session;
+use crate::plan::shown::whole_down;
 
 /// The fill-to-water check: a fill pressure and the temperature at the fill station,
 /// for one diver's gas.
@@ -153,7 +153,7 @@ impl Session {
             let g = self.team.input().gauge_of(d);
             self.status.push(format!(
                 "The start of {name} is now the prediction, {} {}, marked \"predicted\" until the gauge is read in the water.",
-                crate::plan::error::fmt_num(g.value(start)),
+                crate::plan::shown::num(g.value(start)),
                 g.label()
             ));
         }

@@ -1,7 +1,7 @@
 //! The open keypad: what it is for, what was typed and why it cannot be used yet.
 
 use super::super::session::{EntryTarget, Session};
-use crate::plan::error::fmt_num;
+use crate::plan::shown;
 use crate::plan::{Supply, Warning};
 
 pub struct KeypadVm {
@@ -16,6 +16,8 @@ pub struct KeypadVm {
     /// The opening value is selected: the first key replaces it.
     pub selected: bool,
     pub can_decimal: bool,
+    /// The decimal key's face: the separator of the language shown ("." or ",").
+    pub decimal_mark: String,
     /// The field has ± gauge-step buttons.
     pub can_step: bool,
     /// The gauge step on the ± buttons; empty when the field has none.
@@ -34,8 +36,9 @@ pub fn keypad(s: &Session) -> Option<KeypadVm> {
         warning: entry_warnings(s, e.target()).join(" "),
         selected: e.buffer().is_selected(),
         can_decimal: e.buffer().allows_decimal(),
+        decimal_mark: shown::decimal().mark().to_string(),
         can_step: e.step().is_some(),
-        step_text: e.step().map(fmt_num).unwrap_or_default(),
+        step_text: e.step().map(shown::num).unwrap_or_default(),
     })
 }
 

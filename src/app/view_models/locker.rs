@@ -1,7 +1,7 @@
 //! The cylinder locker and its editor.
 
 use super::super::session::Session;
-use crate::plan::error::fmt_num;
+use crate::plan::shown;
 use crate::plan::{CylinderSpec, Material, ModelKind, Preset, presets};
 
 pub struct LockerRowVm {
@@ -62,7 +62,7 @@ pub fn locker_edit(s: &Session) -> Option<LockerEditVm> {
     let d = s.locker.draft()?;
     let specs = d.field_specs();
     let with_unit = |v: Option<f64>, unit: &str| {
-        v.map(|v| format!("{} {unit}", fmt_num(v)))
+        v.map(|v| format!("{} {unit}", shown::num(v)))
             .unwrap_or_default()
     };
     Some(LockerEditVm {
@@ -89,7 +89,11 @@ pub fn locker_edit(s: &Session) -> Option<LockerEditVm> {
             .to_set()
             .map(|set| {
                 let w = set.water(ModelKind::Real).litres();
-                format!("{} · {:.1} L of water in all", set.describe(), w)
+                format!(
+                    "{} · {} L of water in all",
+                    set.describe(),
+                    crate::plan::shown::fixed(w, 1)
+                )
             })
             .unwrap_or_default(),
     })
@@ -106,8 +110,9 @@ pub fn preset_rows() -> Vec<(String, String)> {
 /// (litres at bar) or its rating (cu ft at psi, with the water that gives it), which the
 /// diver checks against the cylinder in hand.
 pub fn preset_detail(p: &Preset) -> String {
-    let each =
-        |a: f64, ua: &str, b: f64, ub: &str| format!("{} {ua} at {} {ub}", fmt_num(a), fmt_num(b));
+    let each = |a: f64, ua: &str, b: f64, ub: &str| {
+        format!("{} {ua} at {} {ub}", shown::num(a), shown::num(b))
+    };
     match p.set.spec {
         CylinderSpec::Stamped {
             water_l,
@@ -124,7 +129,7 @@ pub fn preset_detail(p: &Preset) -> String {
             "{} · each {} ({} L water)",
             p.material.name(),
             each(rated_cuft, "cu ft", rated_psi, "psi"),
-            fmt_num(
+            shown::num(
                 (p.set.spec.water_per_cylinder(ModelKind::Real).litres() * 10.0).round() / 10.0
             )
         ),

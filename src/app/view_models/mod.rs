@@ -1,13 +1,14 @@
-//! Formatting the session for the views: every number a person reads is rounded and
-//! written here, toward safety: turn pressures up, start pressures and gas down,
-//! times down. Adapters copy these texts into the Slint globals and do no arithmetic.
+//! Formatting the session for the views: the words around the numbers. Every number
+//! a person reads is rounded and written by the core's `plan::shown` (turn pressures
+//! up, start pressures and gas down, times down, the decimal separator). Adapters copy these texts into the Slint globals and do no arithmetic.
 //!
 //! `mod.rs` has the number helpers; the pages' view models are in `team.rs`,
 //! `turns.rs`, `tools.rs` (fill check, chart), `locker.rs` (locker),
 //! `pickers.rs` (cylinder and mix pickers),
 //! `settings.rs` and `keypad.rs`.
 
-use crate::plan::error::{first_upper, fmt_num};
+use crate::plan::shown;
+use crate::plan::text::first_upper;
 use crate::plan::{Depth, Gauge, Pressure, Rule, Temperature, UnitSystem, Volume};
 
 use super::team_controller::step_options;
@@ -33,9 +34,6 @@ pub use turns::{
     TurnRowVm, buddy_heading, controllers, first_text, margin_text, pressure_unit, rule_head,
     rule_text, stage_text, starts_blocking, turn_rows, warnings,
 };
-
-/// Float noise tolerated when a value is read as whole units.
-const NOISE: f64 = 1e-6;
 
 /// Units that must stay on the line of their number.
 const UNITS: [&str; 12] = [
@@ -71,33 +69,14 @@ pub fn keep_units_together(text: &str) -> String {
     out
 }
 
-/// A value rounded down to a whole unit, counting float noise just below a whole
-/// number as that number (a gauge reading of 217.9999999 bar is 218).
-pub fn whole_down(value: f64) -> f64 {
-    (value + NOISE).floor()
-}
-
-/// A value rounded up to a whole unit, counting float noise just above a whole number
-/// as that number.
-pub fn whole_up(value: f64) -> f64 {
-    (value - NOISE).ceil()
-}
-
-/// A shown turn pressure: already on the diver's graduation, written as the gauge reads
-/// it (162.5 on a 2.5 bar graduation, as the CLI and the card write it); anything finer
-/// than a hundredth is float noise, rounded up.
-pub fn turn_text(value: f64) -> String {
-    crate::plan::error::fmt_num(((value - NOISE) * 100.0).ceil() / 100.0)
-}
-
 /// A start pressure as read: rounded down.
 pub fn start_text(u: UnitSystem, p: Pressure) -> String {
-    format!("{}", whole_down(u.pressure_value(p)) as i64)
+    shown::start(u.pressure_value(p))
 }
 
 /// A pressure as read on a diver's gauge: rounded down, in the gauge's unit.
 pub fn reading(g: Gauge, p: Pressure) -> String {
-    format!("{}", whole_down(g.value(p)) as i64)
+    shown::start(g.value(p))
 }
 
 /// A pressure rounded down, with its unit: "232 bar".
@@ -107,7 +86,7 @@ pub fn pressure_down_text(u: UnitSystem, p: Pressure) -> String {
 
 /// A temperature to the nearest degree, without its unit.
 pub fn degrees(u: UnitSystem, t: Temperature) -> String {
-    fmt_num(u.temperature_value(t).round())
+    shown::degrees(u.temperature_value(t))
 }
 
 /// A temperature to the nearest degree, with its unit: "12 °C".
@@ -117,21 +96,17 @@ pub fn temperature_text(u: UnitSystem, t: Temperature) -> String {
 
 /// A volume rounded down to a whole litre or cubic foot, with its unit.
 pub fn volume_down_text(u: UnitSystem, v: Volume) -> String {
-    format!(
-        "{} {}",
-        fmt_num(u.volume_value(v).floor()),
-        u.volume_label()
-    )
+    format!("{} {}", shown::start(u.volume_value(v)), u.volume_label())
 }
 
 /// A breathing rate in the team's unit, to two decimals at most.
 pub fn rate_text(u: UnitSystem, litres_per_min: f64) -> String {
-    fmt_num((u.volume_value(Volume::from_litres(litres_per_min)) * 100.0).round() / 100.0)
+    shown::num((u.volume_value(Volume::from_litres(litres_per_min)) * 100.0).round() / 100.0)
 }
 
 /// A depth as typed: metres as they are, feet as they are (the keypad shows both exactly).
 pub fn depth_value(u: UnitSystem, d: Depth) -> String {
-    fmt_num(match u {
+    shown::num(match u {
         UnitSystem::Metric => d.metres(),
         UnitSystem::Imperial => d.feet(),
     })
@@ -143,7 +118,7 @@ pub fn depth_text(d: Option<Depth>, u: UnitSystem) -> String {
         None => "Depth —".to_string(),
         Some(d) => format!(
             "{} {}",
-            fmt_num(match u {
+            shown::num(match u {
                 UnitSystem::Metric => d.metres(),
                 UnitSystem::Imperial => d.feet().round(),
             }),
@@ -156,7 +131,7 @@ pub fn depth_text(d: Option<Depth>, u: UnitSystem) -> String {
 pub fn step_labels(u: UnitSystem) -> Vec<String> {
     step_options(u)
         .iter()
-        .map(|s| format!("{} {}", fmt_num(*s), u.pressure_label()))
+        .map(|s| format!("{} {}", shown::num(*s), u.pressure_label()))
         .collect()
 }
 
@@ -233,11 +208,7 @@ mod tests {
     }
 
     #[test]
-    fn display_rounding_is_conservative() {
-        assert_eq!(turn_text(150.0000001), "150");
-        assert_eq!(turn_text(149.9999999), "150");
-        assert_eq!(turn_text(162.5), "162.5", "a 2.5 bar graduation");
-        assert_eq!(turn_text(162.501), "162.51", "never below the value");
+    fn shown_pressures_round_toward_safety() {
         assert_eq!(
             start_text(UnitSystem::Metric, Pressure::from_bar(217.9)),
             "217"
@@ -246,14 +217,8 @@ mod tests {
             start_text(UnitSystem::Imperial, Pressure::from_psi(3000.0)),
             "3000"
         );
-    }
-
-    #[test]
-    fn whole_units_tolerate_float_noise() {
-        assert_eq!(whole_down(217.999_999_9), 218.0);
-        assert_eq!(whole_down(217.9), 217.0);
-        assert_eq!(whole_up(150.000_000_1), 150.0);
-        assert_eq!(whole_up(150.2), 151.0);
+        let v = volume_down_text(UnitSystem::Metric, Volume::from_litres(4237.9));
+        assert_eq!(v, "4237 L");
     }
 
     #[test]
@@ -271,7 +236,7 @@ mod tests {
 
 /// A gauge as the card's button shows it: "bar · 10".
 pub fn gauge_text(g: Gauge) -> String {
-    format!("{} · {}", g.label(), fmt_num(g.step))
+    format!("{} · {}", g.label(), shown::num(g.step))
 }
 
 /// An input error in words for a person: the diver's name and the field in plain words

@@ -4,8 +4,9 @@
 use super::super::session::{Picker, Session};
 use super::locker::preset_detail;
 use crate::plan::ModelKind;
-use crate::plan::error::{first_upper, fmt_num};
 use crate::plan::presets;
+use crate::plan::shown;
+use crate::plan::text::first_upper;
 
 /// Quick mixes per row: four fit a 360 px phone at 64 px or more each.
 const MIXES_PER_ROW: usize = 4;
@@ -140,15 +141,15 @@ fn custom(s: &Session) -> Option<CustomVm> {
     };
     let [a, b] = set.field_specs();
     let value = |v: Option<f64>, unit: &str| {
-        v.map(|v| format!("{} {unit}", fmt_num(v)))
+        v.map(|v| format!("{} {unit}", shown::num(v)))
             .unwrap_or_else(|| "—".to_string())
     };
     let (summary, problem) = match set.to_set() {
         Ok(c) => (
             format!(
-                "{} · {:.1} L of water in all",
+                "{} · {} L of water in all",
                 set.label(&c),
-                c.water(ModelKind::Real).litres()
+                crate::plan::shown::fixed(c.water(ModelKind::Real).litres(), 1)
             ),
             String::new(),
         ),

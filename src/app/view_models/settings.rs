@@ -3,6 +3,7 @@
 use super::super::cautions::CAUTIONS;
 use super::super::session::Session;
 use super::{rule_index, step_index, step_labels, temperature_text};
+use crate::i18n::{Language, tr_with};
 use crate::plan::{Temperature, UnitSystem};
 
 pub struct SettingsVm {
@@ -12,6 +13,9 @@ pub struct SettingsVm {
     pub step_index: i32,
     pub water_temp: String,
     pub about: String,
+    /// "System (Deutsch)", then each language in its own name.
+    pub language_options: Vec<String>,
+    pub language_index: i32,
 }
 
 pub fn settings(s: &Session) -> SettingsVm {
@@ -22,6 +26,13 @@ pub fn settings(s: &Session) -> SettingsVm {
         step_options: step_labels(cfg.units),
         step_index: step_index(cfg.units, cfg.gauge_step()),
         water_temp: temperature_text(cfg.units, Temperature::from_celsius(cfg.water_temp_c)),
+        language_options: std::iter::once(tr_with(
+            "System ({0})",
+            &[&s.system_language.own_name()],
+        ))
+        .chain(Language::ALL.iter().map(|l| l.own_name().to_string()))
+        .collect(),
+        language_index: s.language_choice() as i32,
         about: format!(
             "Turnsheet {} · free software under the GNU GPL, version 3 or later · built with Slint {} (used under its GPL-3.0 licence) · real-gas contents by GERG-2008 (the aga8 crate) · Roboto fonts under the Apache License 2.0 · data in {}",
             env!("CARGO_PKG_VERSION"),

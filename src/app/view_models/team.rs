@@ -3,11 +3,11 @@
 use super::super::session::Session;
 use super::{
     depth_text, gauge_text, rate_text, reading, rule_index, rule_warning, step_index, step_labels,
-    temperature_text, turn_text,
+    temperature_text,
 };
 use crate::app::readings::{StartStatus, when_text};
 use crate::plan::Water;
-use crate::plan::error::fmt_num;
+use crate::plan::shown;
 
 /// The Team page besides the cards.
 pub struct TeamPageVm {
@@ -176,7 +176,7 @@ pub fn team_summary(s: &Session) -> String {
             format!(
                 "{} {} {}",
                 d.name,
-                turn_text(d.turn_shown_value),
+                crate::plan::shown::turn(d.turn_shown_value),
                 d.gauge.label()
             )
         })
@@ -257,8 +257,8 @@ pub fn gauge_chooser(s: &Session) -> Option<GaugeChooserVm> {
             .iter()
             .map(|g| {
                 (
-                    format!("{}, {} {} steps", g.label(), fmt_num(g.step), g.label()),
-                    format!("gauge {} {}", g.label(), fmt_num(g.step)),
+                    format!("{}, {} {} steps", g.label(), shown::num(g.step), g.label()),
+                    format!("gauge {} {}", g.label(), shown::num(g.step)),
                     *g == now,
                 )
             })

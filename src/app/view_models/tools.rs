@@ -1,9 +1,10 @@
 //! The fill-to-water check and the pairing chart.
 
 use super::super::session::Session;
-use super::{pressure_down_text, temperature_text, whole_down};
+use super::{pressure_down_text, temperature_text};
 use crate::plan::Warning;
-use crate::plan::error::fmt_num;
+use crate::plan::shown;
+use crate::plan::shown::whole_down;
 
 pub struct FillVm {
     pub diver: String,
@@ -41,21 +42,21 @@ pub fn fill(s: &Session) -> FillVm {
         fill_pressure: pressure_down_text(u, s.fill.pressure),
         fill_temp: temperature_text(u, s.fill.temperature),
         water_temp: temperature_text(u, input.water_temp),
-        result: fmt_num(real),
+        result: shown::num(real),
         unit: pu.to_string(),
         detail: if dt.abs() < 0.5 {
             "Filled at water temperature: no change expected.".to_string()
         } else {
             format!(
                 "Real gas: {} {pu} per {} of temperature change; the ideal gas law would say {} {pu}.",
-                fmt_num(((fill - real) / dt * 10.0).round() / 10.0),
+                shown::num(((fill - real) / dt * 10.0).round() / 10.0),
                 tu,
-                fmt_num(ideal)
+                shown::num(ideal)
             )
         },
         use_text: format!(
             "Plan with {} {pu} for {} until the gauge is read in the water",
-            fmt_num(real),
+            shown::num(real),
             d.name
         ),
         warning: {
@@ -146,17 +147,17 @@ pub fn chart(s: &Session) -> Option<ChartVm> {
         teammate: input.divers[chart.buddy].name.clone(),
         unit: chart.my_gauge.label().to_string(),
         column_unit: chart.buddy_gauge.label().to_string(),
-        columns: chart.buddy_starts.iter().map(|v| fmt_num(*v)).collect(),
+        columns: chart.buddy_starts.iter().map(|v| shown::num(*v)).collect(),
         planned_column: their_col.map(|c| c as i32).unwrap_or(-1),
         rows: chart
             .my_starts
             .iter()
             .enumerate()
             .map(|(r, v)| ChartRowVm {
-                start: fmt_num(*v),
+                start: shown::num(*v),
                 cells: chart.turns[r]
                     .iter()
-                    .map(|c| c.map(fmt_num).unwrap_or_else(|| "–".into()))
+                    .map(|c| c.map(shown::turn).unwrap_or_else(|| "–".into()))
                     .collect(),
                 planned: Some(r) == my_row,
             })

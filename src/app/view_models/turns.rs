@@ -2,8 +2,9 @@
 //! rule line, the stress margin and who turns first.
 
 use super::super::session::Session;
-use super::{gauge_text, reading, temperature_text, turn_text};
+use super::{gauge_text, reading, temperature_text};
 use crate::app::readings::{StartStatus, when_text};
+use crate::plan::shown::turn as turn_text;
 use crate::plan::{
     allowance_sentence, allowance_source_sentence, allowance_sources, hand_working, turn_how,
     turn_sentence,
@@ -216,7 +217,7 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
                 minutes: match (ready, d.minutes_to_turn) {
                     (true, Some(m)) => format!(
                         "About {} min to turn at the planned depth",
-                        m.floor() as i64
+                        crate::plan::shown::minutes(m)
                     ),
                     _ => String::new(),
                 },
@@ -310,7 +311,7 @@ pub fn first_text(s: &Session) -> String {
         Some(i) => format!(
             "{} reaches turn first, after about {} min.",
             plan.divers[i].name,
-            plan.divers[i].minutes_to_turn.unwrap_or(0.0).floor() as i64
+            crate::plan::shown::minutes(plan.divers[i].minutes_to_turn.unwrap_or(0.0))
         ),
         None => String::new(),
     }

@@ -5,7 +5,8 @@
 
 use crate::app::keypad::KeypadBuffer;
 use crate::app::view_models as vm;
-use crate::plan::error::{InputError, check_range, fmt_num};
+use crate::plan::error::{InputError, check_range};
+use crate::plan::shown;
 use crate::plan::validate_start;
 use crate::plan::{Pressure, PressureUnit, Volume};
 
@@ -143,7 +144,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             Field {
                 buffer: KeypadBuffer::digits(
                     &litres
-                        .map(|l| fmt_num(u.volume_value(l)))
+                        .map(|l| shown::num(u.volume_value(l)))
                         .unwrap_or_default(),
                     true,
                 ),

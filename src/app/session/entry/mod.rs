@@ -6,8 +6,9 @@
 
 use crate::app::keypad::{KeypadBuffer, parse_value};
 use crate::app::view_models as vm;
-use crate::plan::error::{InputError, fmt_num};
+use crate::plan::error::InputError;
 use crate::plan::next_step;
+use crate::plan::shown;
 
 use super::Session;
 
@@ -141,7 +142,7 @@ impl Session {
             ("+step" | "-step", Some(step)) => {
                 let dir = if key == "+step" { 1 } else { -1 };
                 let v = buffer.value().unwrap_or(0.0);
-                buffer.set_text(fmt_num(next_step(v, step, dir).max(0.0)));
+                buffer.set_text(shown::num(next_step(v, step, dir).max(0.0)));
             }
             ("+step" | "-step", None) => {}
             _ => buffer.press(key),

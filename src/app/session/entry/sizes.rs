@@ -4,7 +4,8 @@
 
 use crate::app::keypad::KeypadBuffer;
 use crate::app::view_models as vm;
-use crate::plan::error::{check_range, fmt_num};
+use crate::plan::error::check_range;
+use crate::plan::shown;
 
 use super::super::{Picker, Session};
 use super::{EntryTarget, Field, apply, check};
@@ -27,7 +28,7 @@ fn size_field(
     let (caption, unit, _, _) = now[which];
     Field {
         buffer: KeypadBuffer::digits(
-            &value.map(fmt_num).unwrap_or_default(),
+            &value.map(shown::num).unwrap_or_default(),
             unit == "L" || unit == "cu ft",
         ),
         title: format!("{title}{} ({unit})", vm::capitalised(caption)),

@@ -163,7 +163,7 @@ fn a_physical_keyboard_types_into_the_open_keypad() {
     let g = s.team.input().gauge_of(0);
     assert_eq!(
         s.entry.as_ref().unwrap().buffer().text(),
-        fmt_num(crate::plan::next_step(215.0, g.step, -1))
+        shown::num(crate::plan::next_step(215.0, g.step, -1))
     );
     assert!(s.keyboard("\n"));
     assert!(s.entry.is_none(), "Enter is Done");
