@@ -238,7 +238,7 @@ fn bad_import_files_are_refused_and_change_nothing() {
     let before = std::fs::read(d.path().join("locker.json")).unwrap();
     let src = tempfile::tempdir().unwrap();
     let nested = format!("{}{}", "[".repeat(200_000), "]".repeat(200_000));
-    let many: Vec<serde_json::Value> = (0..201)
+    let many: Vec<serde_json::Value> = (0..=turnsheet::storage::locker::MAX_LOCKER_SETS)
         .map(|i| {
             serde_json::json!({"id": i, "name": format!("S{i}"),
                 "cylinders": {"count": 1, "water_l": 12, "working_bar": 232}})
@@ -268,7 +268,7 @@ fn bad_import_files_are_refused_and_change_nothing() {
         (
             "many",
             serde_json::to_vec(&serde_json::json!({"schema": 1, "entries": many})).unwrap(),
-            "at most 200",
+            "at most 500",
         ),
     ];
     for (name, bytes, why) in cases {

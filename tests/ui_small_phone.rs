@@ -12,7 +12,8 @@
 //! - the open keypad (field, message, keys, Cancel and Done) fits inside the window, so
 //!   nothing is hidden behind it or below it.
 //!
-//! Each state is also drawn to `target/small-phone/NAME.png` to look at.
+//! The walk runs in every language the app speaks (German and French words are the
+//! longest). Each state is also drawn to `target/small-phone/LANG-NAME.png` to look at.
 
 mod layout_check;
 
@@ -24,6 +25,7 @@ use turnsheet::app::App;
 use turnsheet::app::adapters::refresh_all;
 use turnsheet::app::nav::Screen;
 use turnsheet::app::session::{EntryTarget, Session};
+use turnsheet::i18n::Language;
 
 const W: f32 = 360.0;
 const H: f32 = 640.0;
@@ -65,7 +67,8 @@ fn elements(app: &App) -> Vec<(String, AccessibleRole, f32, f32, f32, f32)> {
         .collect()
 }
 
-/// What the open keypad shows: its field and message, keys, Cancel and Done.
+/// What the open keypad shows: its field and message, keys, Cancel and Done (their
+/// names in the language on screen).
 fn on_keypad(label: &str) -> bool {
     let key = label.chars().count() == 1;
     key || [
@@ -80,7 +83,8 @@ fn on_keypad(label: &str) -> bool {
         "minus one step",
         "plus one step",
     ]
-    .contains(&label)
+    .iter()
+    .any(|name| turnsheet::i18n::tr(name) == label)
 }
 
 /// The problems of the state on screen, each naming the element. With `keypad`, the
@@ -178,8 +182,27 @@ fn the_check_names_each_kind_of_fault() {
 #[test]
 fn every_page_works_on_a_small_phone_with_large_text() {
     software_backend();
+    walk(Language::English);
+}
+
+/// German and French words are the longest; every language gets the same walk.
+#[test]
+fn every_language_works_on_a_small_phone_with_large_text() {
+    software_backend();
+    for l in Language::ALL
+        .into_iter()
+        .filter(|l| *l != Language::English)
+    {
+        walk(l);
+    }
+}
+
+/// Every page and overlay in `language`, at 360 × 640 with text at 1.3.
+fn walk(language: Language) {
     let dir = tempfile::tempdir().unwrap();
     let app = App::new(dir.path()).unwrap();
+    app.set_system_language(language);
+    let code = language.code();
     app.set_font_scale(SCALE);
     app.window.window().set_size(slint::LogicalSize::new(W, H));
     app.window.show().unwrap();
@@ -187,6 +210,7 @@ fn every_page_works_on_a_small_phone_with_large_text() {
     let mut all = Vec::new();
     let mut seen = 0;
     let mut state = |name: &str, keypad: bool, f: &dyn Fn(&mut Session)| {
+        let name = &format!("{code}-{name}");
         f(&mut app.session.borrow_mut());
         refresh_all(&app.window, &app.session.borrow());
         save_png(&app, name);
@@ -262,6 +286,7 @@ fn every_page_works_on_a_small_phone_with_large_text() {
         .window()
         .set_size(slint::LogicalSize::new(W, 5000.0));
     let mut tall = |name: &str, f: &dyn Fn(&mut Session)| {
+        let name = &format!("{code}-{name}");
         f(&mut app.session.borrow_mut());
         refresh_all(&app.window, &app.session.borrow());
         all.extend(problems(&app, name, false));

@@ -1,0 +1,156 @@
+//! Every language on screen, through the real toolkit: a diver whose phone speaks
+//! Spanish, French, German, Italian or Portuguese reads the starts in with the keypad
+//! in their own words, and the turn card shows the same turns as the plan, its lines in
+//! their language and its decimals with a comma.
+
+use std::rc::Rc;
+
+use i_slint_backend_testing::ElementHandle;
+use turnsheet::app::App;
+use turnsheet::app::clock::ManualClock;
+use turnsheet::app::view_models::turn_rows;
+use turnsheet::i18n::{Language, LanguageScope, tr, tr_with};
+use turnsheet::plan::shown;
+
+/// 3 December 2026, 09:42 UTC.
+const MORNING: i64 = 1_796_463_720;
+
+fn find(app: &App, label: &str) -> ElementHandle {
+    let v: Vec<_> = ElementHandle::find_by_accessible_label(&app.window, label).collect();
+    assert_eq!(
+        v.len(),
+        1,
+        "one element labelled {label:?}, found {}",
+        v.len()
+    );
+    v.into_iter().next().unwrap()
+}
+
+fn press(app: &App, label: &str) {
+    find(app, label).invoke_accessible_default_action();
+}
+
+fn value(app: &App, label: &str) -> String {
+    find(app, label)
+        .accessible_value()
+        .unwrap_or_default()
+        .replace('\u{a0}', " ")
+}
+
+/// Long enough for every button to count taps again (the 0.4 s tap guard).
+fn settle() {
+    slint::platform::update_timers_and_animations();
+    i_slint_backend_testing::mock_elapsed_time(std::time::Duration::from_millis(500));
+    slint::platform::update_timers_and_animations();
+}
+
+/// A decimal number written with `mark` ("54.4", "54,4").
+fn has_decimal(text: &str, mark: char) -> bool {
+    let c: Vec<char> = text.chars().collect();
+    c.windows(3)
+        .any(|w| w[0].is_ascii_digit() && w[1] == mark && w[2].is_ascii_digit())
+}
+
+fn open(dir: &std::path::Path, l: Language) -> App {
+    i_slint_backend_testing::init_no_event_loop();
+    let app = App::with_clock(dir, Rc::new(ManualClock::at(MORNING))).unwrap();
+    app.window
+        .window()
+        .set_size(slint::LogicalSize::new(412.0, 915.0));
+    app.set_system_language(l);
+    press(&app, &tr("acknowledge cautions"));
+    settle();
+    app
+}
+
+/// Each diver's start, typed on the keypad as read on the gauge.
+fn read_starts(app: &App) {
+    let names = app.session.borrow().team.plan().names();
+    for (i, n) in names.iter().enumerate() {
+        let start = {
+            let s = app.session.borrow();
+            let g = s.team.input().gauge_of(i);
+            g.value(s.team.input().divers[i].start).floor()
+        };
+        press(app, &tr_with("start pressure of {0}", &[n]));
+        for c in format!("{start}").chars() {
+            press(app, &c.to_string());
+        }
+        press(app, &tr("done"));
+        settle();
+    }
+}
+
+#[test]
+fn a_turn_card_reads_in_every_language() {
+    for l in Language::ALL {
+        let dir = tempfile::tempdir().unwrap();
+        let app = open(dir.path(), l);
+        read_starts(&app);
+        press(&app, &tr("show turns"));
+        settle();
+        let names = app.session.borrow().team.plan().names();
+        let english = {
+            let _en = LanguageScope::new(Language::English);
+            turn_rows(&app.session.borrow())
+        };
+        for (i, n) in names.iter().enumerate() {
+            // The turn is the plan's, whatever the language.
+            let d = &app.session.borrow().team.plan().divers[i];
+            let want = format!("{} {}", shown::turn(d.turn_shown_value), d.gauge.label());
+            assert_eq!(value(&app, &tr_with("turn of {0}", &[n])), want, "{l:?}");
+
+            let how = value(&app, &tr_with("how the turn of {0} was found", &[n]));
+            assert!(!how.is_empty(), "{l:?}: no line on how the turn was found");
+            if l != Language::English {
+                assert_ne!(
+                    how,
+                    english[i].how.replace('\u{a0}', " "),
+                    "{l:?}: English words"
+                );
+            }
+
+            // The pencil sums, one tap away, write decimals as the language does.
+            press(&app, &tr_with("sums of {0}", &[n]));
+            settle();
+            let sums = value(&app, &tr_with("hand check of {0}", &[n]));
+            let en_sums = english[i].sums.replace('\u{a0}', " ");
+            assert!(
+                has_decimal(&en_sums, '.'),
+                "the demo team's sums show a decimal: {en_sums}"
+            );
+            let (mark, other) = match l {
+                Language::English => ('.', ','),
+                _ => (',', '.'),
+            };
+            assert!(has_decimal(&sums, mark), "{l:?}: {sums}");
+            assert!(!has_decimal(&sums, other), "{l:?}: {sums}");
+            if l != Language::English {
+                assert_ne!(sums, en_sums, "{l:?}: the sums' words are English");
+            }
+        }
+    }
+}
+
+#[test]
+fn the_settings_choice_overrides_the_system_language() {
+    let dir = tempfile::tempdir().unwrap();
+    let app = open(dir.path(), Language::French);
+    // The French screen names the choice in French; German is chosen by its own name.
+    use slint::ComponentHandle;
+    let rows = app.session.borrow().language_choice();
+    assert_eq!(rows, 0, "follows the system at first");
+    app.window
+        .global::<turnsheet::app::ui::Nav>()
+        .invoke_go(turnsheet::app::ui::Page::Settings);
+    settle();
+    press(&app, &format!("{} Deutsch", tr("language")));
+    settle();
+    assert_eq!(turnsheet::i18n::language(), Language::German);
+    assert_eq!(shown::num(157.5), "157,5");
+    // Kept for the next start, over the system's language.
+    drop(app);
+    let again = App::with_clock(dir.path(), Rc::new(ManualClock::at(MORNING))).unwrap();
+    again.set_system_language(Language::Italian);
+    assert_eq!(again.session.borrow().language(), Language::German);
+}
