@@ -6,6 +6,7 @@
 use std::rc::Rc;
 
 use i_slint_backend_testing::ElementHandle;
+use slint::ComponentHandle;
 use turnsheet::app::App;
 use turnsheet::app::clock::ManualClock;
 use turnsheet::app::view_models::turn_rows;
@@ -51,12 +52,12 @@ fn has_decimal(text: &str, mark: char) -> bool {
         .any(|w| w[0].is_ascii_digit() && w[1] == mark && w[2].is_ascii_digit())
 }
 
+/// Tall enough that every card is laid out (lists build only what is on screen).
 fn open(dir: &std::path::Path, l: Language) -> App {
-    i_slint_backend_testing::init_no_event_loop();
     let app = App::with_clock(dir, Rc::new(ManualClock::at(MORNING))).unwrap();
     app.window
         .window()
-        .set_size(slint::LogicalSize::new(412.0, 915.0));
+        .set_size(slint::LogicalSize::new(412.0, 4000.0));
     app.set_system_language(l);
     press(&app, &tr("acknowledge cautions"));
     settle();
@@ -83,6 +84,7 @@ fn read_starts(app: &App) {
 
 #[test]
 fn a_turn_card_reads_in_every_language() {
+    i_slint_backend_testing::init_no_event_loop();
     for l in Language::ALL {
         let dir = tempfile::tempdir().unwrap();
         let app = open(dir.path(), l);
@@ -96,8 +98,11 @@ fn a_turn_card_reads_in_every_language() {
         };
         for (i, n) in names.iter().enumerate() {
             // The turn is the plan's, whatever the language.
-            let d = &app.session.borrow().team.plan().divers[i];
-            let want = format!("{} {}", shown::turn(d.turn_shown_value), d.gauge.label());
+            let want = {
+                let s = app.session.borrow();
+                let d = &s.team.plan().divers[i];
+                format!("{} {}", shown::turn(d.turn_shown_value), d.gauge.label())
+            };
             assert_eq!(value(&app, &tr_with("turn of {0}", &[n])), want, "{l:?}");
 
             let how = value(&app, &tr_with("how the turn of {0} was found", &[n]));
@@ -134,10 +139,10 @@ fn a_turn_card_reads_in_every_language() {
 
 #[test]
 fn the_settings_choice_overrides_the_system_language() {
+    i_slint_backend_testing::init_no_event_loop();
     let dir = tempfile::tempdir().unwrap();
     let app = open(dir.path(), Language::French);
     // The French screen names the choice in French; German is chosen by its own name.
-    use slint::ComponentHandle;
     let rows = app.session.borrow().language_choice();
     assert_eq!(rows, 0, "follows the system at first");
     app.window
