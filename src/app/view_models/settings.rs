@@ -4,6 +4,7 @@ use super::super::cautions::CAUTIONS;
 use super::super::session::Session;
 use super::{rule_index, step_index, step_labels, temperature_text};
 use crate::plan::{Temperature, UnitSystem};
+use crate::storage::settings::ThemeChoice;
 
 pub struct SettingsVm {
     pub imperial: bool,
@@ -12,6 +13,9 @@ pub struct SettingsVm {
     pub step_index: i32,
     pub water_temp: String,
     pub about: String,
+    /// The screen's colours, by place in `ThemeChoice::ALL`.
+    pub theme_index: i32,
+    pub theme: ThemeChoice,
 }
 
 pub fn settings(s: &Session) -> SettingsVm {
@@ -22,6 +26,11 @@ pub fn settings(s: &Session) -> SettingsVm {
         step_options: step_labels(cfg.units),
         step_index: step_index(cfg.units, cfg.gauge_step()),
         water_temp: temperature_text(cfg.units, Temperature::from_celsius(cfg.water_temp_c)),
+        theme_index: ThemeChoice::ALL
+            .iter()
+            .position(|t| *t == cfg.theme)
+            .unwrap_or(0) as i32,
+        theme: cfg.theme,
         about: format!(
             "Turnsheet {} · free software under the GNU GPL, version 3 or later · built with Slint {} (used under its GPL-3.0 licence) · real-gas contents by GERG-2008 (the aga8 crate) · Roboto fonts under the Apache License 2.0 · data in {}",
             env!("CARGO_PKG_VERSION"),
