@@ -1,13 +1,14 @@
-//! Compiles the Slint views. The material style (dark) is pinned so desktop looks like
-//! the phone. Debug builds carry element debug info, which the UI tests' element
-//! queries need.
+//! Compiles the Slint views. The material style without a fixed scheme, so that
+//! `Palette.color-scheme` reports the system's dark or light setting (ui/theme.slint
+//! follows it when the settings say so); desktop and phone look the same. Debug builds
+//! carry element debug info, which the UI tests' element queries need.
 
 fn main() {
     let debug = std::env::var("PROFILE")
         .map(|p| p == "debug")
         .unwrap_or(false);
     let config = slint_build::CompilerConfiguration::new()
-        .with_style("material-dark".into())
+        .with_style("material".into())
         .with_debug_info(debug)
         // The gettext catalogues, one per language; the Rust side reads the same files,
         // so messages carry no context (one msgid, one meaning, app-wide).

@@ -191,4 +191,36 @@ fn main() {
     });
     // The gauge of a diver is chosen, the current one marked.
     shot("26-small-gauge-chooser", &|s| s.open_gauge_chooser(1));
+
+    // The light theme (Settings, Screen: Light, for bright sun) on the key pages, with
+    // every start read, at 412 × 915 and the normal text size.
+    let data = tempfile::tempdir().unwrap();
+    let clock = turnsheet::app::clock::ManualClock::at(1_796_463_720);
+    let app = App::with_clock(data.path(), std::rc::Rc::new(clock)).expect("app");
+    app.window
+        .window()
+        .set_size(slint::LogicalSize::new(412.0, 915.0));
+    app.window.show().unwrap();
+    let shot = |name: &str, f: &dyn Fn(&mut turnsheet::app::session::Session)| {
+        f(&mut app.session.borrow_mut());
+        refresh_all(&app.window, &app.session.borrow());
+        save_png(&app, &out.join(format!("{name}.png")));
+    };
+    shot("30-light-team", &|s| {
+        s.acknowledge_cautions();
+        s.set_theme(1);
+        for i in 0..s.team.len() {
+            s.confirm_start(i);
+            if s.team.input().divers[i].stage.is_some() {
+                s.team.mark_stage_read(i, s.now());
+            }
+        }
+    });
+    shot("31-light-turns", &|s| s.go(Screen::Turns));
+    shot("32-light-buddy", &|s| s.go(Screen::Buddy));
+    shot("33-light-settings", &|s| {
+        s.back();
+        s.back();
+        s.go(Screen::Settings);
+    });
 }

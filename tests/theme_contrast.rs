@@ -1,14 +1,21 @@
-//! Text contrast of the theme's colour pairs: at least 7:1 (WCAG 2.1 contrast ratio,
-//! success criterion 1.4.6 "Contrast (Enhanced)", using its relative-luminance formula).
-//! Pairs are declared in ui/theme.slint with `// contrast-pair: FG on BG` comments.
+//! Text contrast of the theme's colour pairs, in the dark and the light theme: at least
+//! 7:1 (WCAG 2.1 contrast ratio, success criterion 1.4.6 "Contrast (Enhanced)", using its
+//! relative-luminance formula). Pairs are declared in ui/theme.slint with
+//! `// contrast-pair: FG on BG` comments; each colour is written `dark ? DARK : LIGHT`.
 
-fn colour(theme: &str, name: &str) -> [f64; 3] {
+/// A colour of the theme: the dark one (`light` false) or the light one.
+fn colour(theme: &str, name: &str, light: bool) -> [f64; 3] {
     let needle = format!("property <color> {name}:");
     let line = theme
         .lines()
         .find(|l| l.contains(&needle))
         .unwrap_or_else(|| panic!("colour {name} not in theme"));
-    let hex = line.split('#').nth(1).unwrap().trim_end_matches(';').trim();
+    let hexes: Vec<&str> = line.split('#').skip(1).collect();
+    assert!(
+        line.contains("dark ?") && hexes.len() == 2,
+        "colour {name} is not written `dark ? #DARK : #LIGHT`: {line}"
+    );
+    let hex = hexes[usize::from(light)];
     let v = |i: usize| u8::from_str_radix(&hex[i..i + 2], 16).unwrap() as f64 / 255.0;
     [v(0), v(2), v(4)]
 }
@@ -38,19 +45,36 @@ fn wcag_formula_matches_known_values() {
 }
 
 #[test]
-fn every_declared_pair_reaches_seven_to_one() {
+fn every_declared_pair_reaches_seven_to_one_in_both_themes() {
     let theme = include_str!("../ui/theme.slint");
-    let mut pairs = 0;
-    for line in theme.lines() {
-        if let Some(rest) = line.trim().strip_prefix("// contrast-pair:") {
-            let parts: Vec<&str> = rest.split(" on ").map(str::trim).collect();
-            let (fg, bg) = (colour(theme, parts[0]), colour(theme, parts[1]));
-            let c = contrast(fg, bg);
-            assert!(c >= 7.0, "{} on {}: {c:.2}:1", parts[0], parts[1]);
-            pairs += 1;
+    for (light, name) in [(false, "dark"), (true, "light")] {
+        let mut pairs = 0;
+        let mut lowest = f64::INFINITY;
+        for line in theme.lines() {
+            if let Some(rest) = line.trim().strip_prefix("// contrast-pair:") {
+                let parts: Vec<&str> = rest.split(" on ").map(str::trim).collect();
+                let fg = colour(theme, parts[0], light);
+                let bg = colour(theme, parts[1], light);
+                let c = contrast(fg, bg);
+                assert!(c >= 7.0, "{name}: {} on {}: {c:.2}:1", parts[0], parts[1]);
+                lowest = lowest.min(c);
+                pairs += 1;
+            }
         }
+        println!("{name} theme: {pairs} declared pairs, lowest {lowest:.2}:1");
+        assert!(pairs >= 8, "only {pairs} pairs declared");
     }
-    assert!(pairs >= 8, "only {pairs} pairs declared");
+}
+
+#[test]
+fn a_light_colour_on_a_light_ground_is_caught() {
+    // The check must be able to fail: the dark theme's text on the light background.
+    let theme = include_str!("../ui/theme.slint");
+    let c = contrast(
+        colour(theme, "text", false),
+        colour(theme, "background", true),
+    );
+    assert!(c < 1.5, "{c}");
 }
 
 #[path = "layout_check/mod.rs"]
@@ -62,7 +86,16 @@ mod layout_check;
 /// read from the laid-out item tree, so a state's pair cannot be missed by the list of
 /// declared pairs above.
 #[test]
-fn every_text_in_every_state_reaches_seven_to_one() {
+fn every_text_in_every_state_reaches_seven_to_one_dark() {
+    every_text_in_every_state(turnsheet::storage::settings::ThemeChoice::Dark);
+}
+
+#[test]
+fn every_text_in_every_state_reaches_seven_to_one_light() {
+    every_text_in_every_state(turnsheet::storage::settings::ThemeChoice::Light);
+}
+
+fn every_text_in_every_state(theme: turnsheet::storage::settings::ThemeChoice) {
     use slint::ComponentHandle;
     use turnsheet::app::App;
     use turnsheet::app::adapters::refresh_all;
@@ -105,6 +138,18 @@ fn every_text_in_every_state_reaches_seven_to_one() {
             }
         }
     };
+    // The theme is chosen as in Settings (and saved), before the first page is drawn.
+    let index = turnsheet::storage::settings::ThemeChoice::ALL
+        .iter()
+        .position(|t| *t == theme)
+        .unwrap();
+    app.session.borrow_mut().set_theme(index);
+    refresh_all(&app.window, &app.session.borrow());
+    let dark = app.window.global::<turnsheet::app::ui::Theme>().get_dark();
+    assert_eq!(
+        dark,
+        theme == turnsheet::storage::settings::ThemeChoice::Dark
+    );
     state("cautions", &|_| {});
     state("team", &|s| s.acknowledge_cautions());
     // A value already read: the keypad opens with it selected (lit).
@@ -180,13 +225,13 @@ fn every_text_in_every_state_reaches_seven_to_one() {
         s.back();
     });
     println!(
-        "{checked} texts in 18 states; lowest {:.2}:1 ({})",
+        "{theme:?} theme: {checked} texts in 18 states; lowest {:.2}:1 ({})",
         lowest.0, lowest.1
     );
     assert!(checked > 300, "only {checked} texts looked at");
     assert!(
         failures.is_empty(),
-        "{} texts under 7:1:\n{}",
+        "{theme:?} theme: {} texts under 7:1:\n{}",
         failures.len(),
         failures.join("\n")
     );

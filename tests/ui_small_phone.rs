@@ -10,7 +10,10 @@
 //! - every button is at least 48 × 48 px (the common minimum touch target);
 //! - nothing reaches past the left or right edge;
 //! - the open keypad (field, message, keys, Cancel and Done) fits inside the window, so
-//!   nothing is hidden behind it or below it.
+//!   nothing is hidden behind it or below it;
+//! - every text shown reaches 7:1 against its ground (WCAG 2.1, 1.4.6).
+//!
+//! All of it twice: in the dark theme and in the light one.
 //!
 //! The walk runs in every language the app speaks (German and French words are the
 //! longest). Each state is also drawn to `target/small-phone/LANG-NAME.png` to look at.
@@ -149,6 +152,11 @@ slint::slint! {
         Text { x: 0px; y: 150px; width: 90px; height: 30px; text: "Locker"; color: transparent; }
         Text { x: 100px; y: 40px; width: 90px; height: 30px; text: "fine"; }
         Text { x: 100px; y: 80px; width: 30px; height: 30px; text: "Diver 2"; overflow: elide; }
+        Rectangle {
+            x: 150px; y: 250px; width: 50px; height: 40px;
+            background: #ffffff;
+            Text { text: "pale"; color: #dddddd; }
+        }
     }
 }
 
@@ -177,18 +185,23 @@ fn the_check_names_each_kind_of_fault() {
     assert!(has("Save", "button's border"), "{all}");
     assert!(has("Locker", "drawn invisible"), "{all}");
     assert!(!all.contains("\"fine\""), "{all}");
+    let low = layout_check::low_contrast(ui.window(), "faults").join("\n");
+    assert!(low.contains("\"pale\" is 1.3"), "{low}");
+    assert!(!low.contains("\"fine\""), "{low}");
 }
 
 #[test]
 fn every_page_works_on_a_small_phone_with_large_text() {
     software_backend();
-    let found = walk(Language::English);
-    assert!(
-        found.is_empty(),
-        "{} problems:\n{}",
-        found.len(),
-        found.join("\n")
-    );
+    expect_none(walk(Language::English, false));
+}
+
+/// The same in the light theme: the words and the layout do not change with the colours,
+/// and no text is drawn in the ground's colour.
+#[test]
+fn every_page_works_on_a_small_phone_with_large_text_light() {
+    software_backend();
+    expect_none(walk(Language::English, true));
 }
 
 /// German and French words are the longest; every language gets the same walk.
@@ -200,8 +213,12 @@ fn every_language_works_on_a_small_phone_with_large_text() {
         .into_iter()
         .filter(|l| *l != Language::English)
     {
-        found.extend(walk(l));
+        found.extend(walk(l, false));
     }
+    expect_none(found);
+}
+
+fn expect_none(found: Vec<String>) {
     assert!(
         found.is_empty(),
         "{} problems:\n{}",
@@ -210,12 +227,16 @@ fn every_language_works_on_a_small_phone_with_large_text() {
     );
 }
 
-/// Every page and overlay in `language`, at 360 × 640 with text at 1.3.
-fn walk(language: Language) -> Vec<String> {
+/// Every page and overlay in `language`, at 360 × 640 with text at 1.3, in the dark or
+/// the light theme.
+fn walk(language: Language, light: bool) -> Vec<String> {
     let dir = tempfile::tempdir().unwrap();
     let app = App::new(dir.path()).unwrap();
     app.set_system_language(language);
     let code = language.code();
+    // Light is the second choice in Settings (`ThemeChoice::ALL`).
+    app.session.borrow_mut().set_theme(usize::from(light));
+    let suffix = if light { "-light" } else { "" };
     app.set_font_scale(SCALE);
     app.window.window().set_size(slint::LogicalSize::new(W, H));
     app.window.show().unwrap();
@@ -226,10 +247,11 @@ fn walk(language: Language) -> Vec<String> {
         let name = &format!("{code}-{name}");
         f(&mut app.session.borrow_mut());
         refresh_all(&app.window, &app.session.borrow());
-        save_png(&app, name);
+        save_png(&app, &format!("{name}{suffix}"));
         seen += elements(&app).len();
         all.extend(problems(&app, name, keypad));
         all.extend(layout_check::problems(app.window.window(), name));
+        all.extend(layout_check::low_contrast(app.window.window(), name));
     };
 
     state("cautions", false, &|_| {});

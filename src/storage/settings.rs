@@ -12,6 +12,22 @@ use crate::plan::{PressureUnit, Rule, UnitSystem};
 
 pub const SETTINGS_SCHEMA: u32 = 1;
 
+/// The screen's colours: the system's dark or light setting, or one of them always
+/// (light for bright sun).
+#[derive(Clone, Copy, Debug, Default, PartialEq, Eq, Serialize, Deserialize)]
+#[serde(rename_all = "lowercase")]
+pub enum ThemeChoice {
+    #[default]
+    System,
+    Dark,
+    Light,
+}
+
+impl ThemeChoice {
+    /// In the order the Settings page offers them.
+    pub const ALL: [ThemeChoice; 3] = [ThemeChoice::Dark, ThemeChoice::Light, ThemeChoice::System];
+}
+
 #[derive(Clone, Debug, PartialEq, Serialize, Deserialize)]
 #[serde(deny_unknown_fields)]
 pub struct Settings {
@@ -30,6 +46,9 @@ pub struct Settings {
     /// the system's.
     #[serde(default)]
     pub language: Option<String>,
+    /// Screen colours. Files written before it existed follow the system.
+    #[serde(default)]
+    pub theme: ThemeChoice,
 }
 
 impl Default for Settings {
@@ -43,6 +62,7 @@ impl Default for Settings {
             water_temp_c: 20.0,
             cautions_acknowledged: false,
             language: None,
+            theme: ThemeChoice::System,
         }
     }
 }
@@ -173,6 +193,7 @@ impl Settings {
             },
             &mut notes,
         );
+        let theme = field(&mut m, "theme", d.theme, "system", any, &mut notes);
         for key in m.keys() {
             notes.push(format!("{}: not a setting; left out", one_line(key, 40)));
         }
@@ -185,6 +206,7 @@ impl Settings {
             water_temp_c,
             cautions_acknowledged,
             language,
+            theme,
         };
         (settings, notes)
     }
@@ -243,5 +265,34 @@ mod tests {
             Settings::from_found(found(serde_json::json!({"schema": 1, "colour": "red"})));
         assert_eq!(s, Settings::default());
         assert_eq!(notes, ["colour: not a setting; left out"]);
+    }
+
+    #[test]
+    fn the_theme_is_kept_and_an_older_file_follows_the_system() {
+        // A file written before the theme setting existed: every field as it was, the
+        // theme follows the system, and nothing is reported.
+        let old = serde_json::json!({"schema": 1, "units": "metric", "gauge_step_bar": 5.0,
+            "gauge_step_psi": 100.0, "rule": "thirds", "water_temp_c": 14.0,
+            "cautions_acknowledged": true});
+        let (s, notes) = Settings::from_found(found(old.clone()));
+        assert!(notes.is_empty(), "{notes:?}");
+        assert_eq!(s.theme, ThemeChoice::System);
+        assert_eq!((s.gauge_step_bar, s.water_temp_c), (5.0, 14.0));
+        let direct: Settings = serde_json::from_value(old).unwrap();
+        assert_eq!(direct.theme, ThemeChoice::System);
+
+        let mut light = Settings::default();
+        light.theme = ThemeChoice::Light;
+        let text = serde_json::to_string(&light).unwrap();
+        assert!(text.contains("\"theme\":\"light\""), "{text}");
+        let back: serde_json::Value = serde_json::from_str(&text).unwrap();
+        let (s, notes) = Settings::from_found(found(back));
+        assert!(notes.is_empty(), "{notes:?}");
+        assert_eq!(s.theme, ThemeChoice::Light);
+
+        let (s, notes) = Settings::from_found(found(serde_json::json!({"theme": "sepia"})));
+        assert_eq!(s.theme, ThemeChoice::System);
+        assert!(notes[0].starts_with("theme: \"sepia\""), "{notes:?}");
+        assert!(notes[0].ends_with("back to system"), "{notes:?}");
     }
 }

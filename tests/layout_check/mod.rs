@@ -20,7 +20,7 @@ use i_slint_core::graphics::Color;
 use i_slint_core::item_tree::{ItemRc, ParentItemTraversalMode};
 use i_slint_core::items::{
     AccessibleRole, BasicBorderRectangle, BorderRectangle, Clip, ComplexText, Flickable, Opacity,
-    Rectangle, SimpleText, TextHorizontalAlignment, TextOverflow, TextWrap,
+    Rectangle, SimpleText, TextHorizontalAlignment, TextOverflow, TextWrap, WindowItem,
 };
 use i_slint_core::layout::Orientation;
 use i_slint_core::window::WindowInner;
@@ -122,9 +122,15 @@ pub fn texts(window: &slint::Window) -> Vec<TextBox> {
         h: size.height,
     };
     let root = ItemRc::new_root(inner.component());
+    // The window's own background (dark or light theme) under everything.
+    let ground = root
+        .downcast::<WindowItem>()
+        .map(|w| w.as_pin_ref().background().color())
+        .filter(|c| c.alpha() == 255)
+        .unwrap_or(Color::from_rgb_u8(0, 0, 0));
     let mut painted = vec![Painted {
         rect: screen,
-        colour: Color::from_rgb_u8(0, 0, 0),
+        colour: ground,
         order: 0,
     }];
     let mut out = Vec::new();
@@ -197,7 +203,7 @@ pub fn texts(window: &slint::Window) -> Vec<TextBox> {
     });
     for t in &mut out {
         let (cx, cy) = (t.ink.x + t.ink.w / 2.0, t.ink.y + t.ink.h / 2.0);
-        let mut under = Color::from_rgb_u8(0, 0, 0);
+        let mut under = ground;
         for p in painted.iter().filter(|p| p.order < t.order) {
             if p.rect.contains(cx, cy) {
                 under = blend(p.colour, under);
@@ -343,6 +349,19 @@ pub fn contrast(a: Color, b: Color) -> f64 {
     };
     let (la, lb) = (lum(a), lum(b));
     (la.max(lb) + 0.05) / (la.min(lb) + 0.05)
+}
+
+/// Every shown text under 7:1 against what is painted behind it (WCAG 2.1, 1.4.6), one
+/// line each, led by `state`.
+pub fn low_contrast(window: &slint::Window, state: &str) -> Vec<String> {
+    texts(window)
+        .into_iter()
+        .filter(|t| !t.covered && t.colour.alpha() > 0)
+        .filter_map(|t| {
+            let c = contrast(blend(t.colour, t.background), t.background);
+            (c < 7.0).then(|| format!("{state}: {:?} is {c:.2}:1 on its ground", short(&t.text)))
+        })
+        .collect()
 }
 
 /// The words of a text, shortened for a message.

@@ -3,10 +3,11 @@
 use slint::ComponentHandle;
 
 use super::super::session::{EntryTarget, Session};
-use super::super::ui::{AppWindow, CautionsAdapter, SettingsAdapter};
+use super::super::ui::{self, AppWindow, CautionsAdapter, SettingsAdapter, Theme};
 use super::super::view_models as vm;
 use super::{Shared, act, handles, strings};
 use crate::plan::UnitSystem;
+use crate::storage::settings::ThemeChoice;
 
 pub fn connect(ui: &AppWindow, s: &Shared) {
     let a = ui.global::<SettingsAdapter>();
@@ -31,6 +32,8 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
     let (w, st) = handles(ui, s);
     a.on_edit_temp(move || act(&w, &st, |x| x.open_entry(EntryTarget::DefaultWaterTemp)));
     let (w, st) = handles(ui, s);
+    a.on_set_theme(move |i| act(&w, &st, |x| x.set_theme(i as usize)));
+    let (w, st) = handles(ui, s);
     ui.global::<CautionsAdapter>()
         .on_acknowledge(move || act(&w, &st, |x| x.acknowledge_cautions()));
 }
@@ -49,6 +52,13 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
     a.set_about(v.about.into());
     a.set_language_options(strings(v.language_options));
     a.set_language_index(v.language_index);
+    a.set_theme_index(v.theme_index);
+    // Every page's colours follow this one property.
+    ui.global::<Theme>().set_choice(match v.theme {
+        ThemeChoice::System => ui::ThemeChoice::System,
+        ThemeChoice::Dark => ui::ThemeChoice::Dark,
+        ThemeChoice::Light => ui::ThemeChoice::Light,
+    });
     ui.global::<CautionsAdapter>()
         .set_cautions(strings(vm::cautions()));
 }

@@ -8,7 +8,8 @@
 //! - navigation and status (`NavController`, `Status`), here;
 //! - the open keypad entry (`entry/`) and picker (`pickers.rs`, with the custom set in
 //!   `custom_set.rs` and the mix choices in `mix_picker.rs`);
-//! - the fill-to-water check and the pairing chart selection (`tools.rs`).
+//! - the fill-to-water check and the pairing chart selection (`tools.rs`);
+//! - the screen's colours (`appearance.rs`).
 
 use crate::plan::UnitSystem;
 use crate::plan::error::InputError;
@@ -22,6 +23,7 @@ use super::locker_controller::LockerController;
 use super::nav::{NavController, Screen, Status};
 use super::team_controller::TeamController;
 
+mod appearance;
 mod card;
 mod changes;
 mod custom_set;

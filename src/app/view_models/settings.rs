@@ -5,6 +5,7 @@ use super::super::session::Session;
 use super::{rule_index, step_index, step_labels, temperature_text};
 use crate::i18n::{Language, tr_with};
 use crate::plan::{Temperature, UnitSystem};
+use crate::storage::settings::ThemeChoice;
 
 pub struct SettingsVm {
     pub imperial: bool,
@@ -16,6 +17,9 @@ pub struct SettingsVm {
     /// "System (Deutsch)", then each language in its own name.
     pub language_options: Vec<String>,
     pub language_index: i32,
+    /// The screen's colours, by place in `ThemeChoice::ALL`.
+    pub theme_index: i32,
+    pub theme: ThemeChoice,
 }
 
 pub fn settings(s: &Session) -> SettingsVm {
@@ -33,6 +37,11 @@ pub fn settings(s: &Session) -> SettingsVm {
         .chain(Language::ALL.iter().map(|l| l.own_name().to_string()))
         .collect(),
         language_index: s.language_choice() as i32,
+        theme_index: ThemeChoice::ALL
+            .iter()
+            .position(|t| *t == cfg.theme)
+            .unwrap_or(0) as i32,
+        theme: cfg.theme,
         about: format!(
             "Turnsheet {} · free software under the GNU GPL, version 3 or later · built with Slint {} (used under its GPL-3.0 licence) · real-gas contents by GERG-2008 (the aga8 crate) · Roboto fonts under the Apache License 2.0 · data in {}",
             env!("CARGO_PKG_VERSION"),
