@@ -160,3 +160,83 @@ fn demo_card_matches_its_golden_rendering() {
     assert!(ink > w * h / 50, "too little ink: {ink}");
     assert!(differ * 200 <= w * h, "{differ} of {} pixels differ", w * h);
 }
+
+/// The text of every element of a card, one per line.
+fn texts_of(svg: &str) -> Vec<String> {
+    let doc = roxmltree::Document::parse(svg).expect("well-formed XML");
+    doc.descendants()
+        .filter(|n| n.is_text())
+        .filter_map(|n| n.text())
+        .map(str::to_string)
+        .collect()
+}
+
+#[test]
+fn a_card_in_german_writes_decimal_commas() {
+    // The demo team on a 2.5 bar graduation, so turns can fall on half bars.
+    let mut team: serde_json::Value =
+        serde_json::from_str(include_str!("../examples/hollowmere-team.json")).unwrap();
+    team["gauge_step"] = serde_json::json!(2.5);
+    let dir = tempfile::tempdir().unwrap();
+    let file = dir.path().join("team.json");
+    std::fs::write(&file, team.to_string()).unwrap();
+    let out = std::process::Command::new(env!("CARGO_BIN_EXE_turnsheet"))
+        .arg("card")
+        .arg(&file)
+        .args(["--lang", "de", "--date", "2026-12-05"])
+        .output()
+        .unwrap();
+    assert!(
+        out.status.success(),
+        "{}",
+        String::from_utf8_lossy(&out.stderr)
+    );
+    let svg = String::from_utf8(out.stdout).unwrap();
+    let text = texts_of(&svg).join("\n");
+    // Every turn as a German gauge reads it: the plan's figure with a comma.
+    let input = TeamFile::parse(&team.to_string())
+        .unwrap()
+        .to_input()
+        .unwrap();
+    let plan = plan_team(&input).unwrap();
+    let mut halves = 0;
+    for d in &plan.divers {
+        let point = shown::turn(d.turn_shown_value);
+        let comma = point.replace('.', ",");
+        assert!(
+            text.contains(&format!("{comma} {}", d.gauge.label())),
+            "{comma} missing"
+        );
+        if point.contains('.') {
+            halves += 1;
+            assert!(!text.contains(&format!("{point} {}", d.gauge.label())));
+        }
+    }
+    // At least one turn on the 2.5 bar graduation is not a whole bar (checked above with
+    // its comma); the set sizes keep their decimals too (Bram's rating, 77.4 cu ft).
+    assert!(
+        halves > 0,
+        "no half-bar turn: the check above tested no comma"
+    );
+    assert!(text.contains("77,4 cu ft"), "Bram's set, with a comma");
+    assert!(!text.contains("77.4 cu ft"), "no decimal point left");
+}
+
+#[test]
+fn an_unknown_card_language_is_refused_with_the_codes() {
+    let demo = PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("examples/hollowmere-team.json");
+    let out = std::process::Command::new(env!("CARGO_BIN_EXE_turnsheet"))
+        .arg("card")
+        .arg(&demo)
+        .args(["--lang", "klingon"])
+        .output()
+        .unwrap();
+    assert_eq!(out.status.code(), Some(2), "bad input");
+    assert!(out.stdout.is_empty(), "no card");
+    let err = String::from_utf8_lossy(&out.stderr);
+    assert!(err.contains("--lang"), "{err}");
+    for code in ["en", "es", "fr", "de", "it", "pt_BR"] {
+        assert!(err.contains(code), "{code} not listed: {err}");
+    }
+    assert!(!err.contains("panicked"), "{err}");
+}

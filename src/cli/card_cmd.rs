@@ -1,8 +1,10 @@
-//! `turnsheet card TEAM.json [-o card.svg] [--charts]`: the printable team card.
+//! `turnsheet card TEAM.json [-o card.svg] [--charts] [--lang CODE]`: the printable team
+//! card, in English or in another language the app speaks.
 
 use std::path::{Path, PathBuf};
 
 use crate::formats::card_svg::{CardHeading, card_svg};
+use crate::i18n::{Language, LanguageScope, tr_with};
 use crate::plan::error::InputError;
 use crate::plan::team_charts;
 
@@ -27,10 +29,33 @@ pub struct CardArgs {
     /// card never looks current).
     #[arg(long)]
     pub date: Option<String>,
+    /// The card's language, by catalogue code: en, es, fr, de, it or pt_BR (default en).
+    /// Words and decimal separators follow it; messages on the terminal stay English.
+    #[arg(long, value_name = "CODE")]
+    pub lang: Option<String>,
+}
+
+/// The language asked for with `--lang`; an unknown code is refused with the list.
+fn language(code: Option<&str>) -> Result<Language, InputError> {
+    let Some(code) = code else {
+        return Ok(Language::English);
+    };
+    Language::from_code(code.trim()).ok_or_else(|| {
+        let codes: Vec<&str> = Language::ALL.iter().map(|l| l.code()).collect();
+        InputError::new(
+            "--lang",
+            format!(
+                "'{}' is not a language the card is written in; use one of {}",
+                crate::plan::text::shown(code),
+                codes.join(", ")
+            ),
+        )
+    })
 }
 
 /// The card's SVG text for a team file.
 pub fn card_text(args: &CardArgs) -> Result<String, InputError> {
+    let lang = language(args.lang.as_deref())?;
     let team = read_team(&args.team)?;
     let plan = plan_named(&team)?;
     let charts = if args.charts {
@@ -46,14 +71,21 @@ pub fn card_text(args: &CardArgs) -> Result<String, InputError> {
             crate::plan::text::check_text(flag, v)?;
         }
     }
-    let heading =
-        CardHeading {
-            dive: args.dive.clone(),
-            date: Some(args.date.clone().unwrap_or_else(|| {
-                format!("made {}", chrono::Local::now().format("%-d %b %Y %H:%M"))
-            })),
-            read_at: Vec::new(),
-        };
+    let _lang = LanguageScope::new(lang);
+    // Month names come from the clock's library in English: other languages get figures.
+    let made = match lang {
+        Language::English => chrono::Local::now().format("%-d %b %Y %H:%M"),
+        _ => chrono::Local::now().format("%Y-%m-%d %H:%M"),
+    };
+    let heading = CardHeading {
+        dive: args.dive.clone(),
+        date: Some(
+            args.date
+                .clone()
+                .unwrap_or_else(|| tr_with("made {0}", &[&made])),
+        ),
+        read_at: Vec::new(),
+    };
     Ok(card_svg(&heading, &team, &plan, &charts))
 }
 

@@ -2,9 +2,9 @@
 //! large turn figures, no colour needed to read it. Optional following pages carry each
 //! diver's pairing charts. No I/O here: the caller writes the text.
 
-use crate::plan::PairChart;
+use crate::i18n::{tr, tr_with};
 use crate::plan::shown;
-use crate::plan::{TeamInput, TeamPlan};
+use crate::plan::{PairChart, TeamInput, TeamPlan};
 
 /// Page size in millimetres.
 pub const PAGE_W: f64 = 100.0;
@@ -12,7 +12,9 @@ pub const PAGE_W: f64 = 100.0;
 pub const PAGE_H: f64 = 150.0;
 /// Font families, with fallbacks, so a browser and a print tool pick the same kind of face.
 pub const FONT: &str = "Roboto, 'Liberation Sans', Arial, Helvetica, sans-serif";
-const MARGIN: f64 = 5.0;
+pub(super) const MARGIN: f64 = 5.0;
+
+pub use super::chart_svg::charts_svg;
 
 /// What goes on top of the card besides the plan.
 #[derive(Clone, Debug, Default)]
@@ -62,18 +64,18 @@ pub fn wrap(text: &str, width: usize) -> Vec<String> {
     lines
 }
 
-struct Page {
-    body: String,
+pub(super) struct Page {
+    pub(super) body: String,
 }
 
 impl Page {
-    fn new() -> Self {
+    pub(super) fn new() -> Self {
         Page {
             body: String::new(),
         }
     }
     /// Text at (x, y) mm, size in mm; `anchor` start/middle/end.
-    fn text(&mut self, x: f64, y: f64, size: f64, bold: bool, anchor: &str, s: &str) {
+    pub(super) fn text(&mut self, x: f64, y: f64, size: f64, bold: bool, anchor: &str, s: &str) {
         self.body.push_str(&format!(
             "<text x=\"{x:.2}\" y=\"{y:.2}\" font-size=\"{size:.2}\"{}{} >{}</text>\n",
             if bold { " font-weight=\"bold\"" } else { "" },
@@ -85,12 +87,12 @@ impl Page {
             xml_escape(s)
         ));
     }
-    fn line(&mut self, x1: f64, y1: f64, x2: f64, y2: f64, width: f64) {
+    pub(super) fn line(&mut self, x1: f64, y1: f64, x2: f64, y2: f64, width: f64) {
         self.body.push_str(&format!(
             "<line x1=\"{x1:.2}\" y1=\"{y1:.2}\" x2=\"{x2:.2}\" y2=\"{y2:.2}\" stroke=\"#000\" stroke-width=\"{width:.2}\"/>\n"
         ));
     }
-    fn rect(&mut self, x: f64, y: f64, w: f64, h: f64, width: f64) {
+    pub(super) fn rect(&mut self, x: f64, y: f64, w: f64, h: f64, width: f64) {
         self.body.push_str(&format!(
             "<rect x=\"{x:.2}\" y=\"{y:.2}\" width=\"{w:.2}\" height=\"{h:.2}\" fill=\"none\" stroke=\"#000\" stroke-width=\"{width:.2}\"/>\n"
         ));
@@ -106,7 +108,7 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
     let title = heading
         .dive
         .clone()
-        .unwrap_or_else(|| "Team turn pressures".to_string());
+        .unwrap_or_else(|| tr("Team turn pressures"));
     let title: String = if title.chars().count() > 34 {
         title.chars().take(33).collect::<String>() + "…"
     } else {
@@ -130,23 +132,17 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
             )
         })
         .unwrap_or_default();
-    p.text(
-        MARGIN,
-        y,
-        3.2,
-        false,
-        "start",
-        &format!(
-            "Rule of {} · {} water {} {}{depth}",
-            team.rule.name(),
-            match team.water {
-                crate::plan::Water::Fresh => "fresh",
-                crate::plan::Water::Salt => "salt",
-            },
-            shown::degrees(u.temperature_value(team.water_temp)),
-            u.temperature_label()
-        ),
-    );
+    let degrees = shown::degrees(u.temperature_value(team.water_temp));
+    let water = match team.water {
+        crate::plan::Water::Fresh => {
+            tr_with("fresh water {0} {1}", &[&degrees, &u.temperature_label()])
+        }
+        crate::plan::Water::Salt => {
+            tr_with("salt water {0} {1}", &[&degrees, &u.temperature_label()])
+        }
+    };
+    let conditions = format!("{} · {water}{depth}", team.rule.rule_of());
+    p.text(MARGIN, y, 3.2, false, "start", &conditions);
     y += 2.5;
     p.line(MARGIN, y, right, y, 0.4);
 
@@ -160,10 +156,11 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
         let inp = &team.divers[i];
         let g = d.gauge;
         let top = y + block * i as f64;
-        let mut name = d.name.clone();
-        if controllers.contains(&i) {
-            name.push_str(" (controls)");
-        }
+        let name = if controllers.contains(&i) {
+            tr_with("{0} (controls)", &[&d.name])
+        } else {
+            d.name.clone()
+        };
         p.text(MARGIN, top + 4.5, 3.8, true, "start", &name);
         p.text(
             MARGIN,
@@ -180,15 +177,17 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
             false,
             "start",
             &match heading.read_at.get(i).filter(|r| !r.is_empty()) {
-                Some(read) => format!(
-                    "start {} {} ({read})",
-                    shown::start(g.value(d.start)),
-                    g.label()
+                Some(read) => tr_with(
+                    "start {0} {1} ({2})",
+                    &[&shown::start(g.value(d.start)), &g.label(), read],
                 ),
-                None => format!("start {} {}", shown::start(g.value(d.start)), g.label()),
+                None => tr_with(
+                    "start {0} {1}",
+                    &[&shown::start(g.value(d.start)), &g.label()],
+                ),
             },
         );
-        p.text(right - 38.0, top + 4.3, 2.6, false, "end", "TURN");
+        p.text(right - 38.0, top + 4.3, 2.6, false, "end", &tr("TURN"));
         p.text(
             right,
             top + 10.5,
@@ -204,13 +203,15 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
                 2.8,
                 true,
                 "start",
-                &format!(
-                    "drop stage at {} {u} ({}, {}, start {} {u})",
-                    shown::turn(st.drop_shown_value),
-                    si.cylinders.describe(),
-                    si.mix.label(),
-                    shown::start(g.value(st.start)),
-                    u = g.label()
+                &tr_with(
+                    "drop stage at {0} {1} ({2}, {3}, start {4} {1})",
+                    &[
+                        &shown::turn(st.drop_shown_value),
+                        &g.label(),
+                        &si.cylinders.describe(),
+                        &si.mix.label(),
+                        &shown::start(g.value(st.start)),
+                    ],
                 ),
             );
         }
@@ -219,13 +220,18 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
     let mut y = y + block * n + 4.0;
     // The core's warnings first, in the words the app and `plan` use.
     let warnings = plan.warning_texts().into_iter();
-    let mut notes: Vec<String> = warnings.map(|w| format!("WARNING: {w}")).collect();
+    let mut notes: Vec<String> = warnings.map(|w| tr_with("WARNING: {0}", &[&w])).collect();
     notes.push(crate::plan::allowance_source_sentence(team, plan));
     if plan.stress.margin.is_finite() {
         // The same verdict-first words as the app and `plan`.
-        notes.push(format!("Out of gas at the turn: {}", plan.margin_text()));
+        notes.push(tr_with(
+            "Out of gas at the turn: {0}",
+            &[&plan.margin_text()],
+        ));
     }
-    notes.push("Turn when the FIRST diver reaches their turn, or at any other limit.".to_string());
+    notes.push(tr(
+        "Turn when the FIRST diver reaches their turn, or at any other limit.",
+    ));
     for note in notes {
         for line in wrap(&note, 68) {
             p.text(MARGIN, y, 2.6, false, "start", &line);
@@ -233,117 +239,15 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
         }
         y += 0.8;
     }
-    let caution = "Planning aid for trained divers. Team protocol, training and site rules come first. Check by hand.";
-    let mut cy = PAGE_H - MARGIN - 3.3 * wrap(caution, 72).len() as f64 + 2.5;
+    let caution = tr(
+        "Planning aid for trained divers. Team protocol, training and site rules come first. Check by hand.",
+    );
+    let mut cy = PAGE_H - MARGIN - 3.3 * wrap(&caution, 72).len() as f64 + 2.5;
     p.line(MARGIN, cy - 3.2, right, cy - 3.2, 0.3);
-    for line in wrap(caution, 72) {
+    for line in wrap(&caution, 72) {
         p.text(MARGIN, cy, 2.4, false, "start", &line);
         cy += 3.3;
     }
-    p
-}
-
-/// One pairing chart page: rows my start, columns the buddy's, cells my turn, each on its
-/// own gauge; the planned cell boxed.
-fn chart_page(team: &TeamInput, chart: &PairChart) -> Page {
-    let mut p = Page::new();
-    let me = &team.divers[chart.me];
-    let buddy = &team.divers[chart.buddy];
-    let (mu, bu) = (chart.my_gauge.label(), chart.buddy_gauge.label());
-    let mut y = MARGIN + 5.0;
-    p.text(
-        MARGIN,
-        y,
-        4.2,
-        true,
-        "start",
-        &format!("{}: turn against {}", me.name, buddy.name),
-    );
-    y += 4.5;
-    for line in wrap(
-        &format!(
-            "Rows: {}'s start ({mu}). Columns: {}'s start ({bu}). Cells: {}'s turn ({mu}). \
-             Between lines, read the next higher own start and the next lower teammate start; \
-             with more teammates keep the highest turn.",
-            me.name, buddy.name, me.name
-        ),
-        64,
-    ) {
-        p.text(MARGIN, y, 2.5, false, "start", &line);
-        y += 3.1;
-    }
-    y += 1.5;
-    let cols = chart.buddy_starts.len().max(1);
-    let rows = chart.my_starts.len().max(1);
-    let label_w = 11.0;
-    let cell_w = ((PAGE_W - 2.0 * MARGIN - label_w) / cols as f64).min(9.0);
-    let cell_h = ((PAGE_H - y - MARGIN - 6.0) / (rows as f64 + 1.0)).min(6.5);
-    let size = (cell_w * 0.36).min(cell_h * 0.62).min(3.2);
-    let x0 = MARGIN + label_w;
-    p.text(
-        MARGIN,
-        y + cell_h * 0.7,
-        size * 0.9,
-        false,
-        "start",
-        &format!("{mu}\\{bu}"),
-    );
-    for (c, b) in chart.buddy_starts.iter().enumerate() {
-        p.text(
-            x0 + cell_w * (c as f64 + 0.5),
-            y + cell_h * 0.7,
-            size,
-            true,
-            "middle",
-            &shown::num(*b),
-        );
-    }
-    p.line(
-        MARGIN,
-        y + cell_h,
-        x0 + cell_w * cols as f64,
-        y + cell_h,
-        0.3,
-    );
-    let planned_me = chart.my_gauge.value(me.start);
-    let planned_buddy = chart.buddy_gauge.value(buddy.start);
-    for (r, m) in chart.my_starts.iter().enumerate() {
-        let ry = y + cell_h * (r as f64 + 1.0);
-        p.text(
-            MARGIN,
-            ry + cell_h * 0.7,
-            size,
-            true,
-            "start",
-            &shown::num(*m),
-        );
-        for (c, b) in chart.buddy_starts.iter().enumerate() {
-            let text = chart.turns[r][c]
-                .map(shown::turn)
-                .unwrap_or_else(|| "-".into());
-            let cx = x0 + cell_w * c as f64;
-            p.text(
-                cx + cell_w * 0.5,
-                ry + cell_h * 0.7,
-                size,
-                false,
-                "middle",
-                &text,
-            );
-            if (m - planned_me).abs() < 1e-6 && (b - planned_buddy).abs() < 1e-6 {
-                p.rect(cx + 0.3, ry + 0.3, cell_w - 0.6, cell_h - 0.6, 0.4);
-            }
-        }
-    }
-    p.line(x0, y, x0, y + cell_h * (rows as f64 + 1.0), 0.3);
-    p.text(
-        MARGIN,
-        PAGE_H - MARGIN,
-        2.3,
-        false,
-        "start",
-        "Boxed: the planned starts. '-': a start the cylinders cannot take. Check by hand.",
-    );
     p
 }
 
@@ -356,12 +260,15 @@ pub fn card_svg(
     charts: &[PairChart],
 ) -> String {
     let mut pages = vec![card_page(heading, team, plan)];
-    pages.extend(charts.iter().map(|c| chart_page(team, c)));
-    svg_of(&pages, &format!("Team card: {}", plan.names().join(", ")))
+    pages.extend(charts.iter().map(|c| super::chart_svg::chart_page(team, c)));
+    svg_of(
+        &pages,
+        &tr_with("Team card: {0}", &[&plan.names().join(", ")]),
+    )
 }
 
 /// Pages stacked top to bottom, each 100 × 150 mm, separated by a cut line.
-fn svg_of(pages: &[Page], title: &str) -> String {
+pub(super) fn svg_of(pages: &[Page], title: &str) -> String {
     let total_h = PAGE_H * pages.len().max(1) as f64;
     let mut s = format!(
         "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n\
@@ -382,12 +289,6 @@ fn svg_of(pages: &[Page], title: &str) -> String {
     }
     s.push_str("</svg>\n");
     s
-}
-
-/// Pairing charts only, one page each (no card page).
-pub fn charts_svg(team: &TeamInput, charts: &[PairChart]) -> String {
-    let pages: Vec<Page> = charts.iter().map(|c| chart_page(team, c)).collect();
-    svg_of(&pages, "Pairing charts")
 }
 
 #[cfg(test)]

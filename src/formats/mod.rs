@@ -2,5 +2,6 @@
 //! No I/O here: callers read and write the text.
 
 pub mod card_svg;
+mod chart_svg;
 pub mod cylinder_spec;
 pub mod team_file;

@@ -6,6 +6,7 @@ use super::hand_check::{down1, pencil_content};
 use super::matching::TeamPlan;
 use super::shown;
 use super::team::TeamInput;
+use crate::i18n::tr_with;
 
 /// The team's hand allowance as the pencil gets it: the smallest of the divers' pencil
 /// contents (each as `hand_working` prints it), and that content × the rule's fraction,
@@ -41,12 +42,15 @@ pub fn pencil_allowance(team: &TeamInput, plan: &TeamPlan) -> PencilAllowance {
 pub fn allowance_sentence(team: &TeamInput, plan: &TeamPlan) -> String {
     let vu = team.units.volume_label();
     let a = pencil_allowance(team, plan);
-    format!(
-        "Allowance by hand: the smallest content {} {vu} ({}) ÷ {} = {} {vu}",
-        shown::num(a.content),
-        plan.divers[a.diver].name,
-        team.rule.denominator(),
-        shown::num(a.allowance)
+    tr_with(
+        "Allowance by hand: the smallest content {0} {1} ({2}) ÷ {3} = {4} {1}",
+        &[
+            &shown::num(a.content),
+            &vu,
+            &plan.divers[a.diver].name,
+            &team.rule.denominator(),
+            &shown::num(a.allowance),
+        ],
     )
 }
 
@@ -111,10 +115,6 @@ pub fn allowance_source_sentence(team: &TeamInput, plan: &TeamPlan) -> String {
     let n = team.rule.denominator();
     let whole = |x: f64| shown::num(shown::whole_down(x));
     let sources = allowance_sources(team, plan);
-    let how = |m: ModelKind| match m {
-        ModelKind::Hand => "by hand",
-        ModelKind::Real => "by real gas",
-    };
     let sum = |a: &AllowanceSource| {
         format!(
             "{} {vu} ({}) ÷ {n} = {} {vu}",
@@ -131,37 +131,51 @@ pub fn allowance_source_sentence(team: &TeamInput, plan: &TeamPlan) -> String {
     };
     match sources.as_slice() {
         [] => String::new(),
-        [a] => format!(
-            "Each diver may use {} {vu} going in: {}, {}. {} controls: least usable gas.",
-            whole(a.allowance),
-            sum(a),
-            how(a.model),
-            plan.divers[a.diver].name
-        ),
+        [a] => {
+            let args: [&dyn std::fmt::Display; 3] = [&whole(a.allowance), &vu, &sum(a)];
+            let controls = &plan.divers[a.diver].name;
+            match a.model {
+                ModelKind::Hand => tr_with(
+                    "Each diver may use {0} {1} going in: {2}, by hand. {3} controls: least usable gas.",
+                    &[args[0], args[1], args[2], controls],
+                ),
+                ModelKind::Real => tr_with(
+                    "Each diver may use {0} {1} going in: {2}, by real gas. {3} controls: least usable gas.",
+                    &[args[0], args[1], args[2], controls],
+                ),
+            }
+        }
         _ => {
             let parts: Vec<String> = sources
                 .iter()
                 .map(|a| {
-                    format!(
-                        "Turns of {} use the allowance {}: {}.",
-                        names(&a.turns),
-                        how(a.model),
-                        sum(a)
-                    )
+                    let (who, how) = (names(&a.turns), sum(a));
+                    match a.model {
+                        ModelKind::Hand => tr_with(
+                            "Turns of {0} use the allowance by hand: {1}.",
+                            &[&who, &how],
+                        ),
+                        ModelKind::Real => tr_with(
+                            "Turns of {0} use the allowance by real gas: {1}.",
+                            &[&who, &how],
+                        ),
+                    }
                 })
                 .collect();
             let mut who: Vec<usize> = sources.iter().map(|a| a.diver).collect();
             who.dedup();
-            let verb = if who.len() == 1 {
-                "controls"
-            } else {
-                "control"
+            let verdict = match who.split_last() {
+                Some((last, [])) => tr_with(
+                    "{0} controls: least usable gas in each method.",
+                    &[&plan.divers[*last].name],
+                ),
+                Some((last, rest)) => tr_with(
+                    "{0} and {1} control: least usable gas in each method.",
+                    &[&names(rest), &plan.divers[*last].name],
+                ),
+                None => String::new(),
             };
-            format!(
-                "{} {} {verb}: least usable gas in each method.",
-                parts.join(" "),
-                names(&who).replace(", ", " and ")
-            )
+            format!("{} {verdict}", parts.join(" "))
         }
     }
 }

@@ -2,6 +2,7 @@
 //! divers should check their own stamps.
 
 use super::cylinders::{CylinderSet, CylinderSpec};
+use crate::i18n::{tr, tr_with};
 
 /// Cylinder material, for the locker's description.
 #[derive(Clone, Copy, Debug, PartialEq, Eq, serde::Serialize, serde::Deserialize, Default)]
@@ -27,6 +28,16 @@ impl Material {
             Material::Composite => "composite",
         }
     }
+
+    /// The material's word as people read it, in this thread's language ("steel" in
+    /// English); names and files keep [`Material::name`].
+    pub fn shown_name(self) -> String {
+        match self {
+            Material::Steel => tr("steel"),
+            Material::Aluminium => tr("aluminium"),
+            Material::Composite => tr("composite"),
+        }
+    }
 }
 
 /// One generic preset.
@@ -38,6 +49,22 @@ pub struct Preset {
     pub set: CylinderSet,
     /// What the cylinders are made of.
     pub material: Material,
+}
+
+impl Preset {
+    /// The preset's name as people read it, in this thread's language; in English the
+    /// same as [`Preset::name`], which is what files, the locker and labels keep.
+    pub fn shown_name(&self) -> String {
+        let size = self.set.spec.describe();
+        let named = self.name.contains(self.material.name());
+        match (self.set.count, self.set.independent, named, self.material) {
+            (2, true, _, Material::Aluminium) => tr_with("Sidemount aluminium {0}", &[&size]),
+            (2, false, true, Material::Steel) => tr_with("Twin steel {0}", &[&size]),
+            (1, _, true, Material::Aluminium) => tr_with("Single aluminium {0}", &[&size]),
+            (1, _, true, Material::Steel) => tr_with("Single steel {0}", &[&size]),
+            _ => self.set.describe(),
+        }
+    }
 }
 
 const fn stamped(count: u8, water_l: f64, working_bar: f64) -> CylinderSet {
@@ -239,6 +266,10 @@ mod tests {
             assert!(all.iter().all(|p| p.name != old), "{old}");
         }
         assert_eq!(current_preset_name("My twins"), "My twins");
+        // In English a preset is shown by its own name.
+        for p in &all {
+            assert_eq!(p.shown_name(), p.name);
+        }
         // Every name fits a locker entry's name (40 characters).
         assert!(all.iter().all(|p| p.name.chars().count() <= 40));
     }

@@ -70,7 +70,7 @@ pub fn pair_chart(
     if me == buddy || me >= team.divers.len() || buddy >= team.divers.len() {
         return Err(InputError::new(
             "divers",
-            "a chart needs two different divers of the team",
+            crate::i18n::tr("a chart needs two different divers of the team"),
         ));
     }
     let (my_gauge, buddy_gauge) = (team.gauge_of(me), team.gauge_of(buddy));

@@ -8,6 +8,7 @@ use super::gas_model::{ContentModel, ModelKind};
 use super::mix::Mix;
 use super::real_gas::RealGasModel;
 use super::units::{Pressure, Temperature, Volume};
+use crate::i18n::tr_with;
 
 /// How one cylinder of the set is described.
 #[derive(Clone, Copy, Debug, PartialEq, Serialize, Deserialize)]
@@ -158,13 +159,14 @@ impl CylinderSet {
     }
     /// The set's one name, the same in the app, on the command line and on the card:
     /// "Single 15 L 232 bar", "Twin 12 L 232 bar", "2 × 12 L 232 bar, independent",
-    /// "3 × 40 cu ft 3000 psi".
+    /// "3 × 40 cu ft 3000 psi". The words are in this thread's language, the figures
+    /// with its decimal separator.
     pub fn describe(&self) -> String {
         let one = self.spec.describe();
         match self.count {
-            1 => format!("Single {one}"),
-            2 if self.independent => format!("2 × {one}, independent"),
-            2 => format!("Twin {one}"),
+            1 => tr_with("Single {0}", &[&one]),
+            2 if self.independent => tr_with("2 × {0}, independent", &[&one]),
+            2 => tr_with("Twin {0}", &[&one]),
             n => format!("{n} × {one}"),
         }
     }

@@ -1,6 +1,7 @@
 //! Input errors that name the field and the allowed range.
 
 use super::shown;
+use crate::i18n::{tr, tr_with};
 
 /// A rejected input: which field, and why (with the allowed range).
 #[derive(Clone, Debug, PartialEq)]
@@ -39,16 +40,14 @@ pub fn check_range(
     unit: &str,
 ) -> Result<(), InputError> {
     if !value.is_finite() {
-        return Err(InputError::new(field, "must be a number"));
+        return Err(InputError::new(field, tr("must be a number")));
     }
     if value < lo || value > hi {
         return Err(InputError::new(
             field,
-            format!(
-                "{} {unit} is out of range; allowed {} to {} {unit}",
-                shown::num(value),
-                shown::num(lo),
-                shown::num(hi)
+            tr_with(
+                "{0} {1} is out of range; allowed {2} to {3} {1}",
+                &[&shown::num(value), &unit, &shown::num(lo), &shown::num(hi)],
             ),
         ));
     }

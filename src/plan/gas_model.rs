@@ -20,11 +20,11 @@ pub enum ModelKind {
 }
 
 impl ModelKind {
-    /// The model's name in words: "real gas" or "tank factor".
-    pub fn describe(self) -> &'static str {
+    /// The model's name in words, in this thread's language: "real gas" or "tank factor".
+    pub fn describe(self) -> String {
         match self {
-            ModelKind::Real => "real gas",
-            ModelKind::Hand => "tank factor",
+            ModelKind::Real => crate::i18n::tr("real gas"),
+            ModelKind::Hand => crate::i18n::tr("tank factor"),
         }
     }
 }

@@ -17,6 +17,7 @@ use super::rounding::round_up_to_step;
 use super::shown;
 use super::team::TeamInput;
 use super::units::{BAR_PER_PSI, LITRES_PER_CUFT, PressureUnit, UnitSystem};
+use crate::i18n::{tr, tr_with};
 
 /// One diver's pencil sums.
 #[derive(Clone, Debug, PartialEq)]
@@ -135,15 +136,17 @@ pub fn hand_working(team: &TeamInput, plan: &TeamPlan, i: usize) -> HandWorking 
     let drop = if c > 0.0 { down1(start * a / c) } else { 0.0 };
     let exact = up1(start - drop);
     let rounded = round_up_to_step(exact, g.step).min(start);
-    let turn = format!(
-        "{} {gu} × {} {vu} ÷ {} {vu} = {} {gu} to spend; {} − {} = {} {gu}",
-        shown::num(start),
-        shown::num(a),
-        shown::num(c),
-        shown::num(drop),
-        shown::num(start),
-        shown::num(drop),
-        shown::num(exact),
+    let turn = tr_with(
+        "{0} {1} × {2} {3} ÷ {4} {3} = {5} {1} to spend; {0} − {5} = {6} {1}",
+        &[
+            &shown::num(start),
+            &gu,
+            &shown::num(a),
+            &vu,
+            &shown::num(c),
+            &shown::num(drop),
+            &shown::num(exact),
+        ],
     );
     HandWorking {
         content,
@@ -164,23 +167,31 @@ pub fn turn_sentence(plan: &TeamPlan, i: usize) -> String {
     let start = g.value(p.start);
     let hand = g.value(p.turn_hand);
     let real = g.value(p.turn_real);
-    let shown = shown::num(p.turn_shown_value);
+    let turn = shown::num(p.turn_shown_value);
     let capped = p.turn_shown_value >= start - 1e-9;
-    let rounding = if capped {
-        format!("(capped at the start {} {gu})", shown::num(start))
-    } else {
-        format!("(rounded up to {} {gu})", shown::num(g.step))
+    let (own, other) = match p.set_by {
+        super::gas_model::ModelKind::Hand => (hand, real),
+        super::gas_model::ModelKind::Real => (real, hand),
     };
-    match p.set_by {
-        super::gas_model::ModelKind::Hand => format!(
-            "hand {} → {shown} {gu} {rounding}; real gas {} {gu} is lower, not used",
-            shown::num(up1(hand)),
-            shown::num(up1(real))
+    let (own, other) = (shown::num(up1(own)), shown::num(up1(other)));
+    let mark = shown::num(if capped { start } else { g.step });
+    let args: [&dyn std::fmt::Display; 5] = [&own, &turn, &gu, &mark, &other];
+    match (p.set_by, capped) {
+        (super::gas_model::ModelKind::Hand, false) => tr_with(
+            "hand {0} → {1} {2} (rounded up to {3} {2}); real gas {4} {2} is lower, not used",
+            &args,
         ),
-        super::gas_model::ModelKind::Real => format!(
-            "real gas {} → {shown} {gu} {rounding}, higher than hand {} {gu}, so real gas sets it",
-            shown::num(up1(real)),
-            shown::num(up1(hand))
+        (super::gas_model::ModelKind::Hand, true) => tr_with(
+            "hand {0} → {1} {2} (capped at the start {3} {2}); real gas {4} {2} is lower, not used",
+            &args,
+        ),
+        (super::gas_model::ModelKind::Real, false) => tr_with(
+            "real gas {0} → {1} {2} (rounded up to {3} {2}), higher than hand {4} {2}, so real gas sets it",
+            &args,
+        ),
+        (super::gas_model::ModelKind::Real, true) => tr_with(
+            "real gas {0} → {1} {2} (capped at the start {3} {2}), higher than hand {4} {2}, so real gas sets it",
+            &args,
         ),
     }
 }
@@ -191,18 +202,18 @@ pub fn turn_how(plan: &TeamPlan, i: usize) -> String {
     let p = &plan.divers[i];
     let g = p.gauge;
     if p.turn_shown_value >= g.value(p.start) - 1e-9 {
-        return "The turn is the start itself: almost no gas to spend before turning.".to_string();
+        return tr("The turn is the start itself: almost no gas to spend before turning.");
     }
-    let mark = format!(
-        "rounded up to the next {} {} mark",
-        shown::num(g.step),
-        g.label()
-    );
+    let (step, unit) = (shown::num(g.step), g.label());
     match p.set_by {
-        super::gas_model::ModelKind::Hand => format!("By hand (tank factor), {mark}."),
-        super::gas_model::ModelKind::Real => {
-            format!("By real gas, more careful here than the hand method, {mark}.")
-        }
+        super::gas_model::ModelKind::Hand => tr_with(
+            "By hand (tank factor), rounded up to the next {0} {1} mark.",
+            &[&step, &unit],
+        ),
+        super::gas_model::ModelKind::Real => tr_with(
+            "By real gas, more careful here than the hand method, rounded up to the next {0} {1} mark.",
+            &[&step, &unit],
+        ),
     }
 }
 

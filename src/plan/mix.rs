@@ -73,14 +73,15 @@ impl Mix {
     }
 
     /// A short trade label, capitalised like a set name: "Air", "EAN32", "Tx 21/35", "Heliox 21/79".
+    /// "Air" and "Oxygen" are in this thread's language; the mix codes are the same in all.
     pub fn label(&self) -> String {
         let o2 = (self.o2 * 100.0).round() as i64;
         let he = (self.he * 100.0).round() as i64;
         if self.is_air() {
-            "Air".to_string()
+            crate::i18n::tr("Air")
         } else if he == 0 {
             if o2 == 100 {
-                "Oxygen".to_string()
+                crate::i18n::tr("Oxygen")
             } else {
                 format!("EAN{o2}")
             }

@@ -2,6 +2,7 @@
 //! bring both out if the other loses everything at the turn?
 
 use super::units::Volume;
+use crate::i18n::{tr, tr_with};
 
 /// Result of the pairwise check.
 #[derive(Clone, Debug, PartialEq)]
@@ -44,26 +45,31 @@ pub fn margin_for_display(margin: f64) -> f64 {
 /// One sentence saying what the margin means for this team.
 pub fn describe_margin(check: &StressCheck, names: &[String]) -> String {
     match check.worst_pair {
-        None => "No gas is spent before the turn, so there is nothing to share.".to_string(),
+        None => tr("No gas is spent before the turn, so there is nothing to share."),
         Some((fail, donor)) => {
             let m = margin_for_display(check.margin);
+            let shown_m = super::shown::fixed(m, 2);
             let verdict = if m < 1.0 {
-                format!(
-                    "Not enough to bring a teammate out even at normal breathing (only {m:.2} ×): do not dive this plan."
+                tr_with(
+                    "Not enough to bring a teammate out even at normal breathing (only {0} ×): do not dive this plan.",
+                    &[&shown_m],
                 )
             } else if m < 1.5 {
-                format!(
-                    "Enough to bring a teammate out at {m:.2} × normal breathing; at 1.5 × it is not: consider a stricter rule."
+                tr_with(
+                    "Enough to bring a teammate out at {0} × normal breathing; at 1.5 × it is not: consider a stricter rule.",
+                    &[&shown_m],
                 )
             } else {
-                format!(
-                    "Enough to bring a teammate out at up to {m:.2} × normal breathing (1.5 to 2 × is common under stress)."
+                tr_with(
+                    "Enough to bring a teammate out at up to {0} × normal breathing (1.5 to 2 × is common under stress).",
+                    &[&shown_m],
                 )
             };
-            format!(
-                "{verdict} Worst case: {} out of gas at the turn, sharing with {}.",
-                names[fail], names[donor]
-            )
+            let worst = tr_with(
+                "Worst case: {0} out of gas at the turn, sharing with {1}.",
+                &[&names[fail], &names[donor]],
+            );
+            format!("{verdict} {worst}")
         }
     }
 }
@@ -76,11 +82,13 @@ pub fn describe_margin_at_first_turn(
     names: &[String],
 ) -> String {
     match (at_turn, first, minutes) {
-        (Some(check), Some(i), Some(m)) if check.margin.is_finite() => format!(
-            "With the breathing rates entered, the team turns when {} does, after about {} min; the others have used less by then, so it is enough at up to {} × normal breathing.",
-            names[i],
-            super::shown::minutes(m),
-            super::shown::fixed(margin_for_display(check.margin), 2)
+        (Some(check), Some(i), Some(m)) if check.margin.is_finite() => tr_with(
+            "With the breathing rates entered, the team turns when {0} does, after about {1} min; the others have used less by then, so it is enough at up to {2} × normal breathing.",
+            &[
+                &names[i],
+                &super::shown::minutes(m),
+                &super::shown::fixed(margin_for_display(check.margin), 2),
+            ],
         ),
         _ => String::new(),
     }

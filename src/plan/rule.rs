@@ -2,6 +2,8 @@
 
 use serde::{Deserialize, Serialize};
 
+use crate::i18n::tr;
+
 /// A gas rule: going in, each diver may spend the rule's fraction of the smallest
 /// diver's gas, so every diver spends the same volume.
 #[derive(Clone, Copy, Debug, PartialEq, Eq, Serialize, Deserialize, Default)]
@@ -57,6 +59,40 @@ impl Rule {
         }
     }
 
+    /// The lowercase name as people read it, in this thread's language ("thirds" in
+    /// English); files keep [`Rule::name`].
+    pub fn shown_name(self) -> String {
+        match self {
+            Rule::Halves => tr("halves"),
+            Rule::Thirds => tr("thirds"),
+            Rule::Quarters => tr("quarters"),
+            Rule::Fifths => tr("fifths"),
+            Rule::Sixths => tr("sixths"),
+        }
+    }
+
+    /// The name as a title or a choice, in this thread's language ("Thirds").
+    pub fn title(self) -> String {
+        match self {
+            Rule::Halves => tr("Halves"),
+            Rule::Thirds => tr("Thirds"),
+            Rule::Quarters => tr("Quarters"),
+            Rule::Fifths => tr("Fifths"),
+            Rule::Sixths => tr("Sixths"),
+        }
+    }
+
+    /// The rule's full name, in this thread's language ("Rule of thirds").
+    pub fn rule_of(self) -> String {
+        match self {
+            Rule::Halves => tr("Rule of halves"),
+            Rule::Thirds => tr("Rule of thirds"),
+            Rule::Quarters => tr("Rule of quarters"),
+            Rule::Fifths => tr("Rule of fifths"),
+            Rule::Sixths => tr("Rule of sixths"),
+        }
+    }
+
     /// The rule of that name, in any case, ignoring surrounding spaces; `None` if there
     /// is none.
     pub fn parse(s: &str) -> Option<Rule> {
@@ -94,5 +130,11 @@ mod tests {
         assert_eq!(Rule::parse("Thirds"), Some(Rule::Thirds));
         assert_eq!(Rule::parse("sevenths"), None);
         assert!(!Rule::Halves.fit_for_overhead());
+        // In English the shown words are the file's name, its title and "Rule of …".
+        for r in Rule::ALL {
+            assert_eq!(r.shown_name(), r.name());
+            assert_eq!(r.title(), crate::plan::text::first_upper(r.name()));
+            assert_eq!(r.rule_of(), format!("Rule of {}", r.name()));
+        }
     }
 }

@@ -8,6 +8,7 @@ use super::rule::Rule;
 use super::shown;
 use super::units::{Depth, Gauge, Pressure, PressureUnit, Temperature, UnitSystem, Water};
 use super::warning::{OVERFILL_SHARE, Supply, Warning};
+use crate::i18n::{tr, tr_with};
 
 /// Fewest divers in a team.
 pub const MIN_DIVERS: usize = 2;
@@ -92,9 +93,9 @@ impl TeamInput {
         if self.divers.len() < MIN_DIVERS || self.divers.len() > MAX_DIVERS {
             return Err(InputError::new(
                 "divers",
-                format!(
-                    "a team has {MIN_DIVERS} to {MAX_DIVERS} divers; this one has {}",
-                    self.divers.len()
+                tr_with(
+                    "a team has {0} to {1} divers; this one has {2}",
+                    &[&MIN_DIVERS, &MAX_DIVERS, &self.divers.len()],
                 ),
             ));
         }
@@ -132,9 +133,9 @@ impl TeamInput {
             {
                 return Err(InputError::new(
                     format!("divers[{i}].name"),
-                    format!(
-                        "another diver is already called {}; names must differ",
-                        d.name.trim()
+                    tr_with(
+                        "another diver is already called {0}; names must differ",
+                        &[&d.name.trim()],
                     ),
                 ));
             }
@@ -251,9 +252,9 @@ pub(crate) fn validate_cylinders(
     if set.count < 1 || set.count > MAX_CYLINDERS {
         return Err(InputError::new(
             format!("{field}.count"),
-            format!(
-                "{} cylinders is out of range; allowed 1 to {MAX_CYLINDERS}",
-                set.count
+            tr_with(
+                "{0} cylinders is out of range; allowed 1 to {1}",
+                &[&set.count, &MAX_CYLINDERS],
             ),
         ));
     }
@@ -299,13 +300,15 @@ pub(crate) fn validate_cylinders(
             if !(MIN_WATER_L..=MAX_WATER_L).contains(&w) {
                 return Err(InputError::new(
                     format!("{field}.rated_cuft"),
-                    format!(
-                        "{} cu ft at {} psi means {} L of water per cylinder; allowed {} to {} L",
-                        shown::num(rated_cuft),
-                        shown::num(rated_psi),
-                        shown::fixed(w, 1),
-                        shown::num(MIN_WATER_L),
-                        shown::num(MAX_WATER_L)
+                    tr_with(
+                        "{0} cu ft at {1} psi means {2} L of water per cylinder; allowed {3} to {4} L",
+                        &[
+                            &shown::num(rated_cuft),
+                            &shown::num(rated_psi),
+                            &shown::fixed(w, 1),
+                            &shown::num(MIN_WATER_L),
+                            &shown::num(MAX_WATER_L),
+                        ],
                     ),
                 ));
             }
@@ -316,15 +319,18 @@ pub(crate) fn validate_cylinders(
 }
 
 pub(crate) fn validate_mix(field: &str, mix: &Mix) -> Result<(), InputError> {
-    check_range(&format!("{field}.o2"), mix.o2, 0.05, 1.0, "(fraction)")?;
-    check_range(&format!("{field}.he"), mix.he, 0.0, 0.95, "(fraction)")?;
+    let fraction = tr("(fraction)");
+    check_range(&format!("{field}.o2"), mix.o2, 0.05, 1.0, &fraction)?;
+    check_range(&format!("{field}.he"), mix.he, 0.0, 0.95, &fraction)?;
     if mix.o2 + mix.he > 1.0 + 1e-9 {
         return Err(InputError::new(
             format!("{field}.he"),
-            format!(
-                "O2 {:.0} % + He {:.0} % is above 100 %",
-                mix.o2 * 100.0,
-                mix.he * 100.0
+            tr_with(
+                "O2 {0} % + He {1} % is above 100 %",
+                &[
+                    &format!("{:.0}", mix.o2 * 100.0),
+                    &format!("{:.0}", mix.he * 100.0),
+                ],
             ),
         ));
     }
@@ -357,7 +363,7 @@ fn validate_diver(u: UnitSystem, g: Gauge, i: usize, d: &DiverInput) -> Result<(
     if name.is_empty() || name.chars().count() > 24 {
         return Err(InputError::new(
             format!("{f}.name"),
-            "a name of 1 to 24 characters is needed",
+            tr("a name of 1 to 24 characters is needed"),
         ));
     }
     super::text::check_text(&format!("{f}.name"), name)?;
@@ -399,15 +405,14 @@ pub fn validate_start(
     let unit = g.label();
     let v = g.value(start);
     if !v.is_finite() {
-        return Err(InputError::new(field, "must be a number"));
+        return Err(InputError::new(field, tr("must be a number")));
     }
     if v < g.step - 1e-9 {
         return Err(InputError::new(
             field,
-            format!(
-                "{} {unit} is not a fill; a start pressure is at least one graduation ({} {unit})",
-                shown::num(shown::down(v, 2)),
-                shown::num(g.step)
+            tr_with(
+                "{0} {1} is not a fill; a start pressure is at least one graduation ({2} {1})",
+                &[&shown::num(shown::down(v, 2)), &unit, &shown::num(g.step)],
             ),
         ));
     }
@@ -415,21 +420,27 @@ pub fn validate_start(
     if start.bar() > cap + 1e-9 {
         return Err(InputError::new(
             field,
-            format!(
-                "{} {unit} is more than 1.5 × the {} {unit} working pressure (limit {} {unit}): check the gauge and bar or psi",
-                shown::num(v.round()),
-                shown::num(shown::down(g.value(working), 1)),
-                shown::start(g.value(Pressure::from_bar(cap)))
+            tr_with(
+                "{0} {1} is more than 1.5 × the {2} {1} working pressure (limit {3} {1}): check the gauge and bar or psi",
+                &[
+                    &shown::num(v.round()),
+                    &unit,
+                    &shown::num(shown::down(g.value(working), 1)),
+                    &shown::start(g.value(Pressure::from_bar(cap))),
+                ],
             ),
         ));
     }
     if start.bar() > MAX_START_BAR + 1e-9 {
         return Err(InputError::new(
             field,
-            format!(
-                "{} {unit} is above the highest pressure planned for ({} {unit})",
-                shown::num(v.round()),
-                shown::start(g.value(Pressure::from_bar(MAX_START_BAR)))
+            tr_with(
+                "{0} {1} is above the highest pressure planned for ({2} {1})",
+                &[
+                    &shown::num(v.round()),
+                    &unit,
+                    &shown::start(g.value(Pressure::from_bar(MAX_START_BAR))),
+                ],
             ),
         ));
     }

@@ -9,6 +9,7 @@
 use unicode_normalization::UnicodeNormalization;
 
 use super::error::InputError;
+use crate::i18n::tr_with;
 
 /// Why `c` may not stand in a name or note, if it may not.
 pub fn refused_char(c: char) -> Option<&'static str> {
@@ -35,14 +36,30 @@ pub fn check_text(field: &str, text: &str) -> Result<(), InputError> {
         .find_map(|(i, c)| refused_char(c).map(|why| (i, c, why)))
     {
         None => Ok(()),
-        Some((i, c, why)) => Err(InputError::new(
-            field,
-            format!(
-                "character {} is U+{:04X}, {why}; names and notes take letters, digits, spaces and punctuation only",
-                i + 1,
-                c as u32
-            ),
-        )),
+        Some((i, c, why)) => {
+            let (at, code) = (i + 1, format!("U+{:04X}", c as u32));
+            let args: [&dyn std::fmt::Display; 2] = [&at, &code];
+            // One whole sentence per reason, so each language words it its own way.
+            let message = match why {
+                "a control character" => tr_with(
+                    "character {0} is {1}, a control character; names and notes take letters, digits, spaces and punctuation only",
+                    &args,
+                ),
+                "a Unicode non-character" => tr_with(
+                    "character {0} is {1}, a Unicode non-character; names and notes take letters, digits, spaces and punctuation only",
+                    &args,
+                ),
+                "a bidirectional control" => tr_with(
+                    "character {0} is {1}, a bidirectional control; names and notes take letters, digits, spaces and punctuation only",
+                    &args,
+                ),
+                _ => tr_with(
+                    "character {0} is {1}, a line or paragraph separator; names and notes take letters, digits, spaces and punctuation only",
+                    &args,
+                ),
+            };
+            Err(InputError::new(field, message))
+        }
     }
 }
 

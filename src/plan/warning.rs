@@ -2,8 +2,8 @@
 //! kind, the figures), put into words only where they are shown.
 
 use super::shown;
-use super::text::first_upper;
 use super::units::PressureUnit;
+use crate::i18n::{tr, tr_with};
 
 /// Which of a diver's gas supplies a warning is about.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
@@ -12,15 +12,6 @@ pub enum Supply {
     Main,
     /// The stage.
     Stage,
-}
-
-impl Supply {
-    fn noun(self) -> &'static str {
-        match self {
-            Supply::Main => "start",
-            Supply::Stage => "stage start",
-        }
-    }
 }
 
 /// One warning, with its figures in the diver's own gauge unit.
@@ -99,58 +90,76 @@ impl Warning {
     /// The warning in words, without the diver's name (for a line on that diver's card).
     pub fn detail(&self) -> String {
         match *self {
-            Warning::HalvesInOverhead => {
-                "Halves is an open-water rule; it leaves no reserve for a teammate in an overhead environment."
-                    .to_string()
-            }
-            Warning::LoneStage { .. } => {
-                "Only one diver carries a stage: it is planned on its own, with no teammate's stage to match."
-                    .to_string()
-            }
+            Warning::HalvesInOverhead => tr(
+                "Halves is an open-water rule; it leaves no reserve for a teammate in an overhead environment.",
+            ),
+            Warning::LoneStage { .. } => tr(
+                "Only one diver carries a stage: it is planned on its own, with no teammate's stage to match.",
+            ),
             Warning::AboveWorking {
                 supply,
                 start,
                 working,
                 unit,
                 ..
-            } => format!(
-                "{} {} {u} is above the working pressure {} {u}; check the fill and the cylinder's rating.",
-                first_upper(supply.noun()),
-                shown::num(start),
-                shown::num(working),
-                u = unit.label()
-            ),
+            } => {
+                let [s, u, w] = figures(start, working, unit);
+                let args: [&dyn std::fmt::Display; 3] = [&s, &u, &w];
+                match supply {
+                    Supply::Main => tr_with(
+                        "Start {0} {1} is above the working pressure {2} {1}; check the fill and the cylinder's rating.",
+                        &args,
+                    ),
+                    Supply::Stage => tr_with(
+                        "Stage start {0} {1} is above the working pressure {2} {1}; check the fill and the cylinder's rating.",
+                        &args,
+                    ),
+                }
+            }
             Warning::Overfill {
                 supply,
                 start,
                 working,
                 unit,
                 ..
-            } => format!(
-                "Overfill: {} {} {u} is more than 10 % above the working pressure {} {u}. Check the cylinder is rated for it, or do not use it.",
-                supply.noun(),
-                shown::num(start),
-                shown::num(working),
-                u = unit.label()
-            ),
+            } => {
+                let [s, u, w] = figures(start, working, unit);
+                let args: [&dyn std::fmt::Display; 3] = [&s, &u, &w];
+                match supply {
+                    Supply::Main => tr_with(
+                        "Overfill: start {0} {1} is more than 10 % above the working pressure {2} {1}. Check the cylinder is rated for it, or do not use it.",
+                        &args,
+                    ),
+                    Supply::Stage => tr_with(
+                        "Overfill: stage start {0} {1} is more than 10 % above the working pressure {2} {1}. Check the cylinder is rated for it, or do not use it.",
+                        &args,
+                    ),
+                }
+            }
             Warning::LowFill {
                 supply,
                 start,
                 unit,
                 ..
-            } => format!(
-                "{} {} {} is under half the working pressure; a low fill leaves little to share.",
-                first_upper(supply.noun()),
-                shown::num(start),
-                unit.label()
-            ),
-            Warning::TurnEqualsStart { .. } => {
-                "The turn equals the start pressure; at this graduation there is no gas to spend."
-                    .to_string()
+            } => {
+                let [s, u, _] = figures(start, 0.0, unit);
+                let args: [&dyn std::fmt::Display; 2] = [&s, &u];
+                match supply {
+                    Supply::Main => tr_with(
+                        "Start {0} {1} is under half the working pressure; a low fill leaves little to share.",
+                        &args,
+                    ),
+                    Supply::Stage => tr_with(
+                        "Stage start {0} {1} is under half the working pressure; a low fill leaves little to share.",
+                        &args,
+                    ),
+                }
             }
+            Warning::TurnEqualsStart { .. } => tr(
+                "The turn equals the start pressure; at this graduation there is no gas to spend.",
+            ),
             Warning::NoGasSpent => {
-                "No gas is spent before the turn; the out-of-gas check has nothing to test."
-                    .to_string()
+                tr("No gas is spent before the turn; the out-of-gas check has nothing to test.")
             }
         }
     }
@@ -162,6 +171,16 @@ impl Warning {
             None => self.detail(),
         }
     }
+}
+
+/// A warning's figures as its sentences take them: {0} the start, {1} the unit, {2} the
+/// working pressure.
+fn figures(start: f64, working: f64, unit: PressureUnit) -> [String; 3] {
+    [
+        shown::num(start),
+        unit.label().to_string(),
+        shown::num(working),
+    ]
 }
 
 #[cfg(test)]

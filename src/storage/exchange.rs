@@ -7,6 +7,7 @@ use std::path::{Path, PathBuf};
 use super::atomic::write_json;
 use super::locker::{LockerFile, read_locker_file};
 use super::locker_merge::MergeReport;
+use crate::i18n::{tr_n, tr_with};
 use crate::plan::error::InputError;
 
 /// The name the app gives an exported locker.
@@ -14,11 +15,7 @@ pub const EXPORT_NAME: &str = "turnsheet-locker.json";
 
 /// `N set(s)`.
 pub fn sets_word(n: usize) -> String {
-    if n == 1 {
-        "1 set".to_string()
-    } else {
-        format!("{n} sets")
-    }
+    tr_n("{n} set", "{n} sets", n as u64, &[])
 }
 
 /// `dir/NAME.EXT` if no such file exists, else `dir/NAME-2.EXT`, `dir/NAME-3.EXT`...:
@@ -56,12 +53,14 @@ pub fn import_locker(
 impl MergeReport {
     /// `N added (M of them renamed), K skipped; the locker has S sets.`
     pub fn summary(&self, sets_now: usize) -> String {
-        format!(
-            "{} added ({} of them renamed), {} skipped; the locker has {}.",
-            self.added.len() + self.renamed.len(),
-            self.renamed.len(),
-            self.skipped.len(),
-            sets_word(sets_now)
+        tr_with(
+            "{0} added ({1} of them renamed), {2} skipped; the locker has {3}.",
+            &[
+                &(self.added.len() + self.renamed.len()),
+                &self.renamed.len(),
+                &self.skipped.len(),
+                &sets_word(sets_now),
+            ],
         )
     }
 }

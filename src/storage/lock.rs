@@ -7,6 +7,8 @@ use std::fs;
 use std::path::{Path, PathBuf};
 use std::time::{Duration, Instant};
 
+use crate::i18n::tr_with;
+
 /// How long a writer waits for another one before giving up with a message.
 pub const LOCK_WAIT: Duration = Duration::from_secs(20);
 
@@ -43,9 +45,9 @@ pub fn lock_beside(path: &Path, wait: Duration) -> Result<FileLock, String> {
         .map_err(|e| format!("cannot open the lock file {}: {e}", lock.display()))?;
     let is_file = file.metadata().map(|m| m.is_file()).unwrap_or(false);
     if !is_file {
-        return Err(format!(
-            "{} is not a regular file; move it away so that the locker can be changed",
-            lock.display()
+        return Err(tr_with(
+            "{0} is not a regular file; move it away so that the locker can be changed",
+            &[&lock.display()],
         ));
     }
     let start = Instant::now();
@@ -62,10 +64,9 @@ pub fn lock_beside(path: &Path, wait: Duration) -> Result<FileLock, String> {
             }
         }
         if start.elapsed() >= wait {
-            return Err(format!(
-                "another Turnsheet has been changing {} for {} s; try again once it is done",
-                path.display(),
-                wait.as_secs()
+            return Err(tr_with(
+                "another Turnsheet has been changing {0} for {1} s; try again once it is done",
+                &[&path.display(), &wait.as_secs()],
             ));
         }
         std::thread::sleep(pause);

@@ -6,6 +6,7 @@ use serde::{Deserialize, Serialize};
 
 use super::atomic::{MAX_FILE_BYTES, WithinLimits, check_envelope, one_line, read_text};
 use crate::formats::team_file::CylindersFile;
+use crate::i18n::tr_n;
 use crate::plan::Material;
 use crate::plan::error::InputError;
 use crate::plan::text;
@@ -176,9 +177,11 @@ impl LockerFile {
         for (i, e) in self.entries.iter_mut().enumerate() {
             e.id = i as u64 + 1;
         }
-        Some(format!(
-            "The locker held repeated or out-of-range set numbers; its {} were numbered again from 1 (names and cylinders unchanged).",
-            super::exchange::sets_word(self.entries.len())
+        Some(tr_n(
+            "The locker held repeated or out-of-range set numbers; its {n} set were numbered again from 1 (names and cylinders unchanged).",
+            "The locker held repeated or out-of-range set numbers; its {n} sets were numbered again from 1 (names and cylinders unchanged).",
+            self.entries.len() as u64,
+            &[],
         ))
     }
     pub fn mine(&self) -> Option<&LockerEntry> {

@@ -8,6 +8,7 @@ use super::atomic::WithinLimits;
 use super::locker::{
     LockerEntry, LockerFile, MAX_LOCKER_SETS, MAX_SET_NAME_CHARS, numbered_name, same_name,
 };
+use crate::i18n::{tr, tr_with};
 use crate::plan::error::InputError;
 use crate::plan::text;
 
@@ -80,7 +81,7 @@ impl LockerFile {
             let name_given = if already {
                 report
                     .skipped
-                    .push((name, "the same set is already in the locker".to_string()));
+                    .push((name, tr("the same set is already in the locker")));
                 continue;
             } else if out.find_by_name(&name).is_empty() {
                 name.clone()
@@ -90,7 +91,7 @@ impl LockerFile {
                     None => {
                         report.skipped.push((
                             name,
-                            "the name is taken and no free variant of it was found".to_string(),
+                            tr("the name is taken and no free variant of it was found"),
                         ));
                         continue;
                     }
@@ -114,9 +115,9 @@ impl LockerFile {
         if out.entries.len() > MAX_LOCKER_SETS {
             return Err(InputError::new(
                 "entries",
-                format!(
-                    "importing would make {} sets; a locker holds at most {MAX_LOCKER_SETS}. Nothing was imported",
-                    out.entries.len()
+                tr_with(
+                    "importing would make {0} sets; a locker holds at most {1}. Nothing was imported",
+                    &[&out.entries.len(), &MAX_LOCKER_SETS],
                 ),
             ));
         }
@@ -183,34 +184,22 @@ pub fn merge_changes(
                     let mine = te.mine;
                     out.entries[k] = LockerEntry { mine, ..oe.clone() };
                 } else {
-                    later.push((
-                        oe.clone(),
-                        format!(
-                            "“{}” was changed here and in another program: both versions are kept",
-                            oe.name
-                        ),
-                    ));
+                    later.push((oe.clone(), Some(Conflict::ChangedBoth)));
                 }
             }
             (None, Some(k)) => {
                 if same_set(&out.entries[k], be) {
                     out.entries.remove(k);
                 } else {
-                    notes.push(format!(
-                        "“{}” was deleted here but changed in another program: it is kept",
-                        out.entries[k].name
+                    notes.push(tr_with(
+                        "“{0}” was deleted here but changed in another program: it is kept",
+                        &[&out.entries[k].name],
                     ));
                 }
             }
             (Some(oe), None) => {
                 if !same_set(oe, be) {
-                    later.push((
-                        oe.clone(),
-                        format!(
-                            "“{}” was deleted in another program but changed here: it is kept",
-                            oe.name
-                        ),
-                    ));
+                    later.push((oe.clone(), Some(Conflict::DeletedThere)));
                 }
             }
             (None, None) => {}
@@ -221,7 +210,7 @@ pub fn merge_changes(
             same_name(&x.name, &oe.name) && x.cylinders == oe.cylinders && x.material == oe.material
         });
         if !twin {
-            later.push((oe.clone(), String::new()));
+            later.push((oe.clone(), None));
         }
     }
     let mut given = HashMap::new();
@@ -229,17 +218,32 @@ pub fn merge_changes(
         let (id, wanted) = (e.id, e.name.clone());
         let name = add_as_new(&mut out, e);
         given.insert(id, out.entries.last().map_or(0, |x| x.id));
-        if !why.is_empty() {
-            notes.push(if name == wanted {
-                why
-            } else {
-                format!("{why} (this one as “{name}”)")
-            });
-        } else if name != wanted {
-            notes.push(format!(
-                "“{wanted}” was also added in another program with other cylinders: both are kept, this one as “{name}”"
-            ));
-        }
+        let names: [&dyn std::fmt::Display; 2] = [&wanted, &name];
+        let renamed = name != wanted;
+        let note = match (why, renamed) {
+            (Some(Conflict::ChangedBoth), false) => tr_with(
+                "“{0}” was changed here and in another program: both versions are kept",
+                &names,
+            ),
+            (Some(Conflict::ChangedBoth), true) => tr_with(
+                "“{0}” was changed here and in another program: both versions are kept (this one as “{1}”)",
+                &names,
+            ),
+            (Some(Conflict::DeletedThere), false) => tr_with(
+                "“{0}” was deleted in another program but changed here: it is kept",
+                &names,
+            ),
+            (Some(Conflict::DeletedThere), true) => tr_with(
+                "“{0}” was deleted in another program but changed here: it is kept (this one as “{1}”)",
+                &names,
+            ),
+            (None, true) => tr_with(
+                "“{0}” was also added in another program with other cylinders: both are kept, this one as “{1}”",
+                &names,
+            ),
+            (None, false) => continue,
+        };
+        notes.push(note);
     }
     let mine_of = |l: &LockerFile| l.mine().map(|e| e.id);
     let ours_mine = mine_of(ours);
@@ -252,14 +256,22 @@ pub fn merge_changes(
     if out.entries.len() > MAX_LOCKER_SETS {
         return Err(InputError::new(
             "locker",
-            format!(
-                "with the sets added in another program the locker would hold {}; it holds at most {MAX_LOCKER_SETS}. Delete some first",
-                out.entries.len()
+            tr_with(
+                "with the sets added in another program the locker would hold {0}; it holds at most {1}. Delete some first",
+                &[&out.entries.len(), &MAX_LOCKER_SETS],
             ),
         ));
     }
     debug_assert!(out.within_limits().is_ok());
     Ok((out, notes))
+}
+
+/// Why a set of ours is added again after a sync: changed on both sides, or deleted in
+/// the other program while changed here.
+#[derive(Clone, Copy)]
+enum Conflict {
+    ChangedBoth,
+    DeletedThere,
 }
 
 #[cfg(test)]

@@ -9,6 +9,7 @@ use super::lock::{LOCK_WAIT, lock_beside};
 use super::locker::{LOCKER_SCHEMA, LockerFile};
 use super::settings::{FoundSettings, SETTINGS_SCHEMA, Settings};
 use super::team_state::{TEAM_SCHEMA, TeamState};
+use crate::i18n::tr_with;
 use crate::plan::error::InputError;
 
 pub const LOCKER_FILE: &str = "locker.json";
@@ -187,18 +188,13 @@ impl Store {
                 Some(v)
             }
             ReadOutcome::SetAside { kept_as, reason } => {
-                if kept_as == path {
+                let untouched = kept_as == path;
+                if untouched {
                     self.blocked.insert(name);
-                    report.messages.push(format!(
-                        "The {what} file could not be read ({reason}). {} was left untouched and will not be overwritten.",
-                        path.display()
-                    ));
-                } else {
-                    report.messages.push(format!(
-                        "The {what} file could not be read ({reason}). It was kept as {} and Turnsheet carries on without it.",
-                        kept_as.display()
-                    ));
                 }
+                report
+                    .messages
+                    .push(unreadable(what, &reason, &kept_as.display(), untouched));
                 None
             }
         }
@@ -215,17 +211,20 @@ impl Store {
         let kept = match set_aside::<()>(&path, String::new()) {
             ReadOutcome::SetAside { kept_as, .. } if kept_as != path => {
                 report.settings_repaired = true;
-                format!("the file as it was is kept as {}", kept_as.display())
+                tr_with(
+                    "Some settings could not be used and went back to their defaults ({0}). The other settings were kept; the file as it was is kept as {1}.",
+                    &[&notes.join("; "), &kept_as.display()],
+                )
             }
             _ => {
                 self.blocked.insert(SETTINGS_FILE);
-                "the file was left untouched and will not be overwritten".to_string()
+                tr_with(
+                    "Some settings could not be used and went back to their defaults ({0}). The other settings were kept; the file was left untouched and will not be overwritten.",
+                    &[&notes.join("; ")],
+                )
             }
         };
-        report.messages.push(format!(
-            "Some settings could not be used and went back to their defaults ({}). The other settings were kept; {kept}.",
-            notes.join("; ")
-        ));
+        report.messages.push(kept);
         settings
     }
 
@@ -280,6 +279,38 @@ impl Store {
     }
     pub fn save_team(&mut self, team: &TeamState) -> Result<(), String> {
         self.save(TEAM_FILE, team)
+    }
+}
+
+/// The message for a file that could not be read: kept aside under another name, or
+/// left where it is (`untouched`, at `at`). One whole sentence per file kind.
+fn unreadable(what: &str, reason: &str, at: &dyn std::fmt::Display, untouched: bool) -> String {
+    let args: [&dyn std::fmt::Display; 2] = [&reason, at];
+    match (what, untouched) {
+        ("settings", true) => tr_with(
+            "The settings file could not be read ({0}). {1} was left untouched and will not be overwritten.",
+            &args,
+        ),
+        ("settings", false) => tr_with(
+            "The settings file could not be read ({0}). It was kept as {1} and Turnsheet carries on without it.",
+            &args,
+        ),
+        ("last team", true) => tr_with(
+            "The last team file could not be read ({0}). {1} was left untouched and will not be overwritten.",
+            &args,
+        ),
+        ("last team", false) => tr_with(
+            "The last team file could not be read ({0}). It was kept as {1} and Turnsheet carries on without it.",
+            &args,
+        ),
+        (_, true) => tr_with(
+            "The cylinder locker file could not be read ({0}). {1} was left untouched and will not be overwritten.",
+            &args,
+        ),
+        (_, false) => tr_with(
+            "The cylinder locker file could not be read ({0}). It was kept as {1} and Turnsheet carries on without it.",
+            &args,
+        ),
     }
 }
 
