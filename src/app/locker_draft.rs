@@ -1,6 +1,7 @@
 //! A locker entry being added or edited: the fields as typed, checked on save.
 
 use crate::formats::team_file::CylindersFile;
+use crate::i18n::{tr, tr_with};
 use crate::plan::error::InputError;
 use crate::plan::validate_cylinders;
 use crate::plan::{CylinderSet, CylinderSpec, UnitSystem};
@@ -85,16 +86,16 @@ impl Draft {
     }
 
     /// (caption, unit, allowed range) of the first and second size fields.
-    pub fn field_specs(&self) -> [(&'static str, &'static str, f64, f64); 2] {
+    pub fn field_specs(&self) -> [(String, &'static str, f64, f64); 2] {
         if self.rated {
             [
-                ("RATED VOLUME PER CYLINDER", "cu ft", 5.0, 400.0),
-                ("RATED PRESSURE", "psi", 700.0, 5800.0),
+                (tr("RATED VOLUME PER CYLINDER"), "cu ft", 5.0, 400.0),
+                (tr("RATED PRESSURE"), "psi", 700.0, 5800.0),
             ]
         } else {
             [
-                ("WATER CAPACITY PER CYLINDER", "L", 0.5, 30.0),
-                ("WORKING PRESSURE", "bar", 50.0, 400.0),
+                (tr("WATER CAPACITY PER CYLINDER"), "L", 0.5, 30.0),
+                (tr("WORKING PRESSURE"), "bar", 50.0, 400.0),
             ]
         }
     }
@@ -177,10 +178,9 @@ impl Draft {
     pub fn name_warning(&self) -> Option<String> {
         let (old, now) = (self.named_for?, self.sizes()?);
         (old != now).then(|| {
-            format!(
-                "The name was given to {}; the set now holds {}. Check the name still fits.",
-                old.describe(),
-                now.describe()
+            tr_with(
+                "The name was given to {0}; the set now holds {1}. Check the name still fits.",
+                &[&old.describe(), &now.describe()],
             )
         })
     }
@@ -189,11 +189,11 @@ impl Draft {
     pub fn to_set(&self) -> Result<CylinderSet, InputError> {
         let [a, b] = self.field_specs();
         if self.first.is_none() {
-            return Err(InputError::new(a.0.to_lowercase(), "enter a value"));
+            return Err(InputError::new(a.0.to_lowercase(), tr("enter a value")));
         }
         let set = self
             .sizes()
-            .ok_or_else(|| InputError::new(b.0.to_lowercase(), "enter a value"))?;
+            .ok_or_else(|| InputError::new(b.0.to_lowercase(), tr("enter a value")))?;
         validate_cylinders(UnitSystem::Metric, "cylinders", &set)?;
         Ok(set)
     }

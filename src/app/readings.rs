@@ -7,7 +7,9 @@
 //! start, so the team keeps one; this record says what that number is worth, and the
 //! views show turns only when every start is fresh (a prediction is shown, marked).
 
-use chrono::{Local, TimeZone};
+use chrono::{Datelike, Local, TimeZone};
+
+use crate::i18n::{tr, tr_with};
 
 pub use crate::storage::team_state::{Source, StartReading};
 
@@ -156,14 +158,33 @@ pub fn when_text(at: i64, now: i64) -> String {
         Local.timestamp_opt(at, 0).single(),
         Local.timestamp_opt(now, 0).single(),
     ) else {
-        return "at an unknown time".to_string();
+        return tr("at an unknown time");
     };
     let days = (n.date_naive() - t.date_naive()).num_days();
     match days {
-        0 => format!("today {}", t.format("%H:%M")),
-        1 => format!("yesterday {}", t.format("%H:%M")),
-        _ => t.format("%-d %b %H:%M").to_string(),
+        0 => tr_with("today {0}", &[&t.format("%H:%M")]),
+        1 => tr_with("yesterday {0}", &[&t.format("%H:%M")]),
+        _ => format!("{} {}", day_month(&t), t.format("%H:%M")),
     }
+}
+
+/// The day and the month's short name in the language shown: "5 Dec".
+pub fn day_month<T: Datelike>(t: &T) -> String {
+    let month = match t.month() {
+        1 => tr("Jan"),
+        2 => tr("Feb"),
+        3 => tr("Mar"),
+        4 => tr("Apr"),
+        5 => tr("May"),
+        6 => tr("Jun"),
+        7 => tr("Jul"),
+        8 => tr("Aug"),
+        9 => tr("Sep"),
+        10 => tr("Oct"),
+        11 => tr("Nov"),
+        _ => tr("Dec"),
+    };
+    format!("{} {month}", t.day())
 }
 
 #[cfg(test)]

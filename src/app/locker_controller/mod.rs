@@ -1,6 +1,7 @@
 //! The cylinder locker: entries, the entry being edited, and undo of the last delete.
 
 use crate::formats::team_file::CylindersFile;
+use crate::i18n::{tr, tr_with};
 use crate::plan::CylinderSet;
 use crate::plan::error::InputError;
 use crate::plan::text;
@@ -114,7 +115,7 @@ impl LockerController {
     /// Save the draft into the locker. The draft stays open on error.
     pub fn save_draft(&mut self) -> Result<u64, InputError> {
         let Some(d) = self.draft.clone() else {
-            return Err(InputError::new("locker", "nothing is being edited"));
+            return Err(InputError::new("locker", tr("nothing is being edited")));
         };
         check_set_name("name", &d.name)?;
         check_set_note("note", &d.note)?;
@@ -125,8 +126,9 @@ impl LockerController {
         if is_new && self.file.entries.len() >= MAX_LOCKER_SETS {
             return Err(InputError::new(
                 "locker",
-                format!(
-                    "the locker is full: it holds at most {MAX_LOCKER_SETS} sets; delete one first"
+                tr_with(
+                    "the locker is full: it holds at most {0} sets; delete one first",
+                    &[&MAX_LOCKER_SETS],
                 ),
             ));
         }
@@ -215,15 +217,18 @@ impl LockerController {
         if self.file.entries.len() >= MAX_LOCKER_SETS {
             return Err(InputError::new(
                 "locker",
-                format!("the locker is full ({MAX_LOCKER_SETS} sets); delete one first"),
+                tr_with(
+                    "the locker is full ({0} sets); delete one first",
+                    &[&MAX_LOCKER_SETS],
+                ),
             ));
         }
         let name = if self.file.find_by_name(&name).is_empty() {
             name
         } else {
-            self.file
-                .free_name(&name)
-                .ok_or_else(|| InputError::new("name", "no free variant of the name was found"))?
+            self.file.free_name(&name).ok_or_else(|| {
+                InputError::new("name", tr("no free variant of the name was found"))
+            })?
         };
         self.file.entries.push(LockerEntry {
             id: self.file.next_id(),

@@ -6,6 +6,7 @@ use std::path::PathBuf;
 use chrono::TimeZone;
 
 use crate::formats::card_svg::{CardHeading, card_svg};
+use crate::i18n::tr_with;
 use crate::plan::team_charts;
 
 use super::Session;
@@ -18,7 +19,7 @@ impl Session {
         let now = self.now;
         if !self.team.turns_ready(now) {
             let why = super::super::view_models::starts_blocking(self).unwrap_or_default();
-            self.status.push(format!("No card yet. {why}"));
+            self.status.push(tr_with("No card yet. {0}", &[&why]));
             return None;
         }
         let stages = self.team.stages_blocking(now);
@@ -27,9 +28,9 @@ impl Session {
                 .iter()
                 .map(|&i| self.team.input().divers[i].name.as_str())
                 .collect();
-            self.status.push(format!(
-                "No card yet: read the stage gauge of {} in the water.",
-                names.join(", ")
+            self.status.push(tr_with(
+                "No card yet: read the stage gauge of {0} in the water.",
+                &[&names.join(", ")],
             ));
             return None;
         }
@@ -37,7 +38,8 @@ impl Session {
         let charts = match team_charts(input, 2, 7) {
             Ok(c) => c,
             Err(e) => {
-                self.status.push(format!("The card could not be made: {e}"));
+                self.status
+                    .push(tr_with("The card could not be made: {0}", &[&e]));
                 return None;
             }
         };
@@ -47,7 +49,11 @@ impl Session {
             .unwrap_or_else(chrono::Local::now);
         let heading = CardHeading {
             dive: None,
-            date: Some(stamp.format("%-d %b %Y %H:%M").to_string()),
+            date: Some(format!(
+                "{} {}",
+                crate::app::readings::day_month(&stamp),
+                stamp.format("%Y %H:%M")
+            )),
             read_at: (0..input.divers.len()).map(|i| self.read_text(i)).collect(),
         };
         let svg = card_svg(&heading, input, self.team.plan(), &charts);
@@ -57,16 +63,16 @@ impl Session {
             .join(format!("card-{}.svg", stamp.format("%Y-%m-%d-%H%M%S")));
         match crate::storage::atomic::write_text(&path, &svg) {
             Ok(()) => {
-                self.status.push(format!(
-                    "Team card written to {} (open it in a browser to print).",
-                    path.display()
+                self.status.push(tr_with(
+                    "Team card written to {0} (open it in a browser to print).",
+                    &[&path.display()],
                 ));
                 Some(path)
             }
             Err(e) => {
-                self.status.push(format!(
-                    "The card could not be written to {}: {e}",
-                    path.display()
+                self.status.push(tr_with(
+                    "The card could not be written to {0}: {1}",
+                    &[&path.display(), &e],
                 ));
                 None
             }

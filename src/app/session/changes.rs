@@ -4,6 +4,7 @@
 //! halves. Turns: Ines 160 → 120 bar, …") and offers Undo, the same Undo as removing a
 //! diver. A rule that does not suit an overhead dive asks first.
 
+use crate::i18n::tr_with;
 use crate::plan::error::InputError;
 use crate::plan::{Rule, TeamPlan};
 use crate::storage::team_state::TeamState;
@@ -52,7 +53,7 @@ impl Session {
         let Some(old) = before.turns else {
             return;
         };
-        let text = format!("{headline}. {}", self.turn_changes(&old));
+        let text = tr_with("{0}. {1}", &[&headline, &self.turn_changes(&old)]);
         self.offer_undo(text, before.state);
     }
 
@@ -66,15 +67,15 @@ impl Session {
                 .into_iter()
                 .filter_map(|i| self.team.input().divers.get(i).map(|d| d.name.as_str()))
                 .collect();
-            return format!(
-                "No turns until the start of {} is read again.",
-                names.join(", ")
+            return tr_with(
+                "No turns until the start of {0} is read again.",
+                &[&names.join(", ")],
             );
         }
         let parts: Vec<String> = turns_of(self.team.plan())
             .into_iter()
             .map(|(name, new)| match old.iter().find(|(n, _)| *n == name) {
-                Some((_, was)) if *was == new => format!("{name} {new} (same)"),
+                Some((_, was)) if *was == new => tr_with("{0} {1} (same)", &[&name, &new]),
                 Some((_, was)) => {
                     // "160 bar" → "120 bar": say the unit once when it stays.
                     let (was_n, was_u) = was.split_once(' ').unwrap_or((was, ""));
@@ -88,7 +89,7 @@ impl Session {
                 None => format!("{name} {new}"),
             })
             .collect();
-        format!("Turns: {}.", parts.join(", "))
+        tr_with("Turns: {0}.", &[&parts.join(", ")])
     }
 
     /// Make a change through the team controller, save it or report why it was
@@ -128,7 +129,7 @@ impl Session {
     pub(super) fn apply_rule(&mut self, rule: Rule) {
         self.change_plan(
             |t| t.set_rule(rule),
-            |s| format!("Rule now {}", s.team.input().rule.name()),
+            |s| tr_with("Rule now {0}", &[&s.team.input().rule.name()]),
         );
     }
 }

@@ -64,7 +64,7 @@ impl CustomSet {
     }
 
     /// (caption, unit, allowed range) of the first and second size fields.
-    pub fn field_specs(&self) -> [(&'static str, &'static str, f64, f64); 2] {
+    pub fn field_specs(&self) -> [(String, &'static str, f64, f64); 2] {
         self.draft().field_specs()
     }
 

@@ -1,6 +1,7 @@
 //! A second dive of the same team, and when each start was read.
 
 use crate::app::readings::{Source, StartStatus, clock_text};
+use crate::i18n::{tr, tr_with};
 
 use super::Session;
 
@@ -13,7 +14,7 @@ impl Session {
         self.team.forget_readings();
         self.save_team();
         self.offer_undo(
-            "Next dive: every start is unread. Read each gauge in the water.".to_string(),
+            tr("Next dive: every start is unread. Read each gauge in the water."),
             before,
         );
     }
@@ -42,9 +43,9 @@ impl Session {
             return String::new();
         };
         match (self.team.start_status(i, self.now), r.source) {
-            (StartStatus::Fresh, Source::Gauge) => format!("read {}", clock_text(r.at)),
+            (StartStatus::Fresh, Source::Gauge) => tr_with("read {0}", &[&clock_text(r.at)]),
             (StartStatus::Predicted, Source::Prediction) => {
-                format!("predicted {}", clock_text(r.at))
+                tr_with("predicted {0}", &[&clock_text(r.at)])
             }
             _ => String::new(),
         }

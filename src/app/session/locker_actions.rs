@@ -7,6 +7,7 @@
 //! both places is kept twice, with a line saying so. Regaining focus or resuming
 //! re-reads it too (`refresh_locker`).
 
+use crate::i18n::tr_with;
 use crate::plan::error::InputError;
 use crate::plan::{Material, presets};
 use crate::storage::locker_merge::merge_changes;
@@ -63,14 +64,14 @@ impl Session {
         match self.locker.add_set(&label, &set, material) {
             Ok(Added::New(name)) => {
                 self.save_locker();
-                self.status.push(format!(
-                    "Saved “{name}” ({}) to your locker. It is not marked mine.",
-                    set.describe()
+                self.status.push(tr_with(
+                    "Saved “{0}” ({1}) to your locker. It is not marked mine.",
+                    &[&name, &set.describe()],
                 ));
             }
             Ok(Added::Already(name)) => self
                 .status
-                .push(format!("“{name}” is already in your locker.")),
+                .push(tr_with("“{0}” is already in your locker.", &[&name])),
             Err(e) => self.status.push(e.to_string()),
         }
     }

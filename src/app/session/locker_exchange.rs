@@ -4,8 +4,9 @@
 
 use std::path::{Path, PathBuf};
 
+use crate::i18n::{tr, tr_n, tr_with};
 use crate::storage::data_dir;
-use crate::storage::exchange::{EXPORT_NAME, export_locker, free_path, import_locker, sets_word};
+use crate::storage::exchange::{EXPORT_NAME, export_locker, free_path, import_locker};
 
 use super::{SavedFile, Session};
 
@@ -29,10 +30,9 @@ impl Exchange {
 
     /// The line under the buttons: where files go and come from.
     pub fn hint(&self) -> String {
-        format!(
-            "Export writes a new file into {}. To import, put the other diver's exported file (any name ending in .json) into {} and press Import sets; imported files move to its \"imported\" folder.",
-            self.export_dir.display(),
-            self.import_dir.display()
+        tr_with(
+            "Export writes a new file into {0}. To import, put the other diver's exported file (any name ending in .json) into {1} and press Import sets; imported files move to its \"imported\" folder.",
+            &[&self.export_dir.display(), &self.import_dir.display()],
         )
     }
 }
@@ -42,17 +42,18 @@ impl Session {
     pub fn locker_export(&mut self) {
         let n = self.locker.entries().len();
         if n == 0 {
-            self.exchange.message = "The locker is empty: nothing to export.".to_string();
+            self.exchange.message = tr("The locker is empty: nothing to export.");
             return;
         }
         let file = free_path(&self.exchange.export_dir, EXPORT_NAME);
         self.exchange.message = match export_locker(&self.locker.file, &file) {
-            Ok(()) => format!(
-                "Exported {} to {}. Give that file to the other diver.",
-                sets_word(n),
-                file.display()
+            Ok(()) => tr_n(
+                "Exported {n} set to {0}. Give that file to the other diver.",
+                "Exported {n} sets to {0}. Give that file to the other diver.",
+                n as u64,
+                &[&file.display()],
             ),
-            Err(e) => format!("Not exported: {e}."),
+            Err(e) => tr_with("Not exported: {0}.", &[&e]),
         };
     }
 
@@ -65,7 +66,7 @@ impl Session {
         let dir = self.exchange.import_dir.clone();
         let _ = std::fs::create_dir_all(&dir);
         if let Some(why) = linked_folder(&dir) {
-            self.exchange.message = format!("Nothing imported: {why}.");
+            self.exchange.message = tr_with("Nothing imported: {0}.", &[&why]);
             return;
         }
         let mut lines = Vec::new();
@@ -77,17 +78,18 @@ impl Session {
                 .to_string_lossy()
                 .to_string();
             if is_link {
-                lines.push(format!(
-                    "Not imported: {shown} is a symbolic link; put the file itself into the folder."
+                lines.push(tr_with(
+                    "Not imported: {0} is a symbolic link; put the file itself into the folder.",
+                    &[&shown],
                 ));
             } else {
                 files.push(path);
             }
         }
         if files.is_empty() && lines.is_empty() {
-            self.exchange.message = format!(
-                "No locker file to import. Put the other diver's exported file into {}, then press Import sets again.",
-                dir.display()
+            self.exchange.message = tr_with(
+                "No locker file to import. Put the other diver's exported file into {0}, then press Import sets again.",
+                &[&dir.display()],
             );
             return;
         }
@@ -97,24 +99,25 @@ impl Session {
             let shown = file.file_name().unwrap_or_default().to_string_lossy();
             match import_locker(&self.locker.file, file) {
                 Ok((merged, report)) => {
-                    lines.push(format!("From {shown}:"));
+                    lines.push(tr_with("From {0}:", &[&shown]));
                     for n in &report.added {
-                        lines.push(format!("added {n}"));
+                        lines.push(tr_with("added {0}", &[n]));
                     }
                     for (from, to) in &report.renamed {
-                        lines.push(format!(
-                            "renamed {from} → {to} (a different set has that name)"
+                        lines.push(tr_with(
+                            "renamed {0} → {1} (a different set has that name)",
+                            &[from, to],
                         ));
                     }
                     for (n, why) in &report.skipped {
-                        lines.push(format!("skipped {n}: {why}"));
+                        lines.push(tr_with("skipped {0}: {1}", &[n, why]));
                     }
                     lines.push(report.summary(merged.entries.len()));
                     changed |= report.changed();
                     self.locker.file = merged;
                     read.push(file.clone());
                 }
-                Err(e) => lines.push(format!("Not imported: {e}")),
+                Err(e) => lines.push(tr_with("Not imported: {0}", &[&e])),
             }
         }
         // Saved before any file moves (writing only if something changed; an earlier
@@ -123,9 +126,9 @@ impl Session {
             self.save_locker();
         }
         if self.unsaved.files().contains(&SavedFile::Locker) {
-            lines.push(format!(
-                "The locker could not be saved, so the files stay in {} (importing them again adds nothing twice).",
-                dir.display()
+            lines.push(tr_with(
+                "The locker could not be saved, so the files stay in {0} (importing them again adds nothing twice).",
+                &[&dir.display()],
             ));
         } else {
             for file in &read {
@@ -165,9 +168,9 @@ fn linked_folder(dir: &Path) -> Option<String> {
         .file_type()
         .is_symlink();
     link.then(|| {
-        format!(
-            "{} is a symbolic link; Turnsheet only uses folders inside its data folder",
-            dir.display()
+        tr_with(
+            "{0} is a symbolic link; Turnsheet only uses folders inside its data folder",
+            &[&dir.display()],
         )
     })
 }
@@ -177,13 +180,16 @@ fn move_aside(dir: &Path, file: &Path) -> Option<String> {
     let done = dir.join("imported");
     let name = file.file_name()?.to_string_lossy().to_string();
     if let Some(why) = linked_folder(&done) {
-        return Some(format!("{name} was left where it is: {why}."));
+        return Some(tr_with("{0} was left where it is: {1}.", &[&name, &why]));
     }
     let moved = std::fs::create_dir_all(&done)
         .and_then(|()| std::fs::rename(file, free_path(&done, &name)));
-    moved
-        .err()
-        .map(|e| format!("{name} could not be moved to {}: {e}", done.display()))
+    moved.err().map(|e| {
+        tr_with(
+            "{0} could not be moved to {1}: {2}",
+            &[&name, &done.display(), &e],
+        )
+    })
 }
 
 #[cfg(test)]

@@ -1,6 +1,7 @@
 //! The mix picker: its choices (this diver's recent mixes and the team's first, then
 //! the common ones), the custom mix typed on the keypad, and Done.
 
+use crate::i18n::tr_with;
 use crate::plan::Mix;
 
 use super::{Picker, Session};
@@ -114,8 +115,13 @@ impl Session {
                     self.mix_history.record(&name, mix);
                     self.save_team();
                     self.picker = Picker::None;
-                    let what = if stage { "Stage mix" } else { "Mix" };
-                    self.after_change(format!("{what} of {name} now {}", mix.label()), before);
+                    let args: [&dyn std::fmt::Display; 2] = [&name, &mix.label()];
+                    let what = if stage {
+                        tr_with("Stage mix of {0} now {1}", &args)
+                    } else {
+                        tr_with("Mix of {0} now {1}", &args)
+                    };
+                    self.after_change(what, before);
                 }
                 Err(e) => self.status.push(e.to_string()),
             }

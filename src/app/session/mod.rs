@@ -11,6 +11,7 @@
 //! - the fill-to-water check and the pairing chart selection (`tools.rs`);
 //! - the screen's colours (`appearance.rs`).
 
+use crate::i18n::tr_with;
 use crate::plan::UnitSystem;
 use crate::plan::error::InputError;
 use crate::storage::settings::Settings;
@@ -115,12 +116,13 @@ impl Session {
                 Err(e) => {
                     let kept = store.set_aside_team(&e.to_string());
                     messages.push(match kept {
-                        Some(p) => format!(
-                            "The last team could not be planned ({e}). It was kept as {} and the demo team is shown instead.",
-                            p.display()
+                        Some(p) => tr_with(
+                            "The last team could not be planned ({0}). It was kept as {1} and the demo team is shown instead.",
+                            &[&e, &p.display()],
                         ),
-                        None => format!(
-                            "The last team could not be planned ({e}). It was left untouched and will not be overwritten; the demo team is shown instead."
+                        None => tr_with(
+                            "The last team could not be planned ({0}). It was left untouched and will not be overwritten; the demo team is shown instead.",
+                            &[&e],
                         ),
                     });
                     team_actions::demo_team(&settings)

@@ -2,6 +2,7 @@
 //! methods, and the session actions that open it and apply the choice. The custom
 //! set is in `custom_set.rs`; the mix choices and Done in `mix_picker.rs`.
 
+use crate::i18n::tr_with;
 use crate::plan::Mix;
 use crate::plan::presets;
 use crate::plan::validate_mix;
@@ -146,12 +147,16 @@ impl Session {
             Ok(reset) => {
                 let name = self.team.input().divers[i].name.clone();
                 if reset {
-                    self.status.push(format!(
-                        "{name}: the start pressure did not fit {label}; it is now the working pressure. Enter the pressure you read in the water.",
+                    self.status.push(tr_with(
+                        "{0}: the start pressure did not fit {1}; it is now the working pressure. Enter the pressure you read in the water.",
+                        &[&name, &label],
                     ));
                 }
                 self.save_team();
-                self.after_change(format!("Cylinders of {name} now {label}"), before);
+                self.after_change(
+                    tr_with("Cylinders of {0} now {1}", &[&name, &label]),
+                    before,
+                );
             }
             Err(e) => self.status.push(e.to_string()),
         }

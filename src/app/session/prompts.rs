@@ -3,6 +3,7 @@
 
 use super::super::nav::Screen;
 use super::Session;
+use crate::i18n::{tr, tr_with};
 
 /// A question shown over the page until it is answered.
 #[derive(Clone, Copy, Debug, PartialEq, Eq, Default)]
@@ -18,7 +19,7 @@ pub enum Prompt {
 }
 
 /// An answer to a prompt: its text, accessible label, and whether it is the one to stress.
-pub type Answer = (&'static str, &'static str, bool);
+pub type Answer = (String, String, bool);
 
 /// What the window must do after an answer.
 #[derive(Clone, Copy, Debug, PartialEq, Eq)]
@@ -56,26 +57,27 @@ impl Session {
         match self.prompt {
             Prompt::None => None,
             Prompt::Close => Some((
-                format!(
-                    "Your last changes could not be saved to {}: {}. Closing now loses them.",
-                    self.store.dir().display(),
-                    self.unsaved.reasons()
+                tr_with(
+                    "Your last changes could not be saved to {0}: {1}. Closing now loses them.",
+                    &[&self.store.dir().display(), &self.unsaved.reasons()],
                 ),
                 vec![
-                    ("Close anyway", "close anyway", false),
-                    ("Try again", "try again", true),
-                    ("Stay", "stay", false),
+                    (tr("Close anyway"), tr("close anyway"), false),
+                    (tr("Try again"), tr("try again"), true),
+                    (tr("Stay"), tr("stay"), false),
                 ],
             )),
             Prompt::LooseRule(rule) => Some((
-                format!(
-                    "{} is an open-water rule: it keeps no gas to bring a teammate out of an overhead. Every turn goes down. Keep the rule of {}?",
-                    crate::plan::text::first_upper(rule.name()),
-                    self.team.input().rule.name()
+                tr_with(
+                    "{0} is an open-water rule: it keeps no gas to bring a teammate out of an overhead. Every turn goes down. Keep the rule of {1}?",
+                    &[
+                        &crate::plan::text::first_upper(rule.name()),
+                        &self.team.input().rule.name(),
+                    ],
                 ),
                 vec![
-                    ("Keep the rule", "keep the rule", true),
-                    ("Use it anyway", "use the open-water rule", false),
+                    (tr("Keep the rule"), tr("keep the rule"), true),
+                    (tr("Use it anyway"), tr("use the open-water rule"), false),
                 ],
             )),
             Prompt::Discard => {
@@ -84,12 +86,12 @@ impl Session {
                     .draft()
                     .map(|d| d.name.trim().to_string())
                     .filter(|n| !n.is_empty())
-                    .unwrap_or_else(|| "the new set".to_string());
+                    .unwrap_or_else(|| tr("the new set"));
                 Some((
-                    format!("Discard changes to {name}?"),
+                    tr_with("Discard changes to {0}?", &[&name]),
                     vec![
-                        ("Keep editing", "keep editing", true),
-                        ("Discard", "discard changes", false),
+                        (tr("Keep editing"), tr("keep editing"), true),
+                        (tr("Discard"), tr("discard changes"), false),
                     ],
                 ))
             }

@@ -8,6 +8,7 @@
 use std::collections::BTreeMap;
 
 use super::Session;
+use crate::i18n::tr_with;
 
 /// The app's three files.
 #[derive(Clone, Copy, Debug, PartialEq, Eq, PartialOrd, Ord)]
@@ -62,8 +63,10 @@ impl Unsaved {
                 let files: Vec<&str> = files.into_iter().filter(|f| !f.is_empty()).collect();
                 match files.as_slice() {
                     [] => rest.to_string(),
-                    [one] => format!("{one}: {rest}"),
-                    [many @ .., last] => format!("{} and {last}: {rest}", many.join(", ")),
+                    [one] => tr_with("{0}: {1}", &[one, &rest]),
+                    [many @ .., last] => {
+                        tr_with("{0} and {1}: {2}", &[&many.join(", "), last, &rest])
+                    }
                 }
             })
             .collect::<Vec<_>>()
@@ -128,10 +131,9 @@ impl Session {
         if self.unsaved.is_empty() {
             return String::new();
         }
-        format!(
-            "Not saved to {}: {}. Your changes are kept while Turnsheet is open; your next change or Try again saves them.",
-            self.store.dir().display(),
-            self.unsaved.reasons()
+        tr_with(
+            "Not saved to {0}: {1}. Your changes are kept while Turnsheet is open; your next change or Try again saves them.",
+            &[&self.store.dir().display(), &self.unsaved.reasons()],
         )
     }
 }

@@ -2,6 +2,7 @@
 //! give a new team its defaults (Settings page).
 
 use crate::formats::team_file::TeamFile;
+use crate::i18n::{tr, tr_with};
 use crate::plan::presets;
 use crate::plan::{Rule, Temperature, UnitSystem};
 use crate::storage::settings::Settings;
@@ -50,10 +51,9 @@ impl Session {
             self.change_plan(
                 |t| t.set_gauge_step(step),
                 |s| {
-                    format!(
-                        "Gauge step now {} {}",
-                        crate::plan::shown::num(step),
-                        s.units().pressure_label()
+                    tr_with(
+                        "Gauge step now {0} {1}",
+                        &[&crate::plan::shown::num(step), &s.units().pressure_label()],
                     )
                 },
             );
@@ -63,11 +63,9 @@ impl Session {
     pub fn toggle_water(&mut self) {
         self.change_plan(
             |t| t.toggle_water(),
-            |s| {
-                format!(
-                    "Water now {}",
-                    crate::app::view_models::water_text(s).to_lowercase()
-                )
+            |s| match s.team.input().water {
+                crate::plan::Water::Fresh => tr("Water now fresh"),
+                crate::plan::Water::Salt => tr("Water now salt"),
             },
         );
     }
@@ -113,9 +111,9 @@ impl Session {
             self.change_plan(
                 |t| t.set_gauge(i, gauge),
                 |_| {
-                    format!(
-                        "Gauge of {name} now {}",
-                        crate::app::view_models::gauge_text(gauge)
+                    tr_with(
+                        "Gauge of {0} now {1}",
+                        &[&name, &crate::app::view_models::gauge_text(gauge)],
                     )
                 },
             );
@@ -148,9 +146,9 @@ impl Session {
             self.chart = ChartPair::default();
             if removed {
                 if shown {
-                    self.after_change(format!("{name} removed"), before);
+                    self.after_change(tr_with("{0} removed", &[&name]), before);
                 } else {
-                    self.offer_undo(format!("{name} removed."), state);
+                    self.offer_undo(tr_with("{0} removed.", &[&name]), state);
                 }
             }
         }
@@ -174,9 +172,9 @@ impl Session {
         self.chart = ChartPair::default();
         self.save_team();
         let names: Vec<&str> = before.team.divers.iter().map(|d| d.name.as_str()).collect();
-        let text = format!(
-            "New team started; the team of {} was cleared.",
-            names.join(", ")
+        let text = tr_with(
+            "New team started; the team of {0} was cleared.",
+            &[&names.join(", ")],
         );
         self.offer_undo(text, before);
     }
@@ -188,7 +186,7 @@ impl Session {
         self.save_settings();
         self.change_plan(
             |t| t.set_units(units),
-            |s| format!("Team units now {}", s.units().pressure_label()),
+            |s| tr_with("Team units now {0}", &[&s.units().pressure_label()]),
         );
     }
 
@@ -217,7 +215,12 @@ impl Session {
         let t = u.temperature(current.round() + f64::from(dir.signum()));
         self.change_plan(
             |team| team.set_water_temp(t),
-            |s| format!("Water now {}", crate::app::view_models::water_temp_text(s)),
+            |s| {
+                tr_with(
+                    "Water now {0}",
+                    &[&crate::app::view_models::water_temp_text(s)],
+                )
+            },
         );
     }
 

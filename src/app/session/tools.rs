@@ -1,6 +1,7 @@
 //! The fill-to-water check and the pairing chart selection, each with its own
 //! methods, and the session actions that use them.
 
+use crate::i18n::tr_with;
 use crate::plan::{PairChart, pair_chart, starts_around};
 use crate::plan::{Pressure, TeamInput, Temperature, UnitSystem};
 use crate::plan::{TemperatureChange, pressure_after_temperature_change};
@@ -151,10 +152,9 @@ impl Session {
             self.team.mark_predicted(d, self.now);
             let name = self.team.input().divers[d].name.clone();
             let g = self.team.input().gauge_of(d);
-            self.status.push(format!(
-                "The start of {name} is now the prediction, {} {}, marked \"predicted\" until the gauge is read in the water.",
-                crate::plan::shown::num(g.value(start)),
-                g.label()
+            self.status.push(tr_with(
+                "The start of {0} is now the prediction, {1} {2}, marked \"predicted\" until the gauge is read in the water.",
+                &[&name, &crate::plan::shown::num(g.value(start)), &g.label()],
             ));
         }
         self.team_result(r);

@@ -1,6 +1,7 @@
 //! One step back after a change that throws away a diver or a whole team: removing a
 //! diver and starting a new team. The offer lasts until the team changes again.
 
+use crate::i18n::tr_with;
 use crate::storage::team_state::TeamState;
 
 use super::super::team_controller::TeamController;
@@ -36,7 +37,7 @@ impl Session {
                 self.chart = ChartPair::default();
                 self.save_team();
             }
-            Err(e) => self.status.push(format!("Undo failed: {e}")),
+            Err(e) => self.status.push(tr_with("Undo failed: {0}", &[&e])),
         }
     }
 }

@@ -2,6 +2,7 @@
 //! and stages.
 
 use super::TeamController;
+use crate::i18n::{tr, tr_with};
 use crate::plan::error::InputError;
 use crate::plan::round_down_to_step;
 use crate::plan::{CylinderSet, DiverInput, Mix, Temperature};
@@ -109,15 +110,15 @@ impl TeamController {
         if !self.can_add() {
             return Err(InputError::new(
                 "divers",
-                format!("a team has at most {MAX_DIVERS} divers"),
+                tr_with("a team has at most {0} divers", &[&MAX_DIVERS]),
             ));
         }
         let n = self.len() + 1;
-        let mut name = format!("Diver {n}");
+        let mut name = tr_with("Diver {0}", &[&n]);
         let mut k = n;
         while self.input.divers.iter().any(|d| d.name == name) {
             k += 1;
-            name = format!("Diver {k}");
+            name = tr_with("Diver {0}", &[&k]);
         }
         let u = self.input.units;
         let start = u.pressure(round_down_to_step(
@@ -148,7 +149,7 @@ impl TeamController {
         if !self.can_remove() {
             return Err(InputError::new(
                 "divers",
-                format!("a team has at least {MIN_DIVERS} divers"),
+                tr_with("a team has at least {0} divers", &[&MIN_DIVERS]),
             ));
         }
         self.try_update(|t| {
@@ -168,8 +169,8 @@ impl TeamController {
         while self.len() > 2 {
             let _ = self.remove_diver(self.len() - 1);
         }
-        for (i, name) in ["Me", "Buddy"].into_iter().enumerate() {
-            let _ = self.set_name(i, name);
+        for (i, name) in [tr("Me"), tr("Buddy")].into_iter().enumerate() {
+            let _ = self.set_name(i, &name);
             let _ = self.set_cylinders(i, set, label);
             let _ = self.set_mix(i, Mix::AIR);
             let _ = self.set_sac(i, None);

@@ -1,6 +1,7 @@
 //! The cylinder locker and its editor.
 
 use super::super::session::Session;
+use crate::i18n::{tr, tr_with};
 use crate::plan::shown;
 use crate::plan::{CylinderSpec, Material, ModelKind, Preset, presets};
 
@@ -37,7 +38,7 @@ pub fn locker_rows(s: &Session) -> Vec<LockerRowVm> {
 pub fn undo_text(s: &Session) -> String {
     s.locker
         .undo_name()
-        .map(|n| format!("Deleted “{n}”."))
+        .map(|n| tr_with("Deleted “{0}”.", &[&n]))
         .unwrap_or_default()
 }
 
@@ -67,17 +68,16 @@ pub fn locker_edit(s: &Session) -> Option<LockerEditVm> {
     };
     Some(LockerEditVm {
         title: if d.id.is_some() {
-            "Edit set"
+            tr("Edit set")
         } else {
-            "New set"
-        }
-        .to_string(),
+            tr("New set")
+        },
         name: d.name.clone(),
         name_warning: d.name_warning().unwrap_or_default(),
         count: i32::from(d.count),
         rated: d.rated,
-        first_label: specs[0].0.to_string(),
-        second_label: specs[1].0.to_string(),
+        first_label: specs[0].0.clone(),
+        second_label: specs[1].0.clone(),
         first_value: with_unit(d.first, specs[0].1),
         second_value: with_unit(d.second, specs[1].1),
         material_index: Material::ALL
@@ -89,10 +89,9 @@ pub fn locker_edit(s: &Session) -> Option<LockerEditVm> {
             .to_set()
             .map(|set| {
                 let w = set.water(ModelKind::Real).litres();
-                format!(
-                    "{} · {} L of water in all",
-                    set.describe(),
-                    crate::plan::shown::fixed(w, 1)
+                tr_with(
+                    "{0} · {1} L of water in all",
+                    &[&set.describe(), &crate::plan::shown::fixed(w, 1)],
                 )
             })
             .unwrap_or_default(),
@@ -111,27 +110,31 @@ pub fn preset_rows() -> Vec<(String, String)> {
 /// diver checks against the cylinder in hand.
 pub fn preset_detail(p: &Preset) -> String {
     let each = |a: f64, ua: &str, b: f64, ub: &str| {
-        format!("{} {ua} at {} {ub}", shown::num(a), shown::num(b))
+        tr_with(
+            "{0} {1} at {2} {3}",
+            &[&shown::num(a), &ua, &shown::num(b), &ub],
+        )
     };
     match p.set.spec {
         CylinderSpec::Stamped {
             water_l,
             working_bar,
-        } => format!(
-            "{} · each {}",
-            p.material.name(),
-            each(water_l, "L", working_bar, "bar")
+        } => tr_with(
+            "{0} · each {1}",
+            &[&p.material.name(), &each(water_l, "L", working_bar, "bar")],
         ),
         CylinderSpec::Rated {
             rated_cuft,
             rated_psi,
-        } => format!(
-            "{} · each {} ({} L water)",
-            p.material.name(),
-            each(rated_cuft, "cu ft", rated_psi, "psi"),
-            shown::num(
-                (p.set.spec.water_per_cylinder(ModelKind::Real).litres() * 10.0).round() / 10.0
-            )
+        } => tr_with(
+            "{0} · each {1} ({2} L water)",
+            &[
+                &p.material.name(),
+                &each(rated_cuft, "cu ft", rated_psi, "psi"),
+                &shown::num(
+                    (p.set.spec.water_per_cylinder(ModelKind::Real).litres() * 10.0).round() / 10.0,
+                ),
+            ],
         ),
     }
 }

@@ -7,6 +7,7 @@
 //! `pickers.rs` (cylinder and mix pickers),
 //! `settings.rs` and `keypad.rs`.
 
+use crate::i18n::{tr, tr_with};
 use crate::plan::shown;
 use crate::plan::text::first_upper;
 use crate::plan::{Depth, Gauge, Pressure, Rule, Temperature, UnitSystem, Volume};
@@ -115,7 +116,7 @@ pub fn depth_value(u: UnitSystem, d: Depth) -> String {
 /// A depth as shown on the Team page: feet to the nearest foot; no depth is "Depth —".
 pub fn depth_text(d: Option<Depth>, u: UnitSystem) -> String {
     match d {
-        None => "Depth —".to_string(),
+        None => tr("Depth —"),
         Some(d) => format!(
             "{} {}",
             shown::num(match u {
@@ -178,11 +179,18 @@ pub fn rule_warning(rule: Rule) -> String {
     if rule.fit_for_overhead() {
         String::new()
     } else {
-        format!(
-            "{} is an open-water rule, not for overhead dives.",
-            capitalised(rule.name())
+        tr_with(
+            "{0} is an open-water rule, not for overhead dives.",
+            &[&capitalised(rule.name())],
         )
     }
+}
+
+/// Names joined as a person reads them: "Ines", "Ines and Bram".
+pub fn and_list(names: &[&str]) -> String {
+    let mut it = names.iter();
+    let first = it.next().map(|n| n.to_string()).unwrap_or_default();
+    it.fold(first, |acc, n| tr_with("{0} and {1}", &[&acc, n]))
 }
 
 /// The first letter upper case, the rest lower case.
@@ -253,30 +261,30 @@ pub fn error_for_people(names: &[String], e: &crate::plan::InputError) -> String
         }
         field = tail.trim_start_matches('.');
     }
-    let words: Vec<&str> = field
+    let words: Vec<String> = field
         .split('.')
         .filter(|p| !p.is_empty())
         .map(|p| match p {
-            "water_l" => "water capacity",
-            "working_bar" => "working pressure",
-            "rated_cuft" => "rated volume",
-            "rated_psi" => "rated pressure",
-            "sac" => "breathing rate",
-            "gauge_step" => "gauge step",
-            "step" => "graduation",
-            "water_temp" => "water temperature",
-            "o2" => "oxygen",
-            "he" => "helium",
-            "count" => "number of cylinders",
-            other => other,
+            "water_l" => tr("water capacity"),
+            "working_bar" => tr("working pressure"),
+            "rated_cuft" => tr("rated volume"),
+            "rated_psi" => tr("rated pressure"),
+            "sac" => tr("breathing rate"),
+            "gauge_step" => tr("gauge step"),
+            "step" => tr("graduation"),
+            "water_temp" => tr("water temperature"),
+            "o2" => tr("oxygen"),
+            "he" => tr("helium"),
+            "count" => tr("number of cylinders"),
+            other => other.to_string(),
         })
         .collect();
     let what = words.join(" ");
     match (who.is_empty(), what.is_empty()) {
         (true, true) => first_upper(&e.message),
-        (true, false) => format!("{}: {}", first_upper(&what), e.message),
-        (false, true) => format!("{who}: {}", e.message),
-        (false, false) => format!("{who}, {what}: {}", e.message),
+        (true, false) => tr_with("{0}: {1}", &[&first_upper(&what), &e.message]),
+        (false, true) => tr_with("{0}: {1}", &[&who, &e.message]),
+        (false, false) => tr_with("{0}, {1}: {2}", &[&who, &what, &e.message]),
     }
 }
 

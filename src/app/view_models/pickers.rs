@@ -3,6 +3,7 @@
 
 use super::super::session::{Picker, Session};
 use super::locker::preset_detail;
+use crate::i18n::{tr, tr_with};
 use crate::plan::ModelKind;
 use crate::plan::presets;
 use crate::plan::shown;
@@ -146,10 +147,12 @@ fn custom(s: &Session) -> Option<CustomVm> {
     };
     let (summary, problem) = match set.to_set() {
         Ok(c) => (
-            format!(
-                "{} · {} L of water in all",
-                set.label(&c),
-                crate::plan::shown::fixed(c.water(ModelKind::Real).litres(), 1)
+            tr_with(
+                "{0} · {1} L of water in all",
+                &[
+                    &set.label(&c),
+                    &crate::plan::shown::fixed(c.water(ModelKind::Real).litres(), 1),
+                ],
             ),
             String::new(),
         ),
@@ -159,8 +162,8 @@ fn custom(s: &Session) -> Option<CustomVm> {
         count: i32::from(set.count),
         independent: set.independent,
         rated: set.rated,
-        first_caption: a.0.to_string(),
-        second_caption: b.0.to_string(),
+        first_caption: a.0.clone(),
+        second_caption: b.0.clone(),
         first_name: a.0.to_lowercase(),
         second_name: b.0.to_lowercase(),
         first_value: value(set.first, a.1),
@@ -175,12 +178,16 @@ fn mix_rows(s: &Session) -> Vec<MixRowVm> {
     let mut rows = Vec::new();
     let mut index = 0;
     for (heading, mixes) in [
-        ("RECENT AND IN THIS TEAM", &choices.own),
-        ("COMMON MIXES", &choices.common),
+        (tr("RECENT AND IN THIS TEAM"), &choices.own),
+        (tr("COMMON MIXES"), &choices.common),
     ] {
         for (n, chunk) in mixes.chunks(MIXES_PER_ROW).enumerate() {
             rows.push(MixRowVm {
-                heading: if n == 0 { heading } else { "" }.to_string(),
+                heading: if n == 0 {
+                    heading.clone()
+                } else {
+                    String::new()
+                },
                 items: chunk
                     .iter()
                     .map(|m| {
@@ -207,24 +214,24 @@ pub fn picker_title(s: &Session) -> String {
         Picker::Cylinders {
             diver,
             stage: false,
-        } => format!("Cylinders for {}", name(diver)),
-        Picker::Cylinders { diver, stage: true } => format!("Stage for {}", name(diver)),
+        } => tr_with("Cylinders for {0}", &[&name(diver)]),
+        Picker::Cylinders { diver, stage: true } => tr_with("Stage for {0}", &[&name(diver)]),
         Picker::Custom {
             diver,
             stage: false,
             ..
-        } => format!("Custom cylinders for {}", name(diver)),
+        } => tr_with("Custom cylinders for {0}", &[&name(diver)]),
         Picker::Custom {
             diver, stage: true, ..
-        } => format!("Custom stage for {}", name(diver)),
+        } => tr_with("Custom stage for {0}", &[&name(diver)]),
         Picker::Mix {
             diver,
             stage: false,
             ..
-        } => format!("Gas for {}", name(diver)),
+        } => tr_with("Gas for {0}", &[&name(diver)]),
         Picker::Mix {
             diver, stage: true, ..
-        } => format!("Stage gas for {}", name(diver)),
+        } => tr_with("Stage gas for {0}", &[&name(diver)]),
         Picker::None => String::new(),
     }
 }

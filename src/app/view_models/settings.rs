@@ -1,6 +1,5 @@
 //! The Settings and Cautions pages.
 
-use super::super::cautions::CAUTIONS;
 use super::super::session::Session;
 use super::{rule_index, step_index, step_labels, temperature_text};
 use crate::i18n::{Language, tr_with};
@@ -42,16 +41,18 @@ pub fn settings(s: &Session) -> SettingsVm {
             .position(|t| *t == cfg.theme)
             .unwrap_or(0) as i32,
         theme: cfg.theme,
-        about: format!(
-            "Turnsheet {} · free software under the GNU GPL, version 3 or later · built with Slint {} (used under its GPL-3.0 licence) · real-gas contents by GERG-2008 (the aga8 crate) · Roboto fonts under the Apache License 2.0 · data in {}",
-            env!("CARGO_PKG_VERSION"),
-            "1.18.1",
-            s.data_dir().display()
+        about: tr_with(
+            "Turnsheet {0} · free software under the GNU GPL, version 3 or later · built with Slint {1} (used under its GPL-3.0 licence) · real-gas contents by GERG-2008 (the aga8 crate) · Roboto fonts under the Apache License 2.0 · data in {2}",
+            &[
+                &env!("CARGO_PKG_VERSION"),
+                &"1.18.1",
+                &s.data_dir().display(),
+            ],
         ),
     }
 }
 
 /// The cautions, one paragraph each.
 pub fn cautions() -> Vec<String> {
-    CAUTIONS.iter().map(|c| c.to_string()).collect()
+    super::super::cautions::cautions()
 }

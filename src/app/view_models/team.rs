@@ -6,6 +6,7 @@ use super::{
     temperature_text,
 };
 use crate::app::readings::{StartStatus, when_text};
+use crate::i18n::{tr, tr_n, tr_with};
 use crate::plan::Water;
 use crate::plan::shown;
 
@@ -39,17 +40,21 @@ pub fn team_page(s: &Session) -> TeamPageVm {
         depth_text: depth_label(s),
         water_text: water_text(s),
         water_temp: water_temp_text(s),
-        settings_summary: format!(
-            "{} · {} steps · {} {} · {}",
-            super::rule_symbols()[rule_index(input.rule) as usize],
-            step_labels(input.units)
-                .get(step_index(input.units, input.gauge_step) as usize)
-                .cloned()
-                .unwrap_or_else(|| format!("{}", input.gauge_step)),
-            depth_label(s),
-            water_text(s).to_lowercase(),
-            water_temp_text(s)
-        ),
+        settings_summary: {
+            let args: [&dyn std::fmt::Display; 4] = [
+                &super::rule_symbols()[rule_index(input.rule) as usize],
+                &step_labels(input.units)
+                    .get(step_index(input.units, input.gauge_step) as usize)
+                    .cloned()
+                    .unwrap_or_else(|| format!("{}", input.gauge_step)),
+                &depth_label(s),
+                &water_temp_text(s),
+            ];
+            match input.water {
+                Water::Fresh => tr_with("{0} · {1} steps · {2} fresh · {3}", &args),
+                Water::Salt => tr_with("{0} · {1} steps · {2} salt · {3}", &args),
+            }
+        },
         undo: s.undo_text().to_string(),
         can_add: s.team.can_add(),
         can_remove: s.team.can_remove(),
@@ -108,22 +113,22 @@ pub fn diver_cards(s: &Session) -> Vec<DiverCardVm> {
                 unit: g.label().to_string(),
                 gauge: gauge_text(g),
                 start_note: match status {
-                    StartStatus::Fresh => format!("Start {}", s.read_text(i)),
+                    StartStatus::Fresh => tr_with("Start {0}", &[&s.read_text(i)]),
                     _ => start_note(status, now),
                 },
                 read: match status {
-                    StartStatus::Missing => "not read".to_string(),
+                    StartStatus::Missing => tr("not read"),
                     StartStatus::Old { .. } => String::new(),
                     _ => s.read_text(i),
                 },
                 start_ok: status == StartStatus::Fresh,
                 confirm: match status {
-                    StartStatus::Old { .. } => format!("Still reads {read} {}", g.label()),
+                    StartStatus::Old { .. } => tr_with("Still reads {0} {1}", &[&read, &g.label()]),
                     _ => String::new(),
                 },
                 sac: match d.sac_l_per_min {
-                    Some(l) => format!("SAC {} {}/min", rate_text(u, l), u.volume_label()),
-                    None => "SAC — tap to add for time to turn".to_string(),
+                    Some(l) => tr_with("SAC {0} {1}/min", &[&rate_text(u, l), &u.volume_label()]),
+                    None => tr("SAC — tap to add for time to turn"),
                 },
                 error: warnings
                     .iter()
@@ -133,8 +138,8 @@ pub fn diver_cards(s: &Session) -> Vec<DiverCardVm> {
                     .join(" "),
                 has_stage: d.stage.is_some(),
                 stage: match &d.stage {
-                    Some(_) => format!("Stage: {}", s.team.stage_labels()[i]),
-                    None => "+ Stage (dropped on the way in)".to_string(),
+                    Some(_) => tr_with("Stage: {0}", &[&s.team.stage_labels()[i]]),
+                    None => tr("+ Stage (dropped on the way in)"),
                 },
                 stage_mix: d
                     .stage
@@ -156,11 +161,9 @@ pub fn diver_cards(s: &Session) -> Vec<DiverCardVm> {
 pub fn start_note(status: StartStatus, now: i64) -> String {
     match status {
         StartStatus::Fresh => String::new(),
-        StartStatus::Missing => "Not read yet: read the gauge in the water".to_string(),
-        StartStatus::Predicted => {
-            "Predicted from the fill: read the gauge in the water".to_string()
-        }
-        StartStatus::Old { at } => format!("Entered {}: check the gauge", when_text(at, now)),
+        StartStatus::Missing => tr("Not read yet: read the gauge in the water"),
+        StartStatus::Predicted => tr("Predicted from the fill: read the gauge in the water"),
+        StartStatus::Old { at } => tr_with("Entered {0}: check the gauge", &[&when_text(at, now)]),
     }
 }
 
@@ -185,12 +188,16 @@ pub fn team_summary(s: &Session) -> String {
         .into_iter()
         .map(|i| plan.divers[i].name.as_str())
         .collect();
-    format!(
-        "Turns: {} · {} control{} (least usable gas) · {}",
-        turns.join(" · "),
-        who.join(" and "),
-        if who.len() == 1 { "s" } else { "" },
-        super::rule_head(s)
+    // The verb agrees with the divers named: "Ines controls", "Ines and Bram control".
+    tr_n(
+        "Turns: {0} · {1} controls (least usable gas) · {2}",
+        "Turns: {0} · {1} control (least usable gas) · {2}",
+        who.len() as u64,
+        &[
+            &turns.join(" · "),
+            &super::and_list(&who),
+            &super::rule_head(s),
+        ],
     )
 }
 
@@ -201,10 +208,9 @@ pub fn depth_label(s: &Session) -> String {
 /// "Fresh" or "Salt".
 pub fn water_text(s: &Session) -> String {
     match s.team.input().water {
-        Water::Fresh => "Fresh",
-        Water::Salt => "Salt",
+        Water::Fresh => tr("Fresh"),
+        Water::Salt => tr("Salt"),
     }
-    .to_string()
 }
 
 pub fn water_temp_text(s: &Session) -> String {
@@ -214,12 +220,11 @@ pub fn water_temp_text(s: &Session) -> String {
 /// The line every page shows while the team is the demo; empty otherwise.
 pub fn demo_note(s: &Session) -> String {
     if s.team.is_demo() {
-        let whence = if s.page() == crate::app::nav::Screen::Team {
-            "at the top of this page"
+        if s.page() == crate::app::nav::Screen::Team {
+            tr("DEMO: invented divers. Tap New team at the top of this page to plan your own.")
         } else {
-            "on the Team page"
-        };
-        format!("DEMO: invented divers. Tap New team {whence} to plan your own.")
+            tr("DEMO: invented divers. Tap New team on the Team page to plan your own.")
+        }
     } else {
         String::new()
     }
@@ -244,21 +249,21 @@ pub fn gauge_chooser(s: &Session) -> Option<GaugeChooserVm> {
     let now = s.team.input().gauge_of(i);
     let read = s.team.start_status(i, s.now()) != StartStatus::Missing;
     Some(GaugeChooserVm {
-        title: format!("Gauge of {}", d.name),
+        title: tr_with("Gauge of {0}", &[&d.name]),
         note: if read {
-            format!(
-                "The gauge {} reads in the water. A gauge in the other unit makes the start unread: read it again on that gauge.",
-                d.name
+            tr_with(
+                "The gauge {0} reads in the water. A gauge in the other unit makes the start unread: read it again on that gauge.",
+                &[&d.name],
             )
         } else {
-            format!("The gauge {} reads in the water.", d.name)
+            tr_with("The gauge {0} reads in the water.", &[&d.name])
         },
         choices: crate::app::session::GAUGES
             .iter()
             .map(|g| {
                 (
-                    format!("{}, {} {} steps", g.label(), shown::num(g.step), g.label()),
-                    format!("gauge {} {}", g.label(), shown::num(g.step)),
+                    tr_with("{0}, {1} {0} steps", &[&g.label(), &shown::num(g.step)]),
+                    tr_with("gauge {0} {1}", &[&g.label(), &shown::num(g.step)]),
                     *g == now,
                 )
             })

@@ -2,6 +2,7 @@
 
 use super::super::session::Session;
 use super::{pressure_down_text, temperature_text};
+use crate::i18n::{tr, tr_with};
 use crate::plan::Warning;
 use crate::plan::shown;
 use crate::plan::shown::whole_down;
@@ -45,19 +46,21 @@ pub fn fill(s: &Session) -> FillVm {
         result: shown::num(real),
         unit: pu.to_string(),
         detail: if dt.abs() < 0.5 {
-            "Filled at water temperature: no change expected.".to_string()
+            tr("Filled at water temperature: no change expected.")
         } else {
-            format!(
-                "Real gas: {} {pu} per {} of temperature change; the ideal gas law would say {} {pu}.",
-                shown::num(((fill - real) / dt * 10.0).round() / 10.0),
-                tu,
-                shown::num(ideal)
+            tr_with(
+                "Real gas: {0} {1} per {2} of temperature change; the ideal gas law would say {3} {1}.",
+                &[
+                    &shown::num(((fill - real) / dt * 10.0).round() / 10.0),
+                    &pu,
+                    &tu,
+                    &shown::num(ideal),
+                ],
             )
         },
-        use_text: format!(
-            "Plan with {} {pu} for {} until the gauge is read in the water",
-            shown::num(real),
-            d.name
+        use_text: tr_with(
+            "Plan with {0} {1} for {2} until the gauge is read in the water",
+            &[&shown::num(real), &pu, &d.name],
         ),
         warning: {
             // The team as it would be with the prediction as this diver's start: the
@@ -134,13 +137,23 @@ pub fn chart(s: &Session) -> Option<ChartVm> {
         .filter(|&&i| !usable(i))
         .map(|&i| input.divers[i].name.as_str())
         .collect();
-    let why = if unread.is_empty() {
-        String::new()
-    } else {
-        format!(
-            "No planned start is boxed: the start of {} is not a reading of this dive (read it in the water; a reading counts for three hours). ",
-            unread.join(" and ")
+    let how_to_read = if input.divers.len() > 2 {
+        tr(
+            "With more than one teammate, read your chart against each and keep the HIGHEST turn. Between rows, read the higher start; between columns, the lower teammate start.",
         )
+    } else {
+        tr(
+            "Between two rows, read the higher start; between two columns, the lower teammate start.",
+        )
+    };
+    let note = if unread.is_empty() {
+        how_to_read
+    } else {
+        let why = tr_with(
+            "No planned start is boxed: the start of {0} is not a reading of this dive (read it in the water; a reading counts for three hours).",
+            &[&super::and_list(&unread)],
+        );
+        format!("{why} {how_to_read}")
     };
     Some(ChartVm {
         diver: input.divers[chart.me].name.clone(),
@@ -162,12 +175,7 @@ pub fn chart(s: &Session) -> Option<ChartVm> {
                 planned: Some(r) == my_row,
             })
             .collect(),
-        note: why
-            + if input.divers.len() > 2 {
-                "With more than one teammate, read your chart against each and keep the HIGHEST turn. Between rows, read the higher start; between columns, the lower teammate start."
-            } else {
-                "Between two rows, read the higher start; between two columns, the lower teammate start."
-            },
+        note,
     })
 }
 

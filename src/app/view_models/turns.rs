@@ -4,6 +4,7 @@
 use super::super::session::Session;
 use super::{gauge_text, reading, temperature_text};
 use crate::app::readings::{StartStatus, when_text};
+use crate::i18n::{tr, tr_with};
 use crate::plan::shown::turn as turn_text;
 use crate::plan::{
     allowance_sentence, allowance_source_sentence, allowance_sources, hand_working, turn_how,
@@ -19,31 +20,41 @@ pub fn stage_text(s: &Session, i: usize) -> String {
     // A drop pressure only from a stage start read today.
     match s.team.stage_status(i, s.now()) {
         Some(StartStatus::Missing) => {
-            return format!("Stage drop: read the stage gauge of {name} in the water first.");
+            return tr_with(
+                "Stage drop: read the stage gauge of {0} in the water first.",
+                &[name],
+            );
         }
         Some(StartStatus::Old { at }) => {
-            return format!(
-                "Stage drop: the stage start was entered {}; read the stage gauge again.",
-                when_text(at, s.now())
+            return tr_with(
+                "Stage drop: the stage start was entered {0}; read the stage gauge again.",
+                &[&when_text(at, s.now())],
             );
         }
         _ => {}
     }
     match (&plan.divers[i].stage, &s.team.input().divers[i].stage) {
-        (Some(st), Some(si)) => format!(
-            "Drop stage at {} {u} ({}, {}, start {} {u}; set by {}){}",
-            turn_text(st.drop_shown_value),
-            s.team.stage_labels()[i],
-            si.mix.label(),
-            reading(g, st.start),
-            st.set_by.describe(),
+        (Some(st), Some(si)) => {
+            let args: [&dyn std::fmt::Display; 6] = [
+                &turn_text(st.drop_shown_value),
+                &g.label(),
+                &s.team.stage_labels()[i],
+                &si.mix.label(),
+                &reading(g, st.start),
+                &st.set_by.describe(),
+            ];
             if st.controlling {
-                ". This stage has the least usable gas and sets every stage's drop."
+                tr_with(
+                    "Drop stage at {0} {1} ({2}, {3}, start {4} {1}; set by {5}). This stage has the least usable gas and sets every stage's drop.",
+                    &args,
+                )
             } else {
-                ""
-            },
-            u = g.label(),
-        ),
+                tr_with(
+                    "Drop stage at {0} {1} ({2}, {3}, start {4} {1}; set by {5})",
+                    &args,
+                )
+            }
+        }
         _ => String::new(),
     }
 }
@@ -78,7 +89,7 @@ impl TurnRowVm {
     pub fn buddy_info(&self) -> String {
         let mut parts = Vec::new();
         if self.controlling {
-            parts.push("● controls: least gas".to_string());
+            parts.push(tr("● controls: least gas"));
         }
         if !self.read_short.is_empty() {
             parts.push(self.read_short.clone());
@@ -104,19 +115,20 @@ pub fn starts_blocking(s: &Session) -> Option<String> {
         .map(|i| {
             let name = &input.divers[i].name;
             match s.team.start_status(i, now) {
-                StartStatus::Old { at } => {
-                    format!("{name} (start entered {}: check)", when_text(at, now))
-                }
-                _ => format!("{name} (start not read)"),
+                StartStatus::Old { at } => tr_with(
+                    "{0} (start entered {1}: check)",
+                    &[name, &when_text(at, now)],
+                ),
+                _ => tr_with("{0} (start not read)", &[name]),
             }
         })
         .collect();
     if why.is_empty() {
         None
     } else {
-        Some(format!(
-            "No turn pressures until every start is read in the water today: {}.",
-            why.join(", ")
+        Some(tr_with(
+            "No turn pressures until every start is read in the water today: {0}.",
+            &[&why.join(", ")],
         ))
     }
 }
@@ -139,12 +151,14 @@ pub fn starts_blocking_short(s: &Session) -> Option<String> {
     if read.is_empty() && check.is_empty() {
         return None;
     }
-    let mut text = "No turns yet.".to_string();
+    let mut text = tr("No turns yet.");
     if !read.is_empty() {
-        text += &format!(" Read in the water: {}.", read.join(", "));
+        text += " ";
+        text += &tr_with("Read in the water: {0}.", &[&read.join(", ")]);
     }
     if !check.is_empty() {
-        text += &format!(" Check the gauge: {}.", check.join(", "));
+        text += " ";
+        text += &tr_with("Check the gauge: {0}.", &[&check.join(", ")]);
     }
     Some(text)
 }
@@ -183,14 +197,15 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
                 },
                 unit: g.label().to_string(),
                 read: match status {
-                    StartStatus::Missing => "Start not read".to_string(),
+                    StartStatus::Missing => tr("Start not read"),
                     StartStatus::Old { at } => {
-                        format!("Start entered {}: check the gauge", when_text(at, now))
+                        tr_with("Start entered {0}: check the gauge", &[&when_text(at, now)])
                     }
-                    StartStatus::Predicted => {
-                        format!("Start {start}, {} from the fill, not read", s.read_text(i))
-                    }
-                    StartStatus::Fresh => format!("Start {start}, {}", s.read_text(i)),
+                    StartStatus::Predicted => tr_with(
+                        "Start {0}, {1} from the fill, not read",
+                        &[&start, &s.read_text(i)],
+                    ),
+                    StartStatus::Fresh => tr_with("Start {0}, {1}", &[&start, &s.read_text(i)]),
                 },
                 how: if ready {
                     turn_how(plan, i)
@@ -198,26 +213,30 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
                     String::new()
                 },
                 sums: if ready {
-                    format!(
-                        "By hand: {}. {}. {}. Exact figures: {}.",
-                        hand.content,
-                        allowance_sentence(input, plan),
-                        hand.turn,
-                        turn_sentence(plan, i)
+                    tr_with(
+                        "By hand: {0}. {1}. {2}. Exact figures: {3}.",
+                        &[
+                            &hand.content,
+                            &allowance_sentence(input, plan),
+                            &hand.turn,
+                            &turn_sentence(plan, i),
+                        ],
                     )
                 } else {
                     String::new()
                 },
-                detail: format!(
-                    "{} · {} · gauge {}",
-                    s.team.labels()[i],
-                    input.divers[i].mix.label(),
-                    gauge_text(g)
+                detail: tr_with(
+                    "{0} · {1} · gauge {2}",
+                    &[
+                        &s.team.labels()[i],
+                        &input.divers[i].mix.label(),
+                        &gauge_text(g),
+                    ],
                 ),
                 minutes: match (ready, d.minutes_to_turn) {
-                    (true, Some(m)) => format!(
-                        "About {} min to turn at the planned depth",
-                        crate::plan::shown::minutes(m)
+                    (true, Some(m)) => tr_with(
+                        "About {0} min to turn at the planned depth",
+                        &[&crate::plan::shown::minutes(m)],
                     ),
                     _ => String::new(),
                 },
@@ -232,17 +251,16 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
                 stage_short: {
                     let mut parts = Vec::new();
                     if predicted {
-                        parts.push("start predicted".to_string());
+                        parts.push(tr("start predicted"));
                     }
                     let stage_read = s.team.stage_status(i, now).is_some_and(|st| st.usable());
                     if d.stage.is_some() && ready && !stage_read {
-                        parts.push("stage: read its gauge".to_string());
+                        parts.push(tr("stage: read its gauge"));
                     }
                     if let (Some(st), true) = (&d.stage, ready && stage_read) {
-                        parts.push(format!(
-                            "drop stage at {} {}",
-                            turn_text(st.drop_shown_value),
-                            g.label()
+                        parts.push(tr_with(
+                            "drop stage at {0} {1}",
+                            &[&turn_text(st.drop_shown_value), &g.label()],
                         ));
                     }
                     parts.join(" · ")
@@ -256,22 +274,26 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
 /// The rule and water the turns are made with: "Rule of thirds · fresh water 12 °C".
 pub fn rule_head(s: &Session) -> String {
     let input = s.team.input();
-    format!(
-        "Rule of {} · {} water {}",
-        input.rule.name(),
-        super::water_text(s).to_lowercase(),
-        temperature_text(input.units, input.water_temp)
-    )
+    let args: [&dyn std::fmt::Display; 2] = [
+        &input.rule.name(),
+        &temperature_text(input.units, input.water_temp),
+    ];
+    match input.water {
+        crate::plan::Water::Fresh => tr_with("Rule of {0} · fresh water {1}", &args),
+        crate::plan::Water::Salt => tr_with("Rule of {0} · salt water {1}", &args),
+    }
 }
 
 /// The buddy view's top line: what the turns were made with.
 pub fn buddy_heading(s: &Session) -> String {
-    let demo = if s.team.is_demo() {
-        "DEMO, invented divers · "
+    if s.team.is_demo() {
+        tr_with(
+            "DEMO, invented divers · TURNS · {0} · own gauges · tap to close",
+            &[&rule_head(s)],
+        )
     } else {
-        ""
-    };
-    format!("{demo}TURNS · {} · own gauges · tap to close", rule_head(s))
+        tr_with("TURNS · {0} · own gauges · tap to close", &[&rule_head(s)])
+    }
 }
 
 /// The rule line: the rule, the water and where each shown turn's allowance comes from.
@@ -281,17 +303,21 @@ pub fn rule_text(s: &Session) -> String {
     let plan = s.team.plan();
     let head = rule_head(s);
     if starts_blocking(s).is_some() {
-        return format!(
-            "{head}. Who controls and how much each diver may use need every start read in the water."
+        return tr_with(
+            "{0}. Who controls and how much each diver may use need every start read in the water.",
+            &[&head],
         );
     }
-    format!("{head}. {}", allowance_source_sentence(input, plan))
+    tr_with(
+        "{0}. {1}",
+        &[&head, &allowance_source_sentence(input, plan)],
+    )
 }
 
 /// The out-of-gas check, once every start is read today.
 pub fn margin_text(s: &Session) -> String {
     if starts_blocking(s).is_some() {
-        return "Needs every start read in the water.".to_string();
+        return tr("Needs every start read in the water.");
     }
     let plan = s.team.plan();
     let at_turn = plan.margin_at_first_turn_text();
@@ -308,10 +334,12 @@ pub fn first_text(s: &Session) -> String {
     }
     let plan = s.team.plan();
     match plan.first_to_turn {
-        Some(i) => format!(
-            "{} reaches turn first, after about {} min.",
-            plan.divers[i].name,
-            crate::plan::shown::minutes(plan.divers[i].minutes_to_turn.unwrap_or(0.0))
+        Some(i) => tr_with(
+            "{0} reaches turn first, after about {1} min.",
+            &[
+                &plan.divers[i].name,
+                &crate::plan::shown::minutes(plan.divers[i].minutes_to_turn.unwrap_or(0.0)),
+            ],
         ),
         None => String::new(),
     }

@@ -5,6 +5,7 @@
 
 use crate::app::keypad::KeypadBuffer;
 use crate::app::view_models as vm;
+use crate::i18n::{tr, tr_with};
 use crate::plan::error::{InputError, check_range};
 use crate::plan::shown;
 use crate::plan::validate_start;
@@ -66,15 +67,15 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                     let label = &s.team.labels()[i];
                     // Two or more cylinders not on a manifold each have a gauge.
                     let separate = d.cylinders.count > 1 && !label.starts_with("Twin");
-                    format!(
-                        "Start for {} ({label}), read in the water{}",
-                        d.name,
-                        if separate {
-                            ". Balance the cylinders; enter what each gauge reads"
-                        } else {
-                            ""
-                        }
-                    )
+                    let args: [&dyn std::fmt::Display; 2] = [&d.name, label];
+                    if separate {
+                        tr_with(
+                            "Start for {0} ({1}), read in the water. Balance the cylinders; enter what each gauge reads",
+                            &args,
+                        )
+                    } else {
+                        tr_with("Start for {0} ({1}), read in the water", &args)
+                    }
                 },
                 unit: g.label().to_string(),
                 live: true,
@@ -83,7 +84,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                 // empty for an unread start.
                 revert: Some(vm::reading(g, d.start)),
                 check: check(move |s, t| {
-                    let v = t.number("start", "enter the pressure read in the water")?;
+                    let v = t.number("start", &tr("enter the pressure read in the water"))?;
                     let working = s.team.input().divers[i].cylinders.working_pressure();
                     validate_start(g, "start", g.pressure(v), working)
                 }),
@@ -111,19 +112,20 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                     },
                     false,
                 ),
-                title: format!(
-                    "Stage pressure for {} ({}), read in the water",
-                    d.name,
-                    s.team.stage_labels()[i]
+                title: tr_with(
+                    "Stage pressure for {0} ({1}), read in the water",
+                    &[&d.name, &s.team.stage_labels()[i]],
                 ),
                 unit: g.label().to_string(),
                 live: true,
                 step: None,
                 check: check(move |s, t| {
-                    let v =
-                        t.number("stage start", "enter the stage pressure read in the water")?;
+                    let v = t.number(
+                        "stage start",
+                        &tr("enter the stage pressure read in the water"),
+                    )?;
                     let Some(st) = &s.team.input().divers[i].stage else {
-                        return Err(InputError::new("stage", "this diver carries no stage"));
+                        return Err(InputError::new("stage", tr("this diver carries no stage")));
                     };
                     let working = st.cylinders.working_pressure();
                     validate_start(g, "stage start", g.pressure(v), working)
@@ -148,9 +150,9 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                         .unwrap_or_default(),
                     true,
                 ),
-                title: format!(
-                    "Surface breathing rate (SAC) for {}; leave empty for none",
-                    d.name
+                title: tr_with(
+                    "Surface breathing rate (SAC) for {0}; leave empty for none",
+                    &[&d.name],
                 ),
                 unit: format!("{}/min", u.volume_label()),
                 live: true,
@@ -169,7 +171,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                     .unwrap_or_default(),
                 false,
             ),
-            title: "Planned depth for time to turn; leave empty for none".to_string(),
+            title: tr("Planned depth for time to turn; leave empty for none"),
             unit: u.depth_label().to_string(),
             live: true,
             step: None,
@@ -182,7 +184,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
         EntryTarget::DefaultWaterTemp => temperatures::default_water(s),
         EntryTarget::DiverName(i) => Field {
             buffer: KeypadBuffer::letters(&input.divers.get(i)?.name, 32),
-            title: format!("Name for diver {}", i + 1),
+            title: tr_with("Name for diver {0}", &[&(i + 1)]),
             unit: String::new(),
             live: true,
             step: None,
@@ -198,12 +200,12 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                 if t.text.is_empty() {
                     Err(InputError::new(
                         "name",
-                        "a name of 1 to 24 characters is needed",
+                        tr("a name of 1 to 24 characters is needed"),
                     ))
                 } else if taken {
                     Err(InputError::new(
                         "name",
-                        "another diver already has this name",
+                        tr("another diver already has this name"),
                     ))
                 } else {
                     Ok(())
@@ -214,14 +216,14 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
         },
         EntryTarget::LockerName => Field {
             buffer: KeypadBuffer::letters(&draft?.name, crate::storage::locker::MAX_SET_NAME_CHARS),
-            title: "Name of the cylinder set".to_string(),
+            title: tr("Name of the cylinder set"),
             unit: String::new(),
             live: false,
             step: None,
             revert: None,
             check: check(|_, t| {
                 if t.text.is_empty() {
-                    Err(InputError::new("name", "a name is needed"))
+                    Err(InputError::new("name", tr("a name is needed")))
                 } else {
                     Ok(())
                 }
@@ -234,7 +236,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
         },
         EntryTarget::LockerNote => Field {
             buffer: KeypadBuffer::letters(&draft?.note, crate::storage::locker::MAX_SET_NOTE_CHARS),
-            title: "Note (serial, test date, valves…)".to_string(),
+            title: tr("Note (serial, test date, valves…)"),
             unit: String::new(),
             live: false,
             step: None,
@@ -254,13 +256,13 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
         EntryTarget::MixHe => sizes::mix_percent(s, true)?,
         EntryTarget::FillPressure => Field {
             buffer: KeypadBuffer::digits(&vm::start_text(u, s.fill.pressure), false),
-            title: "Pressure read at the fill station, cylinder still warm".to_string(),
+            title: tr("Pressure read at the fill station, cylinder still warm"),
             unit: u.pressure_label().to_string(),
             live: false,
             step: None,
             revert: None,
             check: check(move |_, t| {
-                let v = t.number("fill pressure", "enter a pressure")?;
+                let v = t.number("fill pressure", &tr("enter a pressure"))?;
                 let max = u.pressure_value(Pressure::from_bar(400.0)).floor();
                 check_range("fill pressure", v, 1.0, max, u.pressure_label())
             }),
@@ -276,5 +278,5 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
 
 /// The typed pressure, read in `unit`.
 fn pressure(unit: PressureUnit, t: Typed) -> Result<Pressure, InputError> {
-    Ok(unit.pressure(t.number("pressure", "enter a pressure")?))
+    Ok(unit.pressure(t.number("pressure", &tr("enter a pressure"))?))
 }

@@ -6,6 +6,7 @@
 
 use crate::app::keypad::{KeypadBuffer, parse_value};
 use crate::app::view_models as vm;
+use crate::i18n::tr_with;
 use crate::plan::error::InputError;
 use crate::plan::next_step;
 use crate::plan::shown;
@@ -204,8 +205,8 @@ impl Session {
         }
         if let Some(before) = self.pending_change.take() {
             let what = match entry.target {
-                EntryTarget::Depth => format!("Depth now {}", vm::depth_label(self)),
-                _ => format!("Water now {}", vm::water_temp_text(self)),
+                EntryTarget::Depth => tr_with("Depth now {0}", &[&vm::depth_label(self)]),
+                _ => tr_with("Water now {0}", &[&vm::water_temp_text(self)]),
             };
             self.after_change(what, before);
         }

@@ -4,6 +4,7 @@
 
 use crate::app::keypad::KeypadBuffer;
 use crate::app::view_models as vm;
+use crate::i18n::{tr, tr_with};
 use crate::plan::error::check_range;
 use crate::plan::shown;
 
@@ -11,7 +12,7 @@ use super::super::{Picker, Session};
 use super::{EntryTarget, Field, apply, check};
 
 /// (caption, unit, allowed range) of the two size fields.
-type Specs = [(&'static str, &'static str, f64, f64); 2];
+type Specs = [(String, &'static str, f64, f64); 2];
 
 /// The first (litres or cu ft) or second (bar or psi) size field. `specs` reads the
 /// fields' captions and ranges from the session (None when the set is gone) and
@@ -20,18 +21,23 @@ fn size_field(
     now: Specs,
     value: Option<f64>,
     first: bool,
-    title: &str,
+    custom: bool,
     specs: fn(&Session) -> Option<Specs>,
     set: fn(&mut Session, bool, Option<f64>),
 ) -> Field {
     let which = usize::from(!first);
-    let (caption, unit, _, _) = now[which];
+    let (caption, unit, _, _) = &now[which];
+    let unit = *unit;
     Field {
         buffer: KeypadBuffer::digits(
             &value.map(shown::num).unwrap_or_default(),
             unit == "L" || unit == "cu ft",
         ),
-        title: format!("{title}{} ({unit})", vm::capitalised(caption)),
+        title: if custom {
+            tr_with("Custom set: {0} ({1})", &[&vm::capitalised(caption), &unit])
+        } else {
+            format!("{} ({unit})", vm::capitalised(caption))
+        },
         unit: unit.to_string(),
         live: false,
         step: None,
@@ -39,9 +45,15 @@ fn size_field(
         check: check(move |s, t| match specs(s) {
             None => Ok(()),
             Some(specs) => {
-                let (caption, unit, lo, hi) = specs[which];
+                let (caption, unit, lo, hi) = &specs[which];
                 let name = caption.to_lowercase();
-                check_range(&name, t.number(&name, "enter a value")?, lo, hi, unit)
+                check_range(
+                    &name,
+                    t.number(&name, &tr("enter a value"))?,
+                    *lo,
+                    *hi,
+                    unit,
+                )
             }
         }),
         apply: apply(move |s, t| {
@@ -60,7 +72,7 @@ pub fn locker(s: &Session, first: bool) -> Option<Field> {
         d.field_specs(),
         value,
         first,
-        "",
+        false,
         |s| s.locker.draft().map(|d| d.field_specs()),
         |s, first, v| {
             s.locker.edit_draft(|d| {
@@ -84,7 +96,7 @@ pub fn custom(s: &Session, first: bool) -> Option<Field> {
         set.field_specs(),
         value,
         first,
-        "Custom set: ",
+        true,
         |s| match s.picker {
             Picker::Custom { set, .. } => Some(set.field_specs()),
             _ => None,
@@ -108,23 +120,26 @@ pub fn mix_percent(s: &Session, helium: bool) -> Option<Field> {
         return None;
     };
     let (name, value, lo, hi) = if helium {
-        ("helium (He)", he, 0.0, 95.0)
+        (tr("helium (He)"), he, 0.0, 95.0)
     } else {
-        ("oxygen (O2)", o2, 5.0, 100.0)
+        (tr("oxygen (O2)"), o2, 5.0, 100.0)
     };
     Some(Field {
         buffer: KeypadBuffer::digits(&value.to_string(), false),
-        title: format!("Custom mix: {name} in %"),
+        title: tr_with("Custom mix: {0} in %", &[&name]),
         unit: "%".to_string(),
         live: false,
         step: None,
         revert: None,
-        check: check(move |_, t| {
-            let v = t.number(name, "enter a whole percent")?;
-            check_range(name, v, lo, hi, "%")
+        check: check({
+            let name = name.clone();
+            move |_, t| {
+                let v = t.number(&name, &tr("enter a whole percent"))?;
+                check_range(&name, v, lo, hi, "%")
+            }
         }),
         apply: apply(move |s, t| {
-            let v = t.number(name, "enter a whole percent")?.round() as i32;
+            let v = t.number(&name, &tr("enter a whole percent"))?.round() as i32;
             if helium {
                 s.picker.set_mix_percent(None, Some(v));
             } else {

@@ -3,6 +3,7 @@
 
 use crate::app::keypad::KeypadBuffer;
 use crate::app::view_models as vm;
+use crate::i18n::tr;
 use crate::plan::WATER_TEMP_RANGE_C;
 use crate::plan::error::{InputError, check_range};
 use crate::plan::{Temperature, UnitSystem};
@@ -15,15 +16,15 @@ pub fn dive_water(s: &Session) -> Field {
     let u = s.units();
     Field {
         buffer: KeypadBuffer::digits(&vm::degrees(u, s.team.input().water_temp), false),
-        title:
-            "Water temperature of this dive: the gas cools to it, and every diver's plan uses it"
-                .to_string(),
+        title: tr(
+            "Water temperature of this dive: the gas cools to it, and every diver's plan uses it",
+        ),
         unit: u.temperature_label().to_string(),
         live: true,
         step: None,
         revert: None,
         check: check(|_, t| {
-            t.number("water temperature", "enter a temperature")
+            t.number("water temperature", &tr("enter a temperature"))
                 .map(|_| ())
         }),
         apply: apply(move |s, t| s.team.set_water_temp(temperature(u, t)?)),
@@ -39,8 +40,9 @@ pub fn default_water(s: &Session) -> Field {
             &vm::degrees(u, Temperature::from_celsius(s.settings.water_temp_c)),
             false,
         ),
-        title: "Water temperature a new team starts with (each dive sets its own on the Team page)"
-            .to_string(),
+        title: tr(
+            "Water temperature a new team starts with (each dive sets its own on the Team page)",
+        ),
         unit: u.temperature_label().to_string(),
         live: false,
         step: None,
@@ -65,15 +67,15 @@ pub fn fill(s: &Session) -> Field {
     let u = s.units();
     Field {
         buffer: KeypadBuffer::digits(&vm::degrees(u, s.fill.temperature), false),
-        title:
-            "Cylinder temperature when that pressure was read: your estimate (hand on the cylinder)"
-                .to_string(),
+        title: tr(
+            "Cylinder temperature when that pressure was read: your estimate (hand on the cylinder)",
+        ),
         unit: u.temperature_label().to_string(),
         live: false,
         step: None,
         revert: None,
         check: check(move |_, t| {
-            let v = t.number("fill temperature", "enter a temperature")?;
+            let v = t.number("fill temperature", &tr("enter a temperature"))?;
             let lo = u.temperature_value(Temperature::from_celsius(0.0)).ceil();
             let hi = u.temperature_value(Temperature::from_celsius(60.0)).floor();
             check_range("fill temperature", v, lo, hi, u.temperature_label())
@@ -88,5 +90,5 @@ pub fn fill(s: &Session) -> Field {
 
 /// The typed temperature, in the team's unit.
 fn temperature(u: UnitSystem, t: Typed) -> Result<Temperature, InputError> {
-    Ok(u.temperature(t.number("temperature", "enter a temperature")?))
+    Ok(u.temperature(t.number("temperature", &tr("enter a temperature"))?))
 }
