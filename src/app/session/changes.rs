@@ -129,7 +129,7 @@ impl Session {
     pub(super) fn apply_rule(&mut self, rule: Rule) {
         self.change_plan(
             |t| t.set_rule(rule),
-            |s| tr_with("Rule now {0}", &[&s.team.input().rule.name()]),
+            |s| tr_with("Rule now {0}", &[&s.team.input().rule.shown_name()]),
         );
     }
 }

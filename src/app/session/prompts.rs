@@ -71,8 +71,8 @@ impl Session {
                 tr_with(
                     "{0} is an open-water rule: it keeps no gas to bring a teammate out of an overhead. Every turn goes down. Keep the rule of {1}?",
                     &[
-                        &crate::plan::text::first_upper(rule.name()),
-                        &self.team.input().rule.name(),
+                        &rule.title(),
+                        &self.team.input().rule.shown_name(),
                     ],
                 ),
                 vec![

@@ -26,7 +26,7 @@ pub fn locker_rows(s: &Session) -> Vec<LockerRowVm> {
                     .to_set("locker")
                     .map(|x| x.describe())
                     .unwrap_or_else(|err| err.to_string()),
-                e.material.name()
+                e.material.shown_name()
             ),
             note: e.note.clone(),
             mine: e.mine,
@@ -101,7 +101,7 @@ pub fn locker_edit(s: &Session) -> Option<LockerEditVm> {
 pub fn preset_rows() -> Vec<(String, String)> {
     presets()
         .iter()
-        .map(|p| (p.name.to_string(), preset_detail(p)))
+        .map(|p| (p.shown_name(), preset_detail(p)))
         .collect()
 }
 
@@ -121,7 +121,7 @@ pub fn preset_detail(p: &Preset) -> String {
             working_bar,
         } => tr_with(
             "{0} · each {1}",
-            &[&p.material.name(), &each(water_l, "L", working_bar, "bar")],
+            &[&p.material.shown_name(), &each(water_l, "L", working_bar, "bar")],
         ),
         CylinderSpec::Rated {
             rated_cuft,
@@ -129,7 +129,7 @@ pub fn preset_detail(p: &Preset) -> String {
         } => tr_with(
             "{0} · each {1} ({2} L water)",
             &[
-                &p.material.name(),
+                &p.material.shown_name(),
                 &each(rated_cuft, "cu ft", rated_psi, "psi"),
                 &shown::num(
                     (p.set.spec.water_per_cylinder(ModelKind::Real).litres() * 10.0).round() / 10.0,

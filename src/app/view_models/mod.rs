@@ -165,7 +165,7 @@ pub fn rule_symbols() -> Vec<String> {
 
 /// The rules' names for screen readers, in `Rule::ALL` order: "halves", "thirds", …
 pub fn rule_names() -> Vec<String> {
-    Rule::ALL.iter().map(|r| r.name().to_string()).collect()
+    Rule::ALL.iter().map(|r| r.shown_name()).collect()
 }
 
 /// The position of `rule` in `Rule::ALL`.
@@ -181,7 +181,7 @@ pub fn rule_warning(rule: Rule) -> String {
     } else {
         tr_with(
             "{0} is an open-water rule, not for overhead dives.",
-            &[&capitalised(rule.name())],
+            &[&rule.title()],
         )
     }
 }

@@ -127,7 +127,7 @@ fn preset_picks() -> Vec<PickRowVm> {
         .iter()
         .enumerate()
         .map(|(index, p)| PickRowVm {
-            title: p.name.to_string(),
+            title: p.shown_name(),
             detail: preset_detail(p),
             mine: false,
             count: count_text(p.set.count),

@@ -275,7 +275,7 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
 pub fn rule_head(s: &Session) -> String {
     let input = s.team.input();
     let args: [&dyn std::fmt::Display; 2] = [
-        &input.rule.name(),
+        &input.rule.shown_name(),
         &temperature_text(input.units, input.water_temp),
     ];
     match input.water {
