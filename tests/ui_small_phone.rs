@@ -229,8 +229,11 @@ fn every_page_works_on_a_small_phone_with_large_text() {
         s.picker.close();
         s.go(Screen::Turns);
     });
+    state("turns-qr", false, &|s| s.open_plan_qr());
     state("buddy", false, &|s| s.go(Screen::Buddy));
+    state("buddy-qr", false, &|s| s.open_plan_qr());
     state("chart", false, &|s| {
+        s.close_plan_qr();
         s.back();
         s.go(Screen::Chart);
     });

@@ -13,6 +13,8 @@ pub const PAGE_H: f64 = 150.0;
 /// Font families, with fallbacks, so a browser and a print tool pick the same kind of face.
 pub const FONT: &str = "Roboto, 'Liberation Sans', Arial, Helvetica, sans-serif";
 const MARGIN: f64 = 5.0;
+/// The card's caution line (the plan as text carries the same words).
+pub const CAUTION: &str = "Planning aid for trained divers. Team protocol, training and site rules come first. Check by hand.";
 
 /// What goes on top of the card besides the plan.
 #[derive(Clone, Debug, Default)]
@@ -237,7 +239,7 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
         }
         y += 0.8;
     }
-    let caution = "Planning aid for trained divers. Team protocol, training and site rules come first. Check by hand.";
+    let caution = CAUTION;
     let mut cy = PAGE_H - MARGIN - 3.3 * wrap(caution, 72).len() as f64 + 2.5;
     p.line(MARGIN, cy - 3.2, right, cy - 3.2, 0.3);
     for line in wrap(caution, 72) {

@@ -3,4 +3,5 @@
 
 pub mod card_svg;
 pub mod cylinder_spec;
+pub mod plan_text;
 pub mod team_file;
