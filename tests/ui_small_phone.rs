@@ -288,8 +288,11 @@ fn walk(language: Language, light: bool) -> Vec<String> {
         s.picker.close();
         s.go(Screen::Turns);
     });
+    state("turns-qr", false, &|s| s.open_plan_qr());
     state("buddy", false, &|s| s.go(Screen::Buddy));
+    state("buddy-qr", false, &|s| s.open_plan_qr());
     state("chart", false, &|s| {
+        s.close_plan_qr();
         s.back();
         s.go(Screen::Chart);
     });

@@ -4,11 +4,13 @@
 
 pub mod adapters;
 pub mod cautions;
+pub mod clipboard;
 pub mod clock;
 pub mod keypad;
 pub mod locker_controller;
 pub mod locker_draft;
 pub mod nav;
+pub mod qr_image;
 pub mod readings;
 pub mod session;
 pub mod team_controller;

@@ -15,6 +15,9 @@ pub const FONT: &str = "Roboto, 'Liberation Sans', Arial, Helvetica, sans-serif"
 pub(super) const MARGIN: f64 = 5.0;
 
 pub use super::chart_svg::charts_svg;
+/// The card's caution line in English, as the plan as text carries it (the card itself
+/// shows it in the language on screen).
+pub const CAUTION: &str = "Planning aid for trained divers. Team protocol, training and site rules come first. Check by hand.";
 
 /// What goes on top of the card besides the plan.
 #[derive(Clone, Debug, Default)]

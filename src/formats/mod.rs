@@ -4,4 +4,5 @@
 pub mod card_svg;
 mod chart_svg;
 pub mod cylinder_spec;
+pub mod plan_text;
 pub mod team_file;

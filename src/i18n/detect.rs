@@ -40,10 +40,10 @@ pub fn from_env(get: impl Fn(&str) -> Option<String>) -> Language {
         .or_else(|| set("LANG"));
     let c_locale = matches!(locale.as_deref(), Some("C" | "POSIX") | None)
         || locale.as_deref().is_some_and(|l| l.starts_with("C."));
-    if !c_locale && let Some(list) = set("LANGUAGE") {
-        if let Some(l) = list.split(':').find_map(from_tag) {
-            return l;
-        }
+    if !c_locale
+        && let Some(l) = set("LANGUAGE").and_then(|list| list.split(':').find_map(from_tag))
+    {
+        return l;
     }
     locale
         .and_then(|l| from_tag(&l))

@@ -22,6 +22,8 @@ pub fn run() -> i32 {
         }
     };
     app.set_system_language(crate::i18n::from_env(|k| std::env::var(k).ok()));
+    // Cards go where their owner can open them (Documents, else Downloads).
+    app.session.borrow_mut().exchange.card_dir = crate::storage::data_dir::user_card_dir(&dir);
     if let Some(scale) = font_scale_from(std::env::var_os("TURNSHEET_FONT_SCALE").as_deref()) {
         app.set_font_scale(scale);
     }

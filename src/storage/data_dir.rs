@@ -57,6 +57,43 @@ pub fn pick_export_dir(downloads: Option<PathBuf>, home: Option<PathBuf>, data: 
         .unwrap_or_else(|| data.to_path_buf())
 }
 
+/// Where cards go unless the platform start says otherwise: `<data dir>/cards`.
+pub fn data_card_dir(data_dir: &Path) -> PathBuf {
+    data_dir.join("cards")
+}
+
+/// Where the app's team cards go so that their owner can open them. Desktop: the
+/// user's Documents folder if it exists, else Downloads, else `<data dir>/cards`.
+/// Android: `<data dir>/cards` (app storage) for now; the shared Downloads collection
+/// needs the platform's media store (DEVELOPERS.md, "Android").
+pub fn user_card_dir(data_dir: &Path) -> PathBuf {
+    if cfg!(target_os = "android") {
+        return data_card_dir(data_dir);
+    }
+    let user = directories::UserDirs::new();
+    pick_card_dir(
+        user.as_ref()
+            .and_then(|u| u.document_dir().map(Path::to_path_buf)),
+        user.as_ref()
+            .and_then(|u| u.download_dir().map(Path::to_path_buf)),
+        data_dir,
+    )
+}
+
+/// The first of Documents and Downloads that is an existing folder, else
+/// `<data dir>/cards`.
+pub fn pick_card_dir(
+    documents: Option<PathBuf>,
+    downloads: Option<PathBuf>,
+    data: &Path,
+) -> PathBuf {
+    [documents, downloads]
+        .into_iter()
+        .flatten()
+        .find(|p| p.is_dir())
+        .unwrap_or_else(|| data_card_dir(data))
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
@@ -88,5 +125,20 @@ mod tests {
         );
         assert_eq!(pick_export_dir(None, None, &data), data);
         assert_eq!(import_dir(&data), data.join("import"));
+    }
+
+    #[test]
+    fn cards_go_to_documents_else_downloads_else_the_data_dir() {
+        let t = tempfile::tempdir().unwrap();
+        let data = t.path().join("data");
+        let documents = t.path().join("Documents");
+        let downloads = t.path().join("Downloads");
+        let pick = || pick_card_dir(Some(documents.clone()), Some(downloads.clone()), &data);
+        assert_eq!(pick(), data.join("cards"), "neither folder exists");
+        std::fs::create_dir(&downloads).unwrap();
+        assert_eq!(pick(), downloads);
+        std::fs::create_dir(&documents).unwrap();
+        assert_eq!(pick(), documents);
+        assert_eq!(pick_card_dir(None, None, &data), data_card_dir(&data));
     }
 }

@@ -11,6 +11,7 @@ mod nav_adapter;
 mod picker_adapter;
 mod prompt_adapter;
 mod settings_adapter;
+mod share_adapter;
 mod team_adapter;
 mod turns_adapter;
 
@@ -60,6 +61,7 @@ pub fn connect_all(ui: &AppWindow, s: &Shared) {
     gauge_chooser_adapter::connect(ui, s);
     chart_adapter::connect(ui, s);
     turns_adapter::connect(ui, s);
+    share_adapter::connect(ui, s);
     prompt_adapter::connect(ui, s);
 }
 
@@ -68,6 +70,7 @@ pub fn refresh_all(ui: &AppWindow, s: &Session) {
     nav_adapter::refresh(ui, s);
     team_adapter::refresh(ui, s);
     turns_adapter::refresh(ui, s);
+    share_adapter::refresh(ui, s);
     picker_adapter::refresh(ui, s);
     keypad_adapter::refresh(ui, s);
     locker_adapter::refresh(ui, s);

@@ -1,5 +1,6 @@
 //! The printable team card from the app: the same SVG as `turnsheet card --charts`,
-//! written into the data directory's `cards/` folder.
+//! written into `Exchange::card_dir`: the user's Documents (else Downloads) on the
+//! desktop, `cards/` in the data directory otherwise.
 
 use std::path::PathBuf;
 
@@ -57,10 +58,10 @@ impl Session {
             read_at: (0..input.divers.len()).map(|i| self.read_text(i)).collect(),
         };
         let svg = card_svg(&heading, input, self.team.plan(), &charts);
-        let path = self
-            .data_dir()
-            .join("cards")
-            .join(format!("card-{}.svg", stamp.format("%Y-%m-%d-%H%M%S")));
+        let path = self.exchange.card_dir.join(format!(
+            "turnsheet-card-{}.svg",
+            stamp.format("%Y-%m-%d-%H%M%S")
+        ));
         match crate::storage::atomic::write_text(&path, &svg) {
             Ok(()) => {
                 self.status.push(tr_with(

@@ -15,6 +15,9 @@ use super::{SavedFile, Session};
 pub struct Exchange {
     pub export_dir: PathBuf,
     pub import_dir: PathBuf,
+    /// Where the Turns page saves team cards: `<data dir>/cards` unless the platform
+    /// start sets the user's folder (`storage::data_dir::user_card_dir`).
+    pub card_dir: PathBuf,
     /// What the last export or import did; empty once dismissed.
     pub message: String,
 }
@@ -24,6 +27,7 @@ impl Exchange {
         Exchange {
             export_dir: data_dir::export_dir(dir),
             import_dir: data_dir::import_dir(dir),
+            card_dir: data_dir::data_card_dir(dir),
             message: String::new(),
         }
     }

@@ -38,6 +38,7 @@ mod mix_picker;
 mod pickers;
 mod prompts;
 mod saving;
+mod share;
 mod team_actions;
 mod tools;
 mod undo;
@@ -72,6 +73,8 @@ pub struct Session {
     pub picker: Picker,
     /// The diver whose gauge chooser is open.
     pub gauge_chooser: Option<usize>,
+    /// The plan's QR code was opened (`share.rs`; shown only while turns are).
+    plan_qr: bool,
     /// The mixes each diver chose since the app started (the mix picker offers them).
     pub mix_history: MixHistory,
     pub fill: FillCheck,
@@ -150,6 +153,7 @@ impl Session {
             entry: None,
             picker: Picker::None,
             gauge_chooser: None,
+            plan_qr: false,
             mix_history: MixHistory::default(),
             status: Status::new(messages),
             undo: None,
@@ -233,6 +237,7 @@ impl Session {
     // ---- navigation and status ---------------------------------------------------
 
     pub fn go(&mut self, s: Screen) {
+        self.plan_qr = false;
         self.nav.go(s);
     }
 
@@ -255,6 +260,11 @@ impl Session {
             self.gauge_chooser = None;
             return true;
         }
+        if self.plan_qr_open() {
+            self.plan_qr = false;
+            return true;
+        }
+        self.plan_qr = false;
         if self.nav.current() == Screen::LockerEdit {
             return self.leave_locker_edit();
         }

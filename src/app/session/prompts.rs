@@ -70,10 +70,7 @@ impl Session {
             Prompt::LooseRule(rule) => Some((
                 tr_with(
                     "{0} is an open-water rule: it keeps no gas to bring a teammate out of an overhead. Every turn goes down. Keep the rule of {1}?",
-                    &[
-                        &rule.title(),
-                        &self.team.input().rule.shown_name(),
-                    ],
+                    &[&rule.title(), &self.team.input().rule.shown_name()],
                 ),
                 vec![
                     (tr("Keep the rule"), tr("keep the rule"), true),

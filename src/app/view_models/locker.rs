@@ -121,7 +121,10 @@ pub fn preset_detail(p: &Preset) -> String {
             working_bar,
         } => tr_with(
             "{0} · each {1}",
-            &[&p.material.shown_name(), &each(water_l, "L", working_bar, "bar")],
+            &[
+                &p.material.shown_name(),
+                &each(water_l, "L", working_bar, "bar"),
+            ],
         ),
         CylinderSpec::Rated {
             rated_cuft,
