@@ -281,8 +281,10 @@ mod tests {
         let direct: Settings = serde_json::from_value(old).unwrap();
         assert_eq!(direct.theme, ThemeChoice::System);
 
-        let mut light = Settings::default();
-        light.theme = ThemeChoice::Light;
+        let light = Settings {
+            theme: ThemeChoice::Light,
+            ..Settings::default()
+        };
         let text = serde_json::to_string(&light).unwrap();
         assert!(text.contains("\"theme\":\"light\""), "{text}");
         let back: serde_json::Value = serde_json::from_str(&text).unwrap();

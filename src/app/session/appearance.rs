@@ -7,11 +7,11 @@ impl Session {
     /// Choose the screen's colours by their place in `ThemeChoice::ALL`; kept with the
     /// settings at once. An index out of range changes nothing.
     pub fn set_theme(&mut self, idx: usize) {
-        if let Some(choice) = ThemeChoice::ALL.get(idx).copied() {
-            if self.settings.theme != choice {
-                self.settings.theme = choice;
-                self.save_settings();
-            }
+        if let Some(choice) = ThemeChoice::ALL.get(idx).copied()
+            && self.settings.theme != choice
+        {
+            self.settings.theme = choice;
+            self.save_settings();
         }
     }
 }
