@@ -205,13 +205,7 @@ fn every_page_works_on_a_small_phone_with_large_text_light() {
 }
 
 /// German and French words are the longest; every language gets the same walk.
-///
-/// Ignored for now: with the app's own sentences translated, four languages still put the
-/// keypad's Cancel and Done below a 640 px window on one keypad state, and the buddy
-/// view's info line over the next name (26 problems, listed when run with `--ignored`).
-/// The first-round words (every `@tr` in the views) passed it in all six languages.
 #[test]
-#[ignore = "26 layout problems from the translated sentences: keypad and buddy view"]
 fn every_language_works_on_a_small_phone_with_large_text() {
     software_backend();
     let mut found = Vec::new();

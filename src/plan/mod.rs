@@ -74,7 +74,7 @@ pub use units::{
 // Rounding to the gauge graduation: turns up, starts down, nudges to the next mark.
 pub use rounding::{next_step, round_down_to_step, round_up_to_step};
 // Gases and cylinders, and the generic presets.
-pub use catalogue::{Material, Preset, current_preset_name, presets};
+pub use catalogue::{Material, Preset, current_preset_name, presets, shown_label};
 pub use cylinders::{CylinderSet, CylinderSpec, rating_temperature};
 pub use mix::{Composition, Mix};
 // The two gas models: tank factors (pencil arithmetic) and real gas (GERG-2008).

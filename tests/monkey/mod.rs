@@ -161,11 +161,15 @@ impl Robot {
             .collect()
     }
 
-    /// Controls a finger could reach: enabled buttons with their centre in the window.
+    /// Controls a finger could reach: enabled buttons with their centre in the window. The
+    /// language choice is left out: the checks read the English accessible labels, so the
+    /// robot stays in English (tests/ui_languages.rs and the small-phone test cover the
+    /// other languages).
     pub fn buttons<'a>(&self, seen: &'a [Seen]) -> Vec<&'a Seen> {
         let (w, h) = self.size;
         seen.iter()
             .filter(|e| e.button && e.enabled && e.w > 0.0)
+            .filter(|e| !e.label.starts_with("language "))
             .filter(|e| {
                 (0.0..w).contains(&(e.x + e.w / 2.0)) && (0.0..h).contains(&(e.y + e.h / 2.0))
             })
@@ -301,21 +305,41 @@ fn panic_text(p: &Box<dyn std::any::Any + Send>) -> String {
         .unwrap_or_default()
 }
 
-/// Drop actions one at a time while the run still fails (at most `budget` replays).
-fn shrink(config: Config, mut actions: Vec<Action>, budget: usize) -> Vec<Action> {
-    let mut tries = 0;
-    let mut i = 0;
-    while i < actions.len() && tries < budget {
-        let mut shorter = actions.clone();
-        shorter.remove(i);
-        tries += 1;
-        if replay(config, &shorter).is_some() {
-            actions = shorter;
-        } else {
-            i += 1;
+/// Shorten a failing list of actions: drop chunks (halves, then quarters, … then single
+/// actions) while the run still fails, within `budget` of time, so a failure always ends
+/// the test in bounded time, with the shortest list found so far.
+fn shrink(config: Config, mut actions: Vec<Action>, budget: Duration) -> Vec<Action> {
+    let t0 = Instant::now();
+    let mut chunk = actions.len().div_ceil(2).max(1);
+    loop {
+        let mut i = 0;
+        while i < actions.len() {
+            if t0.elapsed() > budget {
+                return actions;
+            }
+            let mut shorter = actions.clone();
+            shorter.drain(i..(i + chunk).min(actions.len()));
+            if replay(config, &shorter).is_some() {
+                actions = shorter;
+            } else {
+                i += chunk;
+            }
         }
+        if chunk == 1 {
+            return actions;
+        }
+        chunk = chunk.div_ceil(2);
     }
-    actions
+}
+
+/// Seconds the shrinking of a failing run may take (`TURNSHEET_MONKEY_SHRINK_SECS`).
+fn shrink_budget() -> Duration {
+    Duration::from_secs(
+        std::env::var("TURNSHEET_MONKEY_SHRINK_SECS")
+            .ok()
+            .and_then(|s| s.parse().ok())
+            .unwrap_or(120),
+    )
 }
 
 /// Run `total` actions spread over `configs`, each from its own seed.
@@ -360,12 +384,12 @@ pub fn run_all(configs: &[Config], seed: u64, total: usize) -> Report {
             };
             if let Some(v) = violation {
                 report.violations += 1;
-                let short = shrink(config, done.clone(), 400);
                 println!(
-                    "VIOLATION with seed {seed:#x} on {config:?} after {} actions: {v}\nshortest list ({} actions): {short:#?}",
-                    done.len(),
-                    short.len()
+                    "VIOLATION with seed {seed:#x} on {config:?} after {} actions: {v}",
+                    done.len()
                 );
+                let short = shrink(config, done.clone(), shrink_budget());
+                println!("shortest list found ({} actions): {short:#?}", short.len());
                 break;
             }
         }

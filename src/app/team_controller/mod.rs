@@ -112,6 +112,17 @@ impl TeamController {
     pub fn stage_labels(&self) -> &[String] {
         &self.stage_labels
     }
+    /// Diver `i`'s set as people read it in this language (see [`crate::plan::shown_label`]).
+    pub fn shown_label(&self, i: usize) -> String {
+        crate::plan::shown_label(&self.labels[i], &self.input.divers[i].cylinders)
+    }
+    /// Diver `i`'s stage as people read it in this language; empty without a stage.
+    pub fn shown_stage_label(&self, i: usize) -> String {
+        match &self.input.divers[i].stage {
+            Some(st) => crate::plan::shown_label(&self.stage_labels[i], &st.cylinders),
+            None => String::new(),
+        }
+    }
 
     pub fn set_stage_start(&mut self, i: usize, p: Pressure) -> Result<(), InputError> {
         self.try_update(|t| {

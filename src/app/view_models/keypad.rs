@@ -29,7 +29,7 @@ pub fn keypad(s: &Session) -> Option<KeypadVm> {
     let e = s.entry.as_ref()?;
     Some(KeypadVm {
         letters: e.buffer().is_letters(),
-        title: e.title().to_string(),
+        title: e.shown_title().to_string(),
         display: e.buffer().text().to_string(),
         unit: e.unit().to_string(),
         reason: e.reason().to_string(),

@@ -103,7 +103,7 @@ pub fn diver_cards(s: &Session) -> Vec<DiverCardVm> {
             let read = reading(g, d.start);
             DiverCardVm {
                 name: d.name.clone(),
-                cylinders: s.team.labels()[i].clone(),
+                cylinders: s.team.shown_label(i),
                 mix: d.mix.label(),
                 start: if status == StartStatus::Missing {
                     "—".to_string()
@@ -138,7 +138,7 @@ pub fn diver_cards(s: &Session) -> Vec<DiverCardVm> {
                     .join(" "),
                 has_stage: d.stage.is_some(),
                 stage: match &d.stage {
-                    Some(_) => tr_with("Stage: {0}", &[&s.team.stage_labels()[i]]),
+                    Some(_) => tr_with("Stage: {0}", &[&s.team.shown_stage_label(i)]),
                     None => tr("+ Stage (dropped on the way in)"),
                 },
                 stage_mix: d

@@ -38,7 +38,7 @@ pub fn stage_text(s: &Session, i: usize) -> String {
             let args: [&dyn std::fmt::Display; 6] = [
                 &turn_text(st.drop_shown_value),
                 &g.label(),
-                &s.team.stage_labels()[i],
+                &s.team.shown_stage_label(i),
                 &si.mix.label(),
                 &reading(g, st.start),
                 &st.set_by.describe(),
@@ -228,7 +228,7 @@ pub fn turn_rows(s: &Session) -> Vec<TurnRowVm> {
                 detail: tr_with(
                     "{0} · {1} · gauge {2}",
                     &[
-                        &s.team.labels()[i],
+                        &s.team.shown_label(i),
                         &input.divers[i].mix.label(),
                         &gauge_text(g),
                     ],

@@ -54,6 +54,11 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             // A start nobody read opens empty: the number must come from the gauge.
             let unread =
                 s.team.start_status(i, s.now()) == crate::app::readings::StartStatus::Missing;
+            let label = s.team.shown_label(i);
+            // Two or more cylinders not on a manifold each have a gauge.
+            let separate = d.cylinders.independent || d.cylinders.count > 2;
+            let title_args: [&dyn std::fmt::Display; 2] = [&d.name, &label];
+            let brief = tr_with("Start for {0} ({1}), read in the water", &title_args);
             Field {
                 buffer: KeypadBuffer::digits(
                     &if unread {
@@ -63,20 +68,15 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                     },
                     false,
                 ),
-                title: {
-                    let label = &s.team.labels()[i];
-                    // Two or more cylinders not on a manifold each have a gauge.
-                    let separate = d.cylinders.count > 1 && !label.starts_with("Twin");
-                    let args: [&dyn std::fmt::Display; 2] = [&d.name, label];
-                    if separate {
-                        tr_with(
-                            "Start for {0} ({1}), read in the water. Balance the cylinders; enter what each gauge reads",
-                            &args,
-                        )
-                    } else {
-                        tr_with("Start for {0} ({1}), read in the water", &args)
-                    }
+                title: if separate {
+                    tr_with(
+                        "Start for {0} ({1}), read in the water. Balance the cylinders; enter what each gauge reads",
+                        &title_args,
+                    )
+                } else {
+                    brief.clone()
                 },
+                brief: separate.then_some(brief),
                 unit: g.label().to_string(),
                 live: true,
                 step: Some(g.step),
@@ -114,8 +114,9 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                 ),
                 title: tr_with(
                     "Stage pressure for {0} ({1}), read in the water",
-                    &[&d.name, &s.team.stage_labels()[i]],
+                    &[&d.name, &s.team.shown_stage_label(i)],
                 ),
+                brief: None,
                 unit: g.label().to_string(),
                 live: true,
                 step: None,
@@ -154,6 +155,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                     "Surface breathing rate (SAC) for {0}; leave empty for none",
                     &[&d.name],
                 ),
+                brief: None,
                 unit: format!("{}/min", u.volume_label()),
                 live: true,
                 step: None,
@@ -172,6 +174,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                 false,
             ),
             title: tr("Planned depth for time to turn; leave empty for none"),
+            brief: None,
             unit: u.depth_label().to_string(),
             live: true,
             step: None,
@@ -185,6 +188,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
         EntryTarget::DiverName(i) => Field {
             buffer: KeypadBuffer::letters(&input.divers.get(i)?.name, 32),
             title: tr_with("Name for diver {0}", &[&(i + 1)]),
+            brief: None,
             unit: String::new(),
             live: true,
             step: None,
@@ -217,6 +221,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
         EntryTarget::LockerName => Field {
             buffer: KeypadBuffer::letters(&draft?.name, crate::storage::locker::MAX_SET_NAME_CHARS),
             title: tr("Name of the cylinder set"),
+            brief: None,
             unit: String::new(),
             live: false,
             step: None,
@@ -237,6 +242,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
         EntryTarget::LockerNote => Field {
             buffer: KeypadBuffer::letters(&draft?.note, crate::storage::locker::MAX_SET_NOTE_CHARS),
             title: tr("Note (serial, test date, valves…)"),
+            brief: None,
             unit: String::new(),
             live: false,
             step: None,
@@ -257,6 +263,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
         EntryTarget::FillPressure => Field {
             buffer: KeypadBuffer::digits(&vm::start_text(u, s.fill.pressure), false),
             title: tr("Pressure read at the fill station, cylinder still warm"),
+            brief: None,
             unit: u.pressure_label().to_string(),
             live: false,
             step: None,

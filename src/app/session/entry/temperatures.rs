@@ -19,6 +19,7 @@ pub fn dive_water(s: &Session) -> Field {
         title: tr(
             "Water temperature of this dive: the gas cools to it, and every diver's plan uses it",
         ),
+        brief: None,
         unit: u.temperature_label().to_string(),
         live: true,
         step: None,
@@ -43,6 +44,7 @@ pub fn default_water(s: &Session) -> Field {
         title: tr(
             "Water temperature a new team starts with (each dive sets its own on the Team page)",
         ),
+        brief: None,
         unit: u.temperature_label().to_string(),
         live: false,
         step: None,
@@ -70,6 +72,7 @@ pub fn fill(s: &Session) -> Field {
         title: tr(
             "Cylinder temperature when that pressure was read: your estimate (hand on the cylinder)",
         ),
+        brief: None,
         unit: u.temperature_label().to_string(),
         live: false,
         step: None,
