@@ -48,6 +48,7 @@ mod cylinders;
 /// Input errors that name the field.
 pub mod error;
 mod gas_model;
+mod gauge;
 mod hand_check;
 mod matching;
 mod mix;
@@ -60,6 +61,7 @@ mod rule;
 pub mod shown;
 mod supply;
 mod team;
+mod team_checks;
 mod temperature;
 /// The check of names and notes, and small text helpers.
 pub mod text;

@@ -19,7 +19,11 @@ impl Session {
     pub fn save_card(&mut self) -> Option<PathBuf> {
         let now = self.now;
         if !self.team.turns_ready(now) {
-            let why = super::super::view_models::starts_blocking(self).unwrap_or_default();
+            let why = self
+                .team
+                .turns_gate(self.now())
+                .sentence()
+                .unwrap_or_default();
             self.status.push(tr_with("No card yet. {0}", &[&why]));
             return None;
         }

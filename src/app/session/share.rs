@@ -1,11 +1,10 @@
 //! The plan for every diver's phone: as plain text (`formats::plan_text`), shown as a
 //! QR code over the Turns page or the buddy view, or copied to the clipboard. Only while
-//! the Turns page shows turns: the same rule (`view_models::starts_blocking`).
+//! the Turns page shows turns: the same answer (`TeamController::turns_gate`).
 
 use chrono::TimeZone;
 
 use crate::app::clipboard::TextClipboard;
-use crate::app::view_models::starts_blocking;
 use crate::formats::plan_text::{PlanReads, plan_text};
 
 use super::Session;
@@ -14,7 +13,7 @@ impl Session {
     /// The plan as text, or None while a start is not read for this dive (then the
     /// Turns page shows no turns either).
     pub fn plan_text(&self) -> Option<String> {
-        if starts_blocking(self).is_some() {
+        if !self.team.turns_gate(self.now()).open() {
             return None;
         }
         let input = self.team.input();
@@ -39,7 +38,7 @@ impl Session {
 
     /// Open the QR code of the plan; while turns are not shown, say why instead.
     pub fn open_plan_qr(&mut self) {
-        match starts_blocking(self) {
+        match self.team.turns_gate(self.now()).sentence() {
             None => self.plan_qr = true,
             Some(why) => {
                 self.plan_qr = false;
@@ -56,13 +55,17 @@ impl Session {
     /// Whether the QR code is on screen: opened, and the turns still shown (a start
     /// that ages out takes it away with the turns).
     pub fn plan_qr_open(&self) -> bool {
-        self.plan_qr && starts_blocking(self).is_none()
+        self.plan_qr && self.team.turns_gate(self.now()).open()
     }
 
     /// "Copy plan as text": the plan onto `clipboard`; the status says what happened.
     pub fn copy_plan_text(&mut self, clipboard: &mut dyn TextClipboard) {
         let Some(text) = self.plan_text() else {
-            let why = starts_blocking(self).unwrap_or_default();
+            let why = self
+                .team
+                .turns_gate(self.now())
+                .sentence()
+                .unwrap_or_default();
             self.status.push(format!("No plan to copy yet. {why}"));
             return;
         };

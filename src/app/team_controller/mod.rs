@@ -12,6 +12,8 @@ use crate::storage::team_state::{TEAM_SCHEMA, TeamState};
 
 use super::readings::Readings;
 
+pub use gate::{Held, Holder, TurnsGate};
+
 /// The gauge steps offered, per unit system.
 pub fn step_options(units: UnitSystem) -> [f64; 2] {
     match units {
@@ -251,6 +253,7 @@ impl TeamController {
     }
 }
 
+mod gate;
 mod gauges;
 mod roster;
 

@@ -169,7 +169,7 @@ pub fn start_note(status: StartStatus, now: i64) -> String {
 
 pub fn team_summary(s: &Session) -> String {
     let plan = s.team.plan();
-    if let Some(wait) = super::turns::starts_blocking_short(s) {
+    if let Some(wait) = s.team.turns_gate(s.now()).short() {
         return wait;
     }
     let turns: Vec<String> = plan

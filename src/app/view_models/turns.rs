@@ -101,66 +101,10 @@ impl TurnRowVm {
     }
 }
 
-/// Why there are no turns yet, naming each diver whose start is not a reading taken
-/// today; None when every start is.
+/// Why there are no turns yet, naming each diver whose start is not a reading of this
+/// dive; None when every start is (the controller's answer, worded).
 pub fn starts_blocking(s: &Session) -> Option<String> {
-    let now = s.now();
-    let input = s.team.input();
-    let why: Vec<String> = s
-        .team
-        .readings()
-        .blocking(now)
-        .into_iter()
-        .filter(|&i| i < input.divers.len())
-        .map(|i| {
-            let name = &input.divers[i].name;
-            match s.team.start_status(i, now) {
-                StartStatus::Old { at } => tr_with(
-                    "{0} (start entered {1}: check)",
-                    &[name, &when_text(at, now)],
-                ),
-                _ => tr_with("{0} (start not read)", &[name]),
-            }
-        })
-        .collect();
-    if why.is_empty() {
-        None
-    } else {
-        Some(tr_with(
-            "No turn pressures until every start is read in the water today: {0}.",
-            &[&why.join(", ")],
-        ))
-    }
-}
-
-/// The same in a few words, for the Team page's one-line summary: "No turns yet. Read
-/// in the water: Ines, Bram. Check the gauge: Sol."
-pub fn starts_blocking_short(s: &Session) -> Option<String> {
-    let now = s.now();
-    let input = s.team.input();
-    let (mut read, mut check) = (Vec::new(), Vec::new());
-    for i in s.team.readings().blocking(now) {
-        let Some(d) = input.divers.get(i) else {
-            continue;
-        };
-        match s.team.start_status(i, now) {
-            StartStatus::Old { .. } => check.push(d.name.as_str()),
-            _ => read.push(d.name.as_str()),
-        }
-    }
-    if read.is_empty() && check.is_empty() {
-        return None;
-    }
-    let mut text = tr("No turns yet.");
-    if !read.is_empty() {
-        text += " ";
-        text += &tr_with("Read in the water: {0}.", &[&read.join(", ")]);
-    }
-    if !check.is_empty() {
-        text += " ";
-        text += &tr_with("Check the gauge: {0}.", &[&check.join(", ")]);
-    }
-    Some(text)
+    s.team.turns_gate(s.now()).sentence()
 }
 
 /// The divers whose gas sets an allowance that a shown turn uses.
