@@ -15,9 +15,10 @@ use crate::storage::exchange::sets_word;
 use crate::storage::locker::{
     LockerEntry, LockerFile, MAX_LOCKER_SETS, check_set_name, check_set_note,
 };
-use crate::storage::store::{LOCKER_FILE, LockerError};
+use crate::storage::store::LOCKER_FILE;
 
 use super::CliError;
+use super::locker_files::{describe, locker_error};
 
 #[derive(clap::Subcommand, Debug)]
 pub enum LockerAction {
@@ -151,14 +152,6 @@ pub fn run(
     }
 }
 
-/// A locker change refused or not written, as the command's error.
-pub(super) fn locker_error(e: LockerError) -> CliError {
-    match e {
-        LockerError::Input(e) => CliError::Input(e),
-        LockerError::Write(e) => CliError::Write(e),
-    }
-}
-
 /// What `locker add` was asked to add.
 struct NewSet<'a> {
     name: &'a str,
@@ -166,13 +159,6 @@ struct NewSet<'a> {
     material: Material,
     note: &'a str,
     mine: bool,
-}
-
-pub(super) fn describe(e: &LockerEntry, i: usize) -> (Option<String>, Option<String>) {
-    match e.set(&format!("entries[{i}]")) {
-        Ok(set) => (Some(format_cylinder_spec(&set)), None),
-        Err(err) => (None, Some(err.to_string())),
-    }
 }
 
 fn list(locker: &LockerFile, path: &Path, json: bool) -> String {

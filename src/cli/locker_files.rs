@@ -2,13 +2,14 @@
 
 use std::path::Path;
 
+use crate::formats::cylinder_spec::format_cylinder_spec;
 use crate::plan::error::InputError;
 use crate::storage::Store;
 use crate::storage::exchange::{export_locker, sets_word};
-use crate::storage::locker::{LockerFile, read_locker_file};
+use crate::storage::locker::{LockerEntry, LockerFile, read_locker_file};
+use crate::storage::store::LockerError;
 
 use super::CliError;
-use super::locker_cmd::{describe, locker_error};
 
 /// Write the locker to `file` (whole or not at all); an existing file only with `force`.
 pub fn export(locker: &LockerFile, file: &Path, force: bool) -> Result<String, CliError> {
@@ -75,4 +76,20 @@ pub fn import(
         s.push_str("Nothing new: the locker file was not changed.\n");
     }
     Ok(s)
+}
+
+/// A locker change refused or not written, as the command's error.
+pub(super) fn locker_error(e: LockerError) -> CliError {
+    match e {
+        LockerError::Input(e) => CliError::Input(e),
+        LockerError::Write(e) => CliError::Write(e),
+    }
+}
+
+/// A set of the locker as the command prints it: its size, or why it cannot be used.
+pub(super) fn describe(e: &LockerEntry, i: usize) -> (Option<String>, Option<String>) {
+    match e.set(&format!("entries[{i}]")) {
+        Ok(set) => (Some(format_cylinder_spec(&set)), None),
+        Err(err) => (None, Some(err.to_string())),
+    }
 }

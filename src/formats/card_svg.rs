@@ -6,13 +6,8 @@ use crate::i18n::{tr, tr_with};
 use crate::plan::shown;
 use crate::plan::{PairChart, TeamInput, TeamPlan};
 
-/// Page size in millimetres.
-pub const PAGE_W: f64 = 100.0;
-/// Page height in millimetres.
-pub const PAGE_H: f64 = 150.0;
-/// Font families, with fallbacks, so a browser and a print tool pick the same kind of face.
-pub const FONT: &str = "Roboto, 'Liberation Sans', Arial, Helvetica, sans-serif";
-pub(super) const MARGIN: f64 = 5.0;
+pub use super::svg_page::{FONT, PAGE_H, PAGE_W, wrap, xml_escape};
+use super::svg_page::{MARGIN, Page, svg_of};
 
 pub use super::chart_svg::charts_svg;
 /// The card's caution line in English, as the plan as text carries it (the card itself
@@ -29,77 +24,6 @@ pub struct CardHeading {
     /// When each diver's start was read ("read 09:42"), in team order; empty when not
     /// known (the command line plans from a file).
     pub read_at: Vec<String>,
-}
-
-/// Escape text for XML.
-pub fn xml_escape(s: &str) -> String {
-    let mut out = String::with_capacity(s.len());
-    for c in s.chars() {
-        match c {
-            '&' => out.push_str("&amp;"),
-            '<' => out.push_str("&lt;"),
-            '>' => out.push_str("&gt;"),
-            '"' => out.push_str("&quot;"),
-            '\'' => out.push_str("&apos;"),
-            c if (c as u32) < 0x20 && c != '\n' && c != '\t' => {}
-            c => out.push(c),
-        }
-    }
-    out
-}
-
-/// Split text into lines of at most `width` characters at spaces.
-pub fn wrap(text: &str, width: usize) -> Vec<String> {
-    let mut lines = Vec::new();
-    let mut line = String::new();
-    for word in text.split_whitespace() {
-        if !line.is_empty() && line.chars().count() + 1 + word.chars().count() > width {
-            lines.push(std::mem::take(&mut line));
-        }
-        if !line.is_empty() {
-            line.push(' ');
-        }
-        line.push_str(word);
-    }
-    if !line.is_empty() {
-        lines.push(line);
-    }
-    lines
-}
-
-pub(super) struct Page {
-    pub(super) body: String,
-}
-
-impl Page {
-    pub(super) fn new() -> Self {
-        Page {
-            body: String::new(),
-        }
-    }
-    /// Text at (x, y) mm, size in mm; `anchor` start/middle/end.
-    pub(super) fn text(&mut self, x: f64, y: f64, size: f64, bold: bool, anchor: &str, s: &str) {
-        self.body.push_str(&format!(
-            "<text x=\"{x:.2}\" y=\"{y:.2}\" font-size=\"{size:.2}\"{}{} >{}</text>\n",
-            if bold { " font-weight=\"bold\"" } else { "" },
-            if anchor == "start" {
-                String::new()
-            } else {
-                format!(" text-anchor=\"{anchor}\"")
-            },
-            xml_escape(s)
-        ));
-    }
-    pub(super) fn line(&mut self, x1: f64, y1: f64, x2: f64, y2: f64, width: f64) {
-        self.body.push_str(&format!(
-            "<line x1=\"{x1:.2}\" y1=\"{y1:.2}\" x2=\"{x2:.2}\" y2=\"{y2:.2}\" stroke=\"#000\" stroke-width=\"{width:.2}\"/>\n"
-        ));
-    }
-    pub(super) fn rect(&mut self, x: f64, y: f64, w: f64, h: f64, width: f64) {
-        self.body.push_str(&format!(
-            "<rect x=\"{x:.2}\" y=\"{y:.2}\" width=\"{w:.2}\" height=\"{h:.2}\" fill=\"none\" stroke=\"#000\" stroke-width=\"{width:.2}\"/>\n"
-        ));
-    }
 }
 
 /// The card page for a planned team.
@@ -268,39 +192,4 @@ pub fn card_svg(
         &pages,
         &tr_with("Team card: {0}", &[&plan.names().join(", ")]),
     )
-}
-
-/// Pages stacked top to bottom, each 100 × 150 mm, separated by a cut line.
-pub(super) fn svg_of(pages: &[Page], title: &str) -> String {
-    let total_h = PAGE_H * pages.len().max(1) as f64;
-    let mut s = format!(
-        "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n\
-         <svg xmlns=\"http://www.w3.org/2000/svg\" width=\"{PAGE_W}mm\" height=\"{total_h}mm\" viewBox=\"0 0 {PAGE_W} {total_h}\" font-family=\"{FONT}\" fill=\"#000\">\n\
-         <title>{}</title>\n<rect x=\"0\" y=\"0\" width=\"{PAGE_W}\" height=\"{total_h}\" fill=\"#fff\"/>\n",
-        xml_escape(title)
-    );
-    for (k, page) in pages.iter().enumerate() {
-        let dy = PAGE_H * k as f64;
-        if k > 0 {
-            s.push_str(&format!(
-                "<line x1=\"0\" y1=\"{dy}\" x2=\"{PAGE_W}\" y2=\"{dy}\" stroke=\"#000\" stroke-width=\"0.2\" stroke-dasharray=\"2 2\"/>\n"
-            ));
-        }
-        s.push_str(&format!("<g transform=\"translate(0 {dy})\">\n"));
-        s.push_str(&page.body);
-        s.push_str("</g>\n");
-    }
-    s.push_str("</svg>\n");
-    s
-}
-
-#[cfg(test)]
-mod tests {
-    use super::*;
-
-    #[test]
-    fn wraps_at_spaces_and_escapes() {
-        assert_eq!(wrap("aa bb cc dd", 5), vec!["aa bb", "cc dd"]);
-        assert_eq!(xml_escape("A<B & 'C'"), "A&lt;B &amp; &apos;C&apos;");
-    }
 }

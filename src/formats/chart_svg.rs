@@ -1,7 +1,7 @@
 //! Pairing chart pages for the card: rows my start, columns a teammate's, cells my turn.
 //! No I/O here: the caller writes the text.
 
-use super::card_svg::{MARGIN, PAGE_H, PAGE_W, Page, svg_of, wrap};
+use super::svg_page::{MARGIN, PAGE_H, PAGE_W, Page, svg_of, wrap};
 use crate::i18n::{tr, tr_with};
 use crate::plan::{PairChart, TeamInput, shown};
 

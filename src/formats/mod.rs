@@ -5,4 +5,5 @@ pub mod card_svg;
 mod chart_svg;
 pub mod cylinder_spec;
 pub mod plan_text;
+mod svg_page;
 pub mod team_file;

@@ -8,7 +8,7 @@
 //! shown in English.
 //!
 //! The language is a setting of the thread that writes the text, like the decimal
-//! separator it brings (`plan::shown`): the app's interface thread, or a command
+//! separator it brings ([`decimal`]): the app's interface thread, or a command
 //! writing a card in a language. Placeholders are `{0}`, `{1}`, … in the order of the
 //! arguments, the same in every language.
 
@@ -17,7 +17,9 @@ mod detect;
 
 use std::cell::Cell;
 
-use crate::plan::shown::{self, Decimal};
+pub mod decimal;
+
+use decimal::Decimal;
 
 pub use detect::{from_env, from_tag};
 
@@ -110,7 +112,7 @@ pub fn language() -> Language {
 /// Writes in `l` from now on, with its decimal separator.
 pub fn set_language(l: Language) {
     CURRENT.with(|c| c.set(l));
-    shown::set_decimal(l.decimal());
+    decimal::set_decimal(l.decimal());
 }
 
 /// A language for as long as the scope lives (a card in a language); the one before
@@ -200,9 +202,9 @@ mod tests {
             assert_eq!(Language::from_code(l.code()), Some(l));
         }
         let _de = LanguageScope::new(Language::German);
-        assert_eq!(shown::num(157.5), "157,5");
+        assert_eq!(decimal::decimal(), Decimal::Comma);
         drop(_de);
-        assert_eq!(shown::num(157.5), "157.5");
+        assert_eq!(decimal::decimal(), Decimal::Point);
     }
 
     #[test]

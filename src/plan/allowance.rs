@@ -2,8 +2,8 @@
 //! method (each figure the one printed elsewhere on the page), which diver's gas sets the
 //! allowance in each model, and the words that say so.
 
-use super::hand_check::{down1, pencil_content};
 use super::matching::TeamPlan;
+use super::pencil::{down1, pencil_content};
 use super::shown;
 use super::team::TeamInput;
 use crate::i18n::tr_with;

@@ -6,10 +6,11 @@
 //! only raises a turn pressure.
 
 use super::error::InputError;
+use super::gauge::Gauge;
 use super::rounding::round_down_to_step;
 use super::supply::SupplyModels;
 use super::team::{DiverInput, TeamInput, validate_start};
-use super::units::{Gauge, Pressure, Volume};
+use super::units::{Pressure, Volume};
 
 /// One chart: `turns[r][c]` is `me`'s shown turn when `me` starts at `my_starts[r]` and
 /// the buddy at `buddy_starts[c]`. My starts and turns are on my gauge (`my_gauge`), the

@@ -2,7 +2,7 @@
 
 use serde::{Deserialize, Serialize};
 
-use super::units::*;
+use super::units::{Pressure, UnitSystem};
 
 /// The unit a diver's gauge reads.
 #[derive(Clone, Copy, Debug, PartialEq, Eq, Serialize, Deserialize, Default)]
@@ -107,5 +107,19 @@ impl Gauge {
     /// "bar" or "psi".
     pub fn label(self) -> &'static str {
         self.unit.label()
+    }
+}
+
+impl UnitSystem {
+    /// The usual gauge step for this system (common practice: 10 bar / 100 psi).
+    pub fn default_gauge_step(self) -> f64 {
+        self.pressure_unit().default_step()
+    }
+    /// The gauge unit this system reads by default.
+    pub fn pressure_unit(self) -> PressureUnit {
+        match self {
+            UnitSystem::Metric => PressureUnit::Bar,
+            UnitSystem::Imperial => PressureUnit::Psi,
+        }
     }
 }

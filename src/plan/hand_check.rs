@@ -11,12 +11,11 @@
 //! Figures are written to one decimal, each rounded toward safety: contents, the
 //! allowance and drops down, turns up.
 
-use super::cylinders::CylinderSpec;
 use super::matching::TeamPlan;
+use super::pencil::{down1, pencil_content, up1};
 use super::rounding::round_up_to_step;
 use super::shown;
 use super::team::TeamInput;
-use super::units::{BAR_PER_PSI, LITRES_PER_CUFT, PressureUnit, UnitSystem};
 use crate::i18n::{tr, tr_with};
 
 /// One diver's pencil sums.
@@ -30,97 +29,6 @@ pub struct HandWorking {
     pub hand_exact: f64,
     /// The hand turn rounded up to the diver's graduation (never above the start).
     pub hand_rounded: f64,
-}
-
-/// Round down to one decimal, tolerating float noise.
-pub fn down1(x: f64) -> f64 {
-    super::shown::down(x, 1)
-}
-
-/// Round up to one decimal, tolerating float noise.
-pub fn up1(x: f64) -> f64 {
-    super::shown::up(x, 1)
-}
-
-/// Diver `i`'s content sum and its result in the team's volume unit, as printed (one
-/// decimal, rounded down).
-pub(super) fn pencil_content(team: &TeamInput, plan: &TeamPlan, i: usize) -> (String, f64) {
-    let u = team.units;
-    let d = &team.divers[i];
-    let g = plan.divers[i].gauge;
-    let start = g.value(d.start);
-    let n = d.cylinders.count;
-    let count = if n == 1 {
-        String::new()
-    } else {
-        format!("{n} × ")
-    };
-    match d.cylinders.spec {
-        CylinderSpec::Stamped { water_l, .. } => {
-            let (bar, read) = match g.unit {
-                PressureUnit::Bar => (start, String::new()),
-                PressureUnit::Psi => {
-                    let bar = down1(start * BAR_PER_PSI);
-                    (
-                        bar,
-                        format!("{} psi = {} bar; ", shown::num(start), shown::num(bar)),
-                    )
-                }
-            };
-            let litres = down1(f64::from(n) * water_l * bar);
-            let (tail, value) = match u {
-                UnitSystem::Metric => (String::new(), litres),
-                UnitSystem::Imperial => {
-                    let cuft = down1(litres / LITRES_PER_CUFT);
-                    (format!(" = {} cu ft", shown::num(cuft)), cuft)
-                }
-            };
-            (
-                format!(
-                    "{read}{count}{} L × {} bar = {} L{tail}",
-                    shown::num(water_l),
-                    shown::num(bar),
-                    shown::num(litres)
-                ),
-                value,
-            )
-        }
-        CylinderSpec::Rated {
-            rated_cuft,
-            rated_psi,
-        } => {
-            let (psi, read) = match g.unit {
-                PressureUnit::Psi => (start, String::new()),
-                PressureUnit::Bar => {
-                    // To a hundredth (rounded down), so the sums that follow agree with
-                    // the plan's own hand content to the decimal shown.
-                    let psi = shown::down(start / BAR_PER_PSI, 2);
-                    (
-                        psi,
-                        format!("{} bar = {} psi; ", shown::num(start), shown::num(psi)),
-                    )
-                }
-            };
-            let cuft = down1(f64::from(n) * rated_cuft * psi / rated_psi);
-            let (tail, value) = match u {
-                UnitSystem::Imperial => (String::new(), cuft),
-                UnitSystem::Metric => {
-                    let litres = down1(cuft * LITRES_PER_CUFT);
-                    (format!(" = {} L", shown::num(litres)), litres)
-                }
-            };
-            (
-                format!(
-                    "{read}{count}{} cu ft × {} psi ÷ {} psi = {} cu ft{tail}",
-                    shown::num(rated_cuft),
-                    shown::num(psi),
-                    shown::num(rated_psi),
-                    shown::num(cuft)
-                ),
-                value,
-            )
-        }
-    }
 }
 
 /// Diver `i`'s pencil sums. Each figure is written once and used as written: the turn
@@ -222,7 +130,8 @@ mod tests {
     use super::super::allowance::{allowance_sentence, allowance_sources};
     use super::*;
     use crate::plan::{
-        CylinderSet, DiverInput, Gauge, Mix, Pressure, Rule, Temperature, Water, plan_team,
+        CylinderSet, CylinderSpec, DiverInput, Gauge, Mix, Pressure, PressureUnit, Rule,
+        Temperature, UnitSystem, Water, plan_team,
     };
 
     fn diver(name: &str, set: CylinderSet, start: Pressure, gauge: Option<Gauge>) -> DiverInput {

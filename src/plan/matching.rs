@@ -3,11 +3,12 @@
 use super::cylinders::CylinderSet;
 use super::error::InputError;
 use super::gas_model::ModelKind;
+use super::gauge::Gauge;
 use super::mix::Mix;
 use super::out_of_gas::{StressCheck, stress_check};
 use super::supply::SupplyModels;
 use super::team::TeamInput;
-use super::units::{Gauge, Pressure, UnitSystem, Volume};
+use super::units::{Pressure, UnitSystem, Volume};
 use super::warning::Warning;
 
 /// Per-diver results.

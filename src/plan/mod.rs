@@ -53,6 +53,7 @@ mod hand_check;
 mod matching;
 mod mix;
 mod out_of_gas;
+mod pencil;
 mod real_gas;
 mod rounding;
 mod rule;
@@ -69,9 +70,9 @@ mod units;
 mod warning;
 
 // Units and gauges: every quantity carries its unit in its type.
+pub use gauge::{Gauge, PressureUnit};
 pub use units::{
-    ATM_BAR, BAR_PER_PSI, Depth, Gauge, LITRES_PER_CUFT, Pressure, PressureUnit, Temperature,
-    UnitSystem, Volume, Water,
+    ATM_BAR, BAR_PER_PSI, Depth, LITRES_PER_CUFT, Pressure, Temperature, UnitSystem, Volume, Water,
 };
 // Rounding to the gauge graduation: turns up, starts down, nudges to the next mark.
 pub use rounding::{next_step, round_down_to_step, round_up_to_step};

@@ -4,10 +4,11 @@
 
 use super::cylinders::CylinderSet;
 use super::gas_model::{ContentModel, HandModel, ModelKind};
+use super::gauge::Gauge;
 use super::mix::Mix;
 use super::real_gas::RealGasModel;
 use super::rounding::round_up_to_step;
-use super::units::{Gauge, Pressure, Temperature, Volume};
+use super::units::{Pressure, Temperature, Volume};
 
 /// A supply's models, built once and reused for any start pressure.
 #[derive(Clone, Debug)]

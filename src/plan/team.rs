@@ -2,35 +2,19 @@
 
 use super::cylinders::CylinderSet;
 use super::error::{InputError, check_range};
+use super::gauge::Gauge;
 use super::mix::Mix;
 use super::rule::Rule;
-use super::units::{Depth, Gauge, Pressure, Temperature, UnitSystem, Water};
+use super::units::{Depth, Pressure, Temperature, UnitSystem, Water};
 use super::warning::{Supply, Warning};
-use crate::i18n::tr_with;
+use crate::i18n::{tr, tr_with};
 
-pub use super::team_checks::{WATER_TEMP_RANGE_C, validate_start, validate_step};
-use super::team_checks::{fill_warning, validate_diver};
+pub use super::team_checks::{
+    LOW_FILL_RATIO, MAX_CYLINDERS, MAX_DIVERS, MAX_FILL_RATIO, MAX_START_BAR, MAX_WATER_L,
+    MIN_DIVERS, MIN_WATER_L, WATER_TEMP_RANGE_C, validate_start, validate_step,
+};
+use super::team_checks::{fill_warning, validate_supply};
 pub(crate) use super::team_checks::{validate_cylinders, validate_mix};
-
-/// Fewest divers in a team.
-pub const MIN_DIVERS: usize = 2;
-/// Most divers in a team.
-pub const MAX_DIVERS: usize = 6;
-/// Most cylinders in one set (a diver's main set or a stage).
-pub const MAX_CYLINDERS: u8 = 4;
-/// Highest start pressure accepted, bar (gauge); also the highest stamped working
-/// pressure.
-pub const MAX_START_BAR: f64 = 400.0;
-/// Highest start pressure as a multiple of working pressure. Cave fills of
-/// low-pressure steel run about 1.36× (common practice).
-pub const MAX_FILL_RATIO: f64 = 1.5;
-/// Smallest water capacity of one cylinder, litres. For a rated cylinder the
-/// capacity checked is the one the real-gas model derives from the rating.
-pub const MIN_WATER_L: f64 = 0.5;
-/// Largest water capacity of one cylinder, litres (checked as for [`MIN_WATER_L`]).
-pub const MAX_WATER_L: f64 = 30.0;
-/// Below this share of working pressure a start pressure draws a low-fill warning.
-pub const LOW_FILL_RATIO: f64 = 0.5;
 
 /// A stage cylinder (or a pair) carried and dropped on the way in. Common practice:
 /// each stage is planned on its own rule and matched on volume across the team, giving
@@ -196,4 +180,41 @@ impl TeamInput {
         }
         w
     }
+}
+
+fn validate_diver(u: UnitSystem, g: Gauge, i: usize, d: &DiverInput) -> Result<(), InputError> {
+    let f = format!("divers[{i}]");
+    let name = d.name.trim();
+    if name.is_empty() || name.chars().count() > 24 {
+        return Err(InputError::new(
+            format!("{f}.name"),
+            tr("a name of 1 to 24 characters is needed"),
+        ));
+    }
+    super::text::check_text(&format!("{f}.name"), name)?;
+    validate_supply(u, g, &f, &d.cylinders, &d.mix, d.start)?;
+    if let Some(st) = &d.stage {
+        validate_supply(
+            u,
+            g,
+            &format!("{f}.stage"),
+            &st.cylinders,
+            &st.mix,
+            st.start,
+        )?;
+    }
+    if let Some(sac) = d.sac_l_per_min {
+        let (v, lo, hi) = match u {
+            UnitSystem::Metric => (sac, 3.0, 100.0),
+            UnitSystem::Imperial => (sac / super::units::LITRES_PER_CUFT, 0.1, 3.5),
+        };
+        check_range(
+            &format!("{f}.sac"),
+            v,
+            lo,
+            hi,
+            &format!("{}/min", u.volume_label()),
+        )?;
+    }
+    Ok(())
 }

@@ -5,15 +5,32 @@
 use super::cylinders::{CylinderSet, CylinderSpec};
 use super::error::{InputError, check_range};
 use super::gas_model::ModelKind;
+use super::gauge::{Gauge, PressureUnit};
 use super::mix::Mix;
 use super::shown;
-use super::team::{
-    DiverInput, LOW_FILL_RATIO, MAX_CYLINDERS, MAX_FILL_RATIO, MAX_START_BAR, MAX_WATER_L,
-    MIN_WATER_L,
-};
-use super::units::{Gauge, Pressure, PressureUnit, UnitSystem};
+use super::units::{Pressure, UnitSystem};
 use super::warning::{OVERFILL_SHARE, Supply, Warning};
 use crate::i18n::{tr, tr_with};
+
+/// Fewest divers in a team.
+pub const MIN_DIVERS: usize = 2;
+/// Most divers in a team.
+pub const MAX_DIVERS: usize = 6;
+/// Most cylinders in one set (a diver's main set or a stage).
+pub const MAX_CYLINDERS: u8 = 4;
+/// Highest start pressure accepted, bar (gauge); also the highest stamped working
+/// pressure.
+pub const MAX_START_BAR: f64 = 400.0;
+/// Highest start pressure as a multiple of working pressure. Cave fills of
+/// low-pressure steel run about 1.36× (common practice).
+pub const MAX_FILL_RATIO: f64 = 1.5;
+/// Smallest water capacity of one cylinder, litres. For a rated cylinder the
+/// capacity checked is the one the real-gas model derives from the rating.
+pub const MIN_WATER_L: f64 = 0.5;
+/// Largest water capacity of one cylinder, litres (checked as for [`MIN_WATER_L`]).
+pub const MAX_WATER_L: f64 = 30.0;
+/// Below this share of working pressure a start pressure draws a low-fill warning.
+pub const LOW_FILL_RATIO: f64 = 0.5;
 
 /// A start compared with the working pressure on the diver's own gauge: above it by more
 /// than half a graduation, an overfill of more than 10 %, or under half of it.
@@ -158,7 +175,7 @@ pub(crate) fn validate_mix(field: &str, mix: &Mix) -> Result<(), InputError> {
 
 /// One gas supply (a diver's main set or stage): cylinders, mix and start pressure,
 /// with fields named under `prefix`.
-fn validate_supply(
+pub(super) fn validate_supply(
     u: UnitSystem,
     g: Gauge,
     prefix: &str,
@@ -174,48 +191,6 @@ fn validate_supply(
         start,
         cylinders.working_pressure(),
     )
-}
-
-pub(super) fn validate_diver(
-    u: UnitSystem,
-    g: Gauge,
-    i: usize,
-    d: &DiverInput,
-) -> Result<(), InputError> {
-    let f = format!("divers[{i}]");
-    let name = d.name.trim();
-    if name.is_empty() || name.chars().count() > 24 {
-        return Err(InputError::new(
-            format!("{f}.name"),
-            tr("a name of 1 to 24 characters is needed"),
-        ));
-    }
-    super::text::check_text(&format!("{f}.name"), name)?;
-    validate_supply(u, g, &f, &d.cylinders, &d.mix, d.start)?;
-    if let Some(st) = &d.stage {
-        validate_supply(
-            u,
-            g,
-            &format!("{f}.stage"),
-            &st.cylinders,
-            &st.mix,
-            st.start,
-        )?;
-    }
-    if let Some(sac) = d.sac_l_per_min {
-        let (v, lo, hi) = match u {
-            UnitSystem::Metric => (sac, 3.0, 100.0),
-            UnitSystem::Imperial => (sac / super::units::LITRES_PER_CUFT, 0.1, 3.5),
-        };
-        check_range(
-            &format!("{f}.sac"),
-            v,
-            lo,
-            hi,
-            &format!("{}/min", u.volume_label()),
-        )?;
-    }
-    Ok(())
 }
 
 /// Check a start pressure, read on gauge `g`: at least one graduation, at most 400 bar

@@ -3,8 +3,6 @@
 
 use serde::{Deserialize, Serialize};
 
-pub use super::gauge::{Gauge, PressureUnit};
-
 /// Standard atmosphere in bar (exact by definition).
 pub const ATM_BAR: f64 = 1.01325;
 /// One psi in bar.
@@ -99,17 +97,6 @@ impl UnitSystem {
         match self {
             UnitSystem::Metric => t.celsius(),
             UnitSystem::Imperial => t.fahrenheit(),
-        }
-    }
-    /// The usual gauge step for this system (common practice: 10 bar / 100 psi).
-    pub fn default_gauge_step(self) -> f64 {
-        self.pressure_unit().default_step()
-    }
-    /// The gauge unit this system reads by default.
-    pub fn pressure_unit(self) -> PressureUnit {
-        match self {
-            UnitSystem::Metric => PressureUnit::Bar,
-            UnitSystem::Imperial => PressureUnit::Psi,
         }
     }
 }

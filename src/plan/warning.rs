@@ -1,8 +1,8 @@
 //! Observations about a plan that do not stop it: typed values (which diver, which
 //! kind, the figures), put into words only where they are shown.
 
+use super::gauge::PressureUnit;
 use super::shown;
-use super::units::PressureUnit;
 use crate::i18n::{tr, tr_with};
 
 /// Which of a diver's gas supplies a warning is about.
