@@ -4,6 +4,7 @@
 //! and one arm in `field`.
 
 use crate::app::keypad::KeypadBuffer;
+use crate::app::readings::StartStatus;
 use crate::app::view_models as vm;
 use crate::i18n::{tr, tr_with};
 use crate::plan::error::{InputError, check_range};
@@ -12,6 +13,7 @@ use crate::plan::validate_start;
 use crate::plan::{Pressure, PressureUnit, Volume};
 
 use super::super::Session;
+use super::reading::{Reading, reading_field};
 use super::{Field, Typed, apply, check, no_check, sizes, temperatures};
 
 /// What the open keypad is entering.
@@ -51,76 +53,56 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
         EntryTarget::Start(i) => {
             let d = input.divers.get(i)?;
             let g = input.gauge_of(i);
-            // A start nobody read opens empty: the number must come from the gauge.
-            let unread =
-                s.team.start_status(i, s.now()) == crate::app::readings::StartStatus::Missing;
             let label = s.team.shown_label(i);
             // Two or more cylinders not on a manifold each have a gauge.
             let separate = d.cylinders.independent || d.cylinders.count > 2;
             let title_args: [&dyn std::fmt::Display; 2] = [&d.name, &label];
             let brief = tr_with("Start for {0} ({1}), read in the water", &title_args);
-            Field {
-                buffer: KeypadBuffer::digits(
-                    &if unread {
-                        String::new()
+            reading_field(
+                Reading {
+                    gauge: g,
+                    start: d.start,
+                    unread: s.team.start_status(i, s.now()) == StartStatus::Missing,
+                    title: if separate {
+                        tr_with(
+                            "Start for {0} ({1}), read in the water. Balance the cylinders; enter what each gauge reads",
+                            &title_args,
+                        )
                     } else {
-                        vm::reading(g, d.start)
+                        brief.clone()
                     },
-                    false,
-                ),
-                title: if separate {
-                    tr_with(
-                        "Start for {0} ({1}), read in the water. Balance the cylinders; enter what each gauge reads",
-                        &title_args,
-                    )
-                } else {
-                    brief.clone()
+                    brief: separate.then_some(brief),
+                    step: Some(g.step),
                 },
-                brief: separate.then_some(brief),
-                unit: g.label().to_string(),
-                live: true,
-                step: Some(g.step),
-                // The plan goes back to the start it had, even when the keypad opened
-                // empty for an unread start.
-                revert: Some(vm::reading(g, d.start)),
-                check: check(move |s, t| {
+                check(move |s, t| {
                     let v = t.number("start", &tr("enter the pressure read in the water"))?;
                     let working = s.team.input().divers[i].cylinders.working_pressure();
                     validate_start(g, "start", g.pressure(v), working)
                 }),
-                apply: apply(move |s, t| s.team.set_start(i, pressure(g.unit, t)?)),
-                // Done on a start is entering a reading taken now.
-                on_done: Some(apply(move |s, _| {
+                apply(move |s, t| s.team.set_start(i, pressure(g.unit, t)?)),
+                apply(move |s, _| {
                     s.team.mark_read(i, s.now());
                     Ok(())
-                })),
-            }
+                }),
+            )
         }
         EntryTarget::StageStart(i) => {
             let d = input.divers.get(i)?;
             let st = d.stage.as_ref()?;
             let g = input.gauge_of(i);
-            // A stage nobody read today opens empty, as a main start does.
-            let unread =
-                s.team.stage_status(i, s.now()) == Some(crate::app::readings::StartStatus::Missing);
-            Field {
-                buffer: KeypadBuffer::digits(
-                    &if unread {
-                        String::new()
-                    } else {
-                        vm::reading(g, st.start)
-                    },
-                    false,
-                ),
-                title: tr_with(
-                    "Stage pressure for {0} ({1}), read in the water",
-                    &[&d.name, &s.team.shown_stage_label(i)],
-                ),
-                brief: None,
-                unit: g.label().to_string(),
-                live: true,
-                step: None,
-                check: check(move |s, t| {
+            reading_field(
+                Reading {
+                    gauge: g,
+                    start: st.start,
+                    unread: s.team.stage_status(i, s.now()) == Some(StartStatus::Missing),
+                    title: tr_with(
+                        "Stage pressure for {0} ({1}), read in the water",
+                        &[&d.name, &s.team.shown_stage_label(i)],
+                    ),
+                    brief: None,
+                    step: None,
+                },
+                check(move |s, t| {
                     let v = t.number(
                         "stage start",
                         &tr("enter the stage pressure read in the water"),
@@ -131,15 +113,12 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                     let working = st.cylinders.working_pressure();
                     validate_start(g, "stage start", g.pressure(v), working)
                 }),
-                apply: apply(move |s, t| s.team.set_stage_start(i, pressure(g.unit, t)?)),
-                // The plan goes back to the stage start it had, even when the keypad
-                // opened empty. Done is reading the stage gauge now.
-                revert: Some(vm::reading(g, st.start)),
-                on_done: Some(apply(move |s, _| {
+                apply(move |s, t| s.team.set_stage_start(i, pressure(g.unit, t)?)),
+                apply(move |s, _| {
                     s.team.mark_stage_read(i, s.now());
                     Ok(())
-                })),
-            }
+                }),
+            )
         }
         EntryTarget::Sac(i) => {
             let d = input.divers.get(i)?;

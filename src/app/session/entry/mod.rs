@@ -14,6 +14,7 @@ use crate::plan::shown;
 use super::Session;
 
 mod fields;
+mod reading;
 mod sizes;
 mod temperatures;
 

@@ -9,89 +9,94 @@ use crate::plan::error::{InputError, check_range};
 use crate::plan::{Temperature, UnitSystem};
 
 use super::super::Session;
-use super::{Field, Typed, apply, check};
+use super::{Apply, Check, Field, Typed, apply, check};
 
 /// The water temperature of this dive: live, every diver's plan follows it.
 pub fn dive_water(s: &Session) -> Field {
     let u = s.units();
-    Field {
-        buffer: KeypadBuffer::digits(&vm::degrees(u, s.team.input().water_temp), false),
-        title: tr(
-            "Water temperature of this dive: the gas cools to it, and every diver's plan uses it",
-        ),
-        brief: None,
-        unit: u.temperature_label().to_string(),
-        live: true,
-        step: None,
-        revert: None,
-        check: check(|_, t| {
+    temperature_field(
+        u,
+        s.team.input().water_temp,
+        tr("Water temperature of this dive: the gas cools to it, and every diver's plan uses it"),
+        true,
+        check(|_, t| {
             t.number("water temperature", &tr("enter a temperature"))
                 .map(|_| ())
         }),
-        apply: apply(move |s, t| s.team.set_water_temp(temperature(u, t)?)),
-        on_done: None,
-    }
+        apply(move |s, t| s.team.set_water_temp(temperature(u, t)?)),
+    )
 }
 
 /// The water temperature a new team starts with (Settings): applied on Done.
 pub fn default_water(s: &Session) -> Field {
     let u = s.units();
-    Field {
-        buffer: KeypadBuffer::digits(
-            &vm::degrees(u, Temperature::from_celsius(s.settings.water_temp_c)),
-            false,
-        ),
-        title: tr(
-            "Water temperature a new team starts with (each dive sets its own on the Team page)",
-        ),
-        brief: None,
-        unit: u.temperature_label().to_string(),
-        live: false,
-        step: None,
-        revert: None,
-        check: check(move |_, t| {
+    temperature_field(
+        u,
+        Temperature::from_celsius(s.settings.water_temp_c),
+        tr("Water temperature a new team starts with (each dive sets its own on the Team page)"),
+        false,
+        check(move |_, t| {
             let v = u.temperature_value(temperature(u, t)?);
             let (lo_c, hi_c) = WATER_TEMP_RANGE_C;
             let lo = u.temperature_value(Temperature::from_celsius(lo_c)).floor();
             let hi = u.temperature_value(Temperature::from_celsius(hi_c)).ceil();
             check_range("water temperature", v, lo, hi, u.temperature_label())
         }),
-        apply: apply(move |s, t| {
+        apply(move |s, t| {
             s.remember_water_temp(temperature(u, t)?);
             Ok(())
         }),
-        on_done: None,
-    }
+    )
 }
 
 /// The cylinder's temperature when the fill pressure was read (an estimate).
 pub fn fill(s: &Session) -> Field {
     let u = s.units();
-    Field {
-        buffer: KeypadBuffer::digits(&vm::degrees(u, s.fill.temperature), false),
-        title: tr(
+    temperature_field(
+        u,
+        s.fill.temperature,
+        tr(
             "Cylinder temperature when that pressure was read: your estimate (hand on the cylinder)",
         ),
-        brief: None,
-        unit: u.temperature_label().to_string(),
-        live: false,
-        step: None,
-        revert: None,
-        check: check(move |_, t| {
+        false,
+        check(move |_, t| {
             let v = t.number("fill temperature", &tr("enter a temperature"))?;
             let lo = u.temperature_value(Temperature::from_celsius(0.0)).ceil();
             let hi = u.temperature_value(Temperature::from_celsius(60.0)).floor();
             check_range("fill temperature", v, lo, hi, u.temperature_label())
         }),
-        apply: apply(move |s, t| {
+        apply(move |s, t| {
             s.fill.temperature = temperature(u, t)?;
             Ok(())
         }),
-        on_done: None,
-    }
+    )
 }
 
 /// The typed temperature, in the team's unit.
 fn temperature(u: UnitSystem, t: Typed) -> Result<Temperature, InputError> {
     Ok(u.temperature(t.number("temperature", &tr("enter a temperature"))?))
+}
+
+/// A temperature field opening on `shown` in the team's unit: applied as typed when
+/// `live`, else on Done.
+fn temperature_field(
+    u: UnitSystem,
+    shown: Temperature,
+    title: String,
+    live: bool,
+    check: Check,
+    apply: Apply,
+) -> Field {
+    Field {
+        buffer: KeypadBuffer::digits(&vm::degrees(u, shown), false),
+        title,
+        brief: None,
+        unit: u.temperature_label().to_string(),
+        live,
+        step: None,
+        revert: None,
+        check,
+        apply,
+        on_done: None,
+    }
 }
