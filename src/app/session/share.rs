@@ -6,6 +6,7 @@ use chrono::TimeZone;
 
 use crate::app::clipboard::TextClipboard;
 use crate::formats::plan_text::{PlanReads, plan_text};
+use crate::i18n::{tr_n, tr_with};
 
 use super::Session;
 
@@ -42,7 +43,7 @@ impl Session {
             None => self.plan_qr = true,
             Some(why) => {
                 self.plan_qr = false;
-                self.status.push(format!("No plan to share yet. {why}"));
+                self.status.push(tr_with("No plan to share yet. {0}", &[&why]));
             }
         }
     }
@@ -66,14 +67,20 @@ impl Session {
                 .turns_gate(self.now())
                 .sentence()
                 .unwrap_or_default();
-            self.status.push(format!("No plan to copy yet. {why}"));
+            self.status.push(tr_with("No plan to copy yet. {0}", &[&why]));
             return;
         };
         let lines = text.lines().count();
         self.status.push(match clipboard.put_text(&text) {
-            Ok(()) => format!("Plan copied as text ({lines} lines): paste it into a message."),
-            Err(e) => format!(
-                "The plan could not be copied: no clipboard is available here ({e}). Show the QR code or save the team card instead."
+            Ok(()) => tr_n(
+                "Plan copied as text ({n} line): paste it into a message.",
+                "Plan copied as text ({n} lines): paste it into a message.",
+                lines as u64,
+                &[],
+            ),
+            Err(e) => tr_with(
+                "The plan could not be copied: no clipboard is available here ({0}). Show the QR code or save the team card instead.",
+                &[&e],
             ),
         });
     }
