@@ -52,6 +52,8 @@ fn android_main(app: slint::android::AndroidApp) {
         }
     })
     .expect("Slint Android backend");
+    // Before the files are read, so the start-up messages are in the device's language.
+    crate::i18n::set_language(system_language);
     let app = App::new(dir).expect("app window");
     app.set_system_language(system_language);
     use slint::ComponentHandle;

@@ -12,6 +12,10 @@ use super::font_scale_from;
 /// Open the app window (desktop). Returns the process exit code.
 pub fn run() -> i32 {
     let dir = desktop_data_dir();
+    // Before the files are read, so what the start-up says about them is in the system's
+    // language (a language chosen in Settings takes over once the settings are read).
+    let system_language = crate::i18n::from_env(|k| std::env::var(k).ok());
+    crate::i18n::set_language(system_language);
     let app = match App::new(&dir) {
         Ok(a) => a,
         Err(e) => {
@@ -21,7 +25,7 @@ pub fn run() -> i32 {
             return 1;
         }
     };
-    app.set_system_language(crate::i18n::from_env(|k| std::env::var(k).ok()));
+    app.set_system_language(system_language);
     // Cards go where their owner can open them (Documents, else Downloads).
     app.session.borrow_mut().exchange.card_dir = crate::storage::data_dir::user_card_dir(&dir);
     if let Some(scale) = font_scale_from(std::env::var_os("TURNSHEET_FONT_SCALE").as_deref()) {

@@ -41,3 +41,19 @@ fn back_closes_the_keypad_then_the_picker_then_the_page() {
     assert_eq!(s.picker, Picker::None);
     assert!(!s.back(), "the Team page is left to the system");
 }
+
+#[test]
+fn start_up_messages_are_in_the_language_set_before_the_files_are_read() {
+    use crate::i18n::{Language, LanguageScope};
+    let dir = tempfile::tempdir().unwrap();
+    std::fs::write(dir.path().join("locker.json"), "{ not json").unwrap();
+    let _de = LanguageScope::new(Language::German);
+    let s = Session::open(Store::new(dir.path()));
+    let said = s.status.text();
+    let english = "The cylinder locker file could not be read";
+    assert!(!said.is_empty() && !said.contains(english), "{said}");
+    assert!(
+        said.contains("Flaschenregal"),
+        "German names the locker: {said}"
+    );
+}

@@ -43,7 +43,8 @@ impl Session {
             None => self.plan_qr = true,
             Some(why) => {
                 self.plan_qr = false;
-                self.status.push(tr_with("No plan to share yet. {0}", &[&why]));
+                self.status
+                    .push(tr_with("No plan to share yet. {0}", &[&why]));
             }
         }
     }
@@ -67,7 +68,8 @@ impl Session {
                 .turns_gate(self.now())
                 .sentence()
                 .unwrap_or_default();
-            self.status.push(tr_with("No plan to copy yet. {0}", &[&why]));
+            self.status
+                .push(tr_with("No plan to copy yet. {0}", &[&why]));
             return;
         };
         let lines = text.lines().count();
