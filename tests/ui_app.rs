@@ -2,6 +2,9 @@
 //! version): keys are pressed through their accessibility actions, values read back from
 //! the accessibility tree, as a screen reader or a finger would.
 
+mod ui_common;
+use ui_common::{find, page, press, value};
+
 use i_slint_backend_testing::ElementHandle;
 use slint::ComponentHandle;
 use slint::platform::{Key, WindowEvent};
@@ -16,38 +19,10 @@ fn init() {
     i_slint_backend_testing::init_no_event_loop();
 }
 
-fn find(app: &App, label: &str) -> ElementHandle {
-    let all: Vec<_> = ElementHandle::find_by_accessible_label(&app.window, label).collect();
-    assert_eq!(
-        all.len(),
-        1,
-        "expected exactly one element labelled {label:?}, found {}",
-        all.len()
-    );
-    all.into_iter().next().unwrap()
-}
-
-fn press(app: &App, label: &str) {
-    find(app, label).invoke_accessible_default_action();
-}
-
-/// The accessible value, with no-break spaces (kept between numbers and units) read as
-/// spaces.
-fn value(app: &App, label: &str) -> String {
-    find(app, label)
-        .accessible_value()
-        .unwrap_or_default()
-        .replace('\u{a0}', " ")
-}
-
 fn type_keys(app: &App, keys: &str) {
     for c in keys.chars() {
         press(app, &c.to_string());
     }
-}
-
-fn page(app: &App) -> Page {
-    app.window.global::<Nav>().get_page()
 }
 
 /// A phone-wide window, tall enough that no scrolling hides an element (the

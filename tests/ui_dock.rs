@@ -3,6 +3,9 @@
 //! moved, a reading taken before midnight. Through the real toolkit, with the clock
 //! handed in.
 
+mod ui_common;
+use ui_common::{all, find, page, press, settle, value};
+
 use std::rc::Rc;
 
 use i_slint_backend_testing::ElementHandle;
@@ -10,7 +13,7 @@ use slint::ComponentHandle;
 use slint::platform::PointerEventButton;
 use turnsheet::app::App;
 use turnsheet::app::clock::ManualClock;
-use turnsheet::app::ui::{Nav, Page};
+use turnsheet::app::ui::Page;
 use turnsheet::plan::plan_team;
 
 /// 3 December 2026, 23:58 UTC.
@@ -24,36 +27,6 @@ fn open_at(dir: &std::path::Path, clock: &ManualClock, w: f32, h: f32) -> App {
         press(&app, "acknowledge cautions");
     }
     app
-}
-
-fn all(app: &App, label: &str) -> Vec<ElementHandle> {
-    ElementHandle::find_by_accessible_label(&app.window, label).collect()
-}
-
-fn find(app: &App, label: &str) -> ElementHandle {
-    let v = all(app, label);
-    assert_eq!(
-        v.len(),
-        1,
-        "one element labelled {label:?}, found {}",
-        v.len()
-    );
-    v.into_iter().next().unwrap()
-}
-
-fn press(app: &App, label: &str) {
-    find(app, label).invoke_accessible_default_action();
-}
-
-fn value(app: &App, label: &str) -> String {
-    find(app, label)
-        .accessible_value()
-        .unwrap_or_default()
-        .replace('\u{a0}', " ")
-}
-
-fn page(app: &App) -> Page {
-    app.window.global::<Nav>().get_page()
 }
 
 fn read_all(app: &App) {
@@ -71,13 +44,6 @@ fn read_all(app: &App) {
         }
         press(app, "done");
     }
-}
-
-/// Long enough for every button to count taps again (the 0.4 s tap guard).
-fn settle() {
-    slint::platform::update_timers_and_animations();
-    i_slint_backend_testing::mock_elapsed_time(std::time::Duration::from_millis(500));
-    slint::platform::update_timers_and_animations();
 }
 
 fn turn(app: &App, name: &str) -> String {

@@ -3,9 +3,11 @@
 //! in their own words, and the turn card shows the same turns as the plan, its lines in
 //! their language and its decimals with a comma.
 
+mod ui_common;
+use ui_common::{press, settle, value};
+
 use std::rc::Rc;
 
-use i_slint_backend_testing::ElementHandle;
 use slint::ComponentHandle;
 use turnsheet::app::App;
 use turnsheet::app::clock::ManualClock;
@@ -15,35 +17,6 @@ use turnsheet::plan::shown;
 
 /// 3 December 2026, 09:42 UTC.
 const MORNING: i64 = 1_796_463_720;
-
-fn find(app: &App, label: &str) -> ElementHandle {
-    let v: Vec<_> = ElementHandle::find_by_accessible_label(&app.window, label).collect();
-    assert_eq!(
-        v.len(),
-        1,
-        "one element labelled {label:?}, found {}",
-        v.len()
-    );
-    v.into_iter().next().unwrap()
-}
-
-fn press(app: &App, label: &str) {
-    find(app, label).invoke_accessible_default_action();
-}
-
-fn value(app: &App, label: &str) -> String {
-    find(app, label)
-        .accessible_value()
-        .unwrap_or_default()
-        .replace('\u{a0}', " ")
-}
-
-/// Long enough for every button to count taps again (the 0.4 s tap guard).
-fn settle() {
-    slint::platform::update_timers_and_animations();
-    i_slint_backend_testing::mock_elapsed_time(std::time::Duration::from_millis(500));
-    slint::platform::update_timers_and_animations();
-}
 
 /// A decimal number written with `mark` ("54.4", "54,4").
 fn has_decimal(text: &str, mark: char) -> bool {
