@@ -19,7 +19,11 @@ pub fn locker_rows(s: &Session) -> Vec<LockerRowVm> {
         .iter()
         .map(|e| LockerRowVm {
             id: e.id as i32,
-            name: e.name.clone(),
+            // A name made from the sizes or a preset's, in the reader's language.
+            name: match e.cylinders.to_set("locker") {
+                Ok(set) => crate::plan::shown_label(&e.name, &set),
+                Err(_) => e.name.clone(),
+            },
             detail: format!(
                 "{} · {}",
                 e.cylinders

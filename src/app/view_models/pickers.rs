@@ -109,7 +109,10 @@ fn locker_picks(s: &Session) -> Vec<PickRowVm> {
         .map(|(index, e)| {
             let set = e.cylinders.to_set("locker");
             PickRowVm {
-                title: e.name.clone(),
+                title: match &set {
+                    Ok(set) => crate::plan::shown_label(&e.name, set),
+                    Err(_) => e.name.clone(),
+                },
                 detail: set
                     .as_ref()
                     .map(|set| set.describe())

@@ -58,3 +58,33 @@ fn errors_read_without_field_paths() {
     let e = crate::plan::InputError::new("gauge_step", "out of range");
     assert_eq!(error_for_people(&names, &e), "Gauge step: out of range");
 }
+
+#[test]
+fn locker_names_made_from_sizes_are_shown_in_the_readers_language() {
+    use crate::i18n::{Language, LanguageScope};
+    use crate::plan::{CylinderSet, CylinderSpec, Material};
+    let (_dir, mut s) = crate::app::session::test_session();
+    let set = CylinderSet::new(
+        2,
+        CylinderSpec::Stamped {
+            water_l: 11.1,
+            working_bar: 232.0,
+        },
+    );
+    // Made in English, as a set saved from a diver's card is named.
+    s.locker
+        .add_set(&set.describe(), &set, Material::Steel)
+        .unwrap();
+    s.locker
+        .add_set("Bram's doubles", &set, Material::Steel)
+        .unwrap();
+    let _de = LanguageScope::new(Language::German);
+    let names: Vec<String> = super::locker_rows(&s).into_iter().map(|r| r.name).collect();
+    assert!(
+        names
+            .iter()
+            .any(|n| n.starts_with("Doppelgerät") && n.contains("11,1")),
+        "{names:?}"
+    );
+    assert!(names.iter().any(|n| n == "Bram's doubles"), "{names:?}");
+}
