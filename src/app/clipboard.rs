@@ -1,5 +1,6 @@
-//! The system clipboard, for "Copy plan as text" on the desktop. Handed to the session
-//! as a `TextClipboard`, so tests can give it one that fails.
+//! The system clipboard, for "Copy plan as text". Handed to the session as a
+//! `TextClipboard`, so tests can give it one that fails. The desktop's is `arboard`;
+//! Android's is the framework's, which the platform start hands in (`set_platform_copy`).
 
 /// Somewhere to put text.
 pub trait TextClipboard {
@@ -7,8 +8,21 @@ pub trait TextClipboard {
     fn put_text(&mut self, text: &str) -> Result<(), String>;
 }
 
-/// Whether this build has a clipboard to copy to (the desktop does; Android, not yet).
-pub const HAS_CLIPBOARD: bool = cfg!(not(target_os = "android"));
+/// A platform's own way to put text on its clipboard.
+pub type PlatformCopy = fn(&str) -> Result<(), String>;
+
+static PLATFORM_COPY: std::sync::OnceLock<PlatformCopy> = std::sync::OnceLock::new();
+
+/// The platform start hands in its clipboard (Android); the desktop needs none.
+pub fn set_platform_copy(copy: PlatformCopy) {
+    let _ = PLATFORM_COPY.set(copy);
+}
+
+/// Whether there is a clipboard to copy to: always on the desktop, on Android once the
+/// platform start has handed its clipboard in.
+pub fn has_clipboard() -> bool {
+    cfg!(not(target_os = "android")) || PLATFORM_COPY.get().is_some()
+}
 
 /// The desktop's clipboard. It is opened on the first copy and kept: on Linux the text
 /// stays on the clipboard only while the program that put it there holds it (or a
@@ -37,7 +51,10 @@ impl TextClipboard for SystemClipboard {
     }
 
     #[cfg(target_os = "android")]
-    fn put_text(&mut self, _text: &str) -> Result<(), String> {
-        Err("the app has no clipboard on Android yet".to_string())
+    fn put_text(&mut self, text: &str) -> Result<(), String> {
+        match PLATFORM_COPY.get() {
+            Some(copy) => copy(text),
+            None => Err("no clipboard was handed to the app".to_string()),
+        }
     }
 }

@@ -1,5 +1,6 @@
 //! Android entry point: the same window as desktop, storage in app-private files,
-//! the device locale's language, saves on lifecycle events. Everything it calls is covered by the desktop tests.
+//! the device locale's language, saves on lifecycle events, and the framework's
+//! clipboard and shared Downloads (`android_share.rs`) handed to the app. Everything it calls is covered by the desktop tests.
 
 use std::cell::RefCell;
 use std::rc::Rc;
@@ -56,6 +57,9 @@ fn android_main(app: slint::android::AndroidApp) {
     crate::i18n::set_language(system_language);
     let app = App::new(dir).expect("app window");
     app.set_system_language(system_language);
+    // The plan as text onto the clipboard, and cards into Downloads/Turnsheet.
+    crate::app::clipboard::set_platform_copy(super::android_share::copy_text);
+    app.session.borrow_mut().exchange.publish_card = Some(super::android_share::save_download);
     use slint::ComponentHandle;
     *session.borrow_mut() = Some((app.session.clone(), app.window.as_weak()));
     let _ = app.window.run();

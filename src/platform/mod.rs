@@ -9,6 +9,8 @@ use crate::app::session::Session;
 
 #[cfg(target_os = "android")]
 mod android;
+#[cfg(target_os = "android")]
+mod android_share;
 #[cfg(not(target_os = "android"))]
 pub mod desktop;
 #[cfg(not(target_os = "android"))]

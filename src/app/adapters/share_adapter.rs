@@ -6,7 +6,7 @@ use std::rc::Rc;
 
 use slint::ComponentHandle;
 
-use super::super::clipboard::{HAS_CLIPBOARD, SystemClipboard};
+use super::super::clipboard::{SystemClipboard, has_clipboard};
 use super::super::qr_image::qr_image;
 use super::super::session::Session;
 use super::super::ui::{AppWindow, PlanQrAdapter};
@@ -17,7 +17,7 @@ const CAPTION: &str = "Point a phone camera at the code: it reads the plan as pl
 
 pub fn connect(ui: &AppWindow, s: &Shared) {
     let a = ui.global::<PlanQrAdapter>();
-    a.set_can_copy(HAS_CLIPBOARD);
+    a.set_can_copy(has_clipboard());
     let (w, st) = handles(ui, s);
     a.on_show(move || act(&w, &st, |x| x.open_plan_qr()));
     let (w, st) = handles(ui, s);

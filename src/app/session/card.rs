@@ -62,16 +62,30 @@ impl Session {
             read_at: (0..input.divers.len()).map(|i| self.read_text(i)).collect(),
         };
         let svg = card_svg(&heading, input, self.team.plan(), &charts);
-        let path = self.exchange.card_dir.join(format!(
-            "turnsheet-card-{}.svg",
-            stamp.format("%Y-%m-%d-%H%M%S")
-        ));
+        let name = format!("turnsheet-card-{}.svg", stamp.format("%Y-%m-%d-%H%M%S"));
+        let path = self.exchange.card_dir.join(&name);
         match crate::storage::atomic::write_text(&path, &svg) {
             Ok(()) => {
-                self.status.push(tr_with(
-                    "Team card written to {0} (open it in a browser to print).",
-                    &[&path.display()],
-                ));
+                // Where the platform keeps files its owner can open (Android's Downloads),
+                // the card goes too; the copy in the app's folder stays either way.
+                let published = self
+                    .exchange
+                    .publish_card
+                    .map(|publish| publish(&name, "image/svg+xml", svg.as_bytes()));
+                self.status.push(match published {
+                    None => tr_with(
+                        "Team card written to {0} (open it in a browser to print).",
+                        &[&path.display()],
+                    ),
+                    Some(Ok(place)) => tr_with(
+                        "Team card saved in {0}: open it from Files or Downloads to print or share.",
+                        &[&place],
+                    ),
+                    Some(Err(e)) => tr_with(
+                        "Team card written to {0}; it could not be put into Downloads ({1}).",
+                        &[&path.display(), &e],
+                    ),
+                });
                 Some(path)
             }
             Err(e) => {
@@ -123,5 +137,51 @@ mod tests {
             assert!(svg.contains(&turn), "{} {turn}", d.name);
             assert!(svg.contains(&d.name));
         }
+    }
+
+    #[test]
+    fn a_card_also_goes_where_the_platform_puts_shared_files_and_says_where() {
+        use std::sync::Mutex;
+        static GOT: Mutex<Vec<(String, String, usize)>> = Mutex::new(Vec::new());
+        fn publish(name: &str, mime: &str, bytes: &[u8]) -> Result<String, String> {
+            GOT.lock()
+                .unwrap()
+                .push((name.into(), mime.into(), bytes.len()));
+            Ok(format!("Download/Turnsheet/{name}"))
+        }
+        fn refuse(_: &str, _: &str, _: &[u8]) -> Result<String, String> {
+            Err("no shared storage".into())
+        }
+        let dir = tempfile::tempdir().unwrap();
+        let mut s = Session::open(Store::new(dir.path()));
+        for i in 0..s.team.len() {
+            s.confirm_start(i);
+            if s.team.input().divers[i].stage.is_some() {
+                s.team.mark_stage_read(i, s.now());
+            }
+        }
+        s.exchange.publish_card = Some(publish);
+        let path = s.save_card().expect("a card");
+        let got = GOT.lock().unwrap().clone();
+        let written = std::fs::read(&path).unwrap();
+        assert_eq!(got.len(), 1);
+        assert_eq!(got[0].1, "image/svg+xml");
+        assert_eq!(got[0].2, written.len(), "the same bytes as the card kept");
+        assert!(path.ends_with(&got[0].0));
+        assert!(
+            s.status
+                .text()
+                .contains(&format!("Download/Turnsheet/{}", got[0].0)),
+            "{}",
+            s.status.text()
+        );
+        s.exchange.publish_card = Some(refuse);
+        let kept = s.save_card().expect("the card is kept in the app's folder");
+        assert!(kept.exists());
+        assert!(
+            s.status.text().contains("no shared storage"),
+            "{}",
+            s.status.text()
+        );
     }
 }

@@ -11,16 +11,24 @@ use crate::storage::exchange::{EXPORT_NAME, export_locker, free_path, import_loc
 use super::{SavedFile, Session};
 
 /// The two folders, and the last message about them.
-#[derive(Clone, Debug, Default, PartialEq)]
+#[derive(Clone, Debug, Default)]
 pub struct Exchange {
     pub export_dir: PathBuf,
     pub import_dir: PathBuf,
     /// Where the Turns page saves team cards: `<data dir>/cards` unless the platform
     /// start sets the user's folder (`storage::data_dir::user_card_dir`).
     pub card_dir: PathBuf,
+    /// Where a saved card also goes where its owner can open it, when the platform has
+    /// such a place of its own (Android: Downloads through the media store). It gets the
+    /// file name, the MIME type and the bytes, and gives back the place in words.
+    pub publish_card: Option<PublishFile>,
     /// What the last export or import did; empty once dismissed.
     pub message: String,
 }
+
+/// A platform's way to put a file where its owner can open it (see
+/// `Exchange::publish_card`).
+pub type PublishFile = fn(&str, &str, &[u8]) -> Result<String, String>;
 
 impl Exchange {
     pub fn for_data_dir(dir: &Path) -> Self {
@@ -28,6 +36,7 @@ impl Exchange {
             export_dir: data_dir::export_dir(dir),
             import_dir: data_dir::import_dir(dir),
             card_dir: data_dir::data_card_dir(dir),
+            publish_card: None,
             message: String::new(),
         }
     }
