@@ -9,7 +9,8 @@ use super::error::InputError;
 use super::gauge::Gauge;
 use super::rounding::round_down_to_step;
 use super::supply::SupplyModels;
-use super::team::{DiverInput, TeamInput, validate_start};
+use super::team::{DiverInput, TeamInput};
+use super::team_checks::validate_start;
 use super::units::{Pressure, Volume};
 
 /// One chart: `turns[r][c]` is `me`'s shown turn when `me` starts at `my_starts[r]` and
