@@ -280,3 +280,68 @@ fn a_second_dive_is_next_dive_and_one_keypad_entry_per_diver() {
     println!("second dive of three divers: {} taps", taps.get());
     assert_eq!(taps.get(), 1 + 3 * 5 + 1);
 }
+
+/// The taps a new user needs from the very first launch (cautions shown) to three divers'
+/// turns: once with generic presets, once with one diver's pair entered by hand.
+#[test]
+fn first_launch_to_three_turns_counts_its_taps() {
+    i_slint_backend_testing::init_no_event_loop();
+    for custom in [false, true] {
+        let dir = tempfile::tempdir().unwrap();
+        let clock = ManualClock::at(LATE);
+        let app = App::with_clock(dir.path(), Rc::new(clock.clone())).unwrap();
+        app.window
+            .window()
+            .set_size(slint::LogicalSize::new(412.0, 4000.0));
+        assert_eq!(page(&app), Page::Cautions);
+        let taps = std::cell::Cell::new(0);
+        let tap = |label: &str| {
+            taps.set(taps.get() + 1);
+            press(&app, label);
+        };
+        let keys = |s: &str| s.chars().for_each(|c| tap(&c.to_string()));
+        tap("acknowledge cautions");
+        tap("new team");
+        tap("add diver");
+        tap("cylinders of Me");
+        tap("pick Single 12 L 232 bar");
+        tap("cylinders of Buddy");
+        if custom {
+            tap("custom set");
+            tap("cylinder count 2");
+            tap("custom water capacity per cylinder");
+            keys("11");
+            tap("decimal separator");
+            keys("1");
+            tap("done");
+            tap("custom working pressure");
+            keys("232");
+            tap("done");
+            tap("use custom set");
+        } else {
+            tap("pick Twin 10 L 300 bar");
+        }
+        tap("cylinders of Diver 3");
+        tap("pick Single 18 L 232 bar");
+        for (name, start) in [("Me", "210"), ("Buddy", "220"), ("Diver 3", "200")] {
+            tap(&format!("start pressure of {name}"));
+            keys(start);
+            tap("done");
+        }
+        tap("show turns");
+        assert_eq!(page(&app), Page::Turns);
+        for name in ["Me", "Buddy", "Diver 3"] {
+            let t = turn(&app, name);
+            assert!(t.ends_with("bar") && !t.starts_with('—'), "{name}: {t}");
+        }
+        let what = if custom {
+            "one pair by hand"
+        } else {
+            "presets"
+        };
+        println!("first launch to three turns, {what}: {} taps", taps.get());
+        // Presets: 3 to open a team of three, 2 per diver's set, 5 per start, 1 to show.
+        let sets = if custom { 2 + 15 + 2 } else { 2 + 2 + 2 };
+        assert_eq!(taps.get(), 3 + sets + 3 * 5 + 1);
+    }
+}
