@@ -345,3 +345,113 @@ fn first_launch_to_three_turns_counts_its_taps() {
         assert_eq!(taps.get(), 3 + sets + 3 * 5 + 1);
     }
 }
+
+/// On a small phone with large text, in every language, no key of the start keypad
+/// moves while a start is typed: the message line keeps its room whether it holds a
+/// hint, a reason, a warning or nothing (a digit typed fast must land on the key aimed
+/// at).
+#[test]
+fn no_keypad_key_moves_while_a_start_is_typed() {
+    use i_slint_backend_testing::{AccessibleRole, ElementQuery};
+    use turnsheet::app::adapters::refresh_all;
+    use turnsheet::app::session::EntryTarget;
+    use turnsheet::i18n::Language;
+    i_slint_backend_testing::init_no_event_loop();
+    for language in Language::ALL {
+        let dir = tempfile::tempdir().unwrap();
+        let clock = ManualClock::at(LATE);
+        let app = App::with_clock(dir.path(), Rc::new(clock.clone())).unwrap();
+        app.window
+            .window()
+            .set_size(slint::LogicalSize::new(360.0, 640.0));
+        app.session.borrow_mut().acknowledge_cautions();
+        app.set_system_language(language);
+        app.set_font_scale(1.3);
+        app.window.show().unwrap();
+        // Every button on screen (the keypad covers the page), where it is.
+        let buttons = || -> Vec<(String, slint::LogicalPosition, slint::LogicalSize)> {
+            ElementQuery::from_root(&app.window)
+                .match_descendants()
+                .find_all()
+                .into_iter()
+                .filter(|e: &ElementHandle| e.accessible_role() == Some(AccessibleRole::Button))
+                .map(|e| {
+                    let label = e.accessible_label().unwrap_or_default().to_string();
+                    (label, e.absolute_position(), e.size())
+                })
+                .collect()
+        };
+        // Ines has twins (one gauge); Bram has a sidemount pair (the keypad's hint).
+        for diver in [0, 1] {
+            app.session
+                .borrow_mut()
+                .open_entry(EntryTarget::Start(diver));
+            refresh_all(&app.window, &app.session.borrow());
+            let opened = buttons();
+            assert!(opened.iter().any(|(l, ..)| l == "7"), "the keypad is open");
+            // A reason comes (too low), goes (a usable start), a warning comes (above
+            // the working pressure, then an overfill).
+            for k in [
+                "2", "1", "0", "clear", "2", "4", "0", "clear", "3", "0", "0",
+            ] {
+                app.session.borrow_mut().key(k);
+                refresh_all(&app.window, &app.session.borrow());
+                let s = app.session.borrow();
+                let e = s.entry.as_ref().unwrap();
+                assert_eq!(
+                    buttons(),
+                    opened,
+                    "{} diver {diver}: a key moved after {k:?} (entry {:?}, reason {:?})",
+                    language.code(),
+                    e.buffer().text(),
+                    e.reason(),
+                );
+            }
+            app.session.borrow_mut().cancel_entry();
+        }
+    }
+}
+
+/// Once turns are shown, each plan-changing control says what it did, through the real
+/// toolkit, and Undo puts the team back as it was.
+#[test]
+fn every_plan_change_says_what_it_did_and_undoes() {
+    let dir = tempfile::tempdir().unwrap();
+    let clock = ManualClock::at(LATE);
+    let app = open_at(dir.path(), &clock, 412.0, 4000.0);
+    read_all(&app);
+    press(&app, "show turns");
+    press(&app, "back");
+    let cases: [(&str, &[&str]); 6] = [
+        ("Water now", &["colder water"]),
+        (
+            "Cylinders of Bram now",
+            &["cylinders of Bram", "pick Twin 12 L 232 bar"],
+        ),
+        ("Mix of Ines now", &["mix of Ines", "Air", "mix done"]),
+        (
+            "Stage of Sol now",
+            &["stage of Sol", "pick Single 10 L 200 bar"],
+        ),
+        ("Sol carries no stage now", &["stage of Sol", "no stage"]),
+        ("Gauge of Bram now", &["gauge of Bram", "gauge psi 100"]),
+    ];
+    for (headline, taps) in cases {
+        let before = app.session.borrow().team.to_state();
+        for t in taps {
+            press(&app, t);
+        }
+        let note = value(&app, "undo note");
+        assert!(note.starts_with(headline), "{headline}: {note}");
+        assert!(
+            note.contains("Turns: ") || note.contains("No turns until"),
+            "{note}"
+        );
+        press(&app, "undo");
+        assert_eq!(
+            app.session.borrow().team.to_state(),
+            before,
+            "{headline}: Undo puts the team back"
+        );
+    }
+}

@@ -164,6 +164,30 @@ impl Warning {
         }
     }
 
+    /// The warning in a few words, for a place that already shows the value and whose
+    /// supply it is (the keypad entering that start): a start's warnings name only the
+    /// working pressure; every other warning is its [`detail`](Self::detail).
+    pub fn brief(&self) -> String {
+        match *self {
+            Warning::AboveWorking { working, unit, .. } => {
+                let [w, u, _] = figures(working, 0.0, unit);
+                tr_with(
+                    "Above the working pressure {0} {1}; check the fill.",
+                    &[&w, &u],
+                )
+            }
+            Warning::Overfill { working, unit, .. } => {
+                let [w, u, _] = figures(working, 0.0, unit);
+                tr_with(
+                    "Overfill: more than 10 % above the working pressure {0} {1}.",
+                    &[&w, &u],
+                )
+            }
+            Warning::LowFill { .. } => tr("Under half the working pressure; little to share."),
+            _ => self.detail(),
+        }
+    }
+
     /// The warning in words, led by the diver's name where it is about one diver.
     pub fn describe(&self, names: &[String]) -> String {
         match self.diver().and_then(|i| names.get(i)) {
@@ -207,5 +231,22 @@ mod tests {
             Warning::NoGasSpent.describe(&names),
             Warning::NoGasSpent.detail()
         );
+    }
+
+    #[test]
+    fn a_brief_warning_names_the_working_pressure_and_its_unit() {
+        let w = Warning::Overfill {
+            diver: 0,
+            supply: Supply::Main,
+            start: 300.0,
+            working: 232.0,
+            unit: PressureUnit::Bar,
+        };
+        assert_eq!(
+            w.brief(),
+            "Overfill: more than 10 % above the working pressure 232 bar."
+        );
+        assert!(w.brief().len() < w.detail().len());
+        assert_eq!(Warning::NoGasSpent.brief(), Warning::NoGasSpent.detail());
     }
 }

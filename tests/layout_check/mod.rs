@@ -153,13 +153,19 @@ pub fn texts(window: &slint::Window) -> Vec<TextBox> {
         let Some(t) = text_of(item) else {
             return ControlFlow::Continue(());
         };
-        if t.text.trim().is_empty() || rect.w <= 0.0 || rect.h <= 0.0 {
+        if rect.h <= 0.0 {
             return ControlFlow::Continue(());
         }
         let h = item
             .borrow()
             .as_ref()
             .layout_info(Orientation::Horizontal, -1.0, &adapter, item);
+        // A blank text draws nothing, unless its box is too narrow for it and it
+        // elides: then it draws "…" where the diver expects an empty field.
+        let draws_ellipsis = t.elides && h.preferred > rect.w + SLACK;
+        if (t.text.trim().is_empty() || rect.w <= 0.0) && !draws_ellipsis {
+            return ControlFlow::Continue(());
+        }
         let v = item
             .borrow()
             .as_ref()

@@ -33,8 +33,9 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
             a.set_title(vm::keep_units_together(&k.title).into());
             a.set_display(k.display.into());
             a.set_unit(k.unit.into());
-            a.set_reason(k.reason.into());
-            a.set_warning(k.warning.into());
+            a.set_reason(vm::keep_units_together(&k.reason).into());
+            a.set_hint(vm::keep_units_together(&k.hint).into());
+            a.set_warning(vm::keep_units_together(&k.warning).into());
             a.set_selected(k.selected);
             a.set_can_decimal(k.can_decimal);
             a.set_decimal_mark(k.decimal_mark.into());

@@ -123,8 +123,11 @@ impl Session {
     /// Take a diver's stage away.
     pub fn pick_no_stage(&mut self) {
         if let Picker::Cylinders { diver, stage: true } = self.picker {
-            let r = self.team.set_stage_cylinders(diver, None, "");
-            self.team_result(r);
+            let name = self.team.input().divers[diver].name.clone();
+            self.change_plan(
+                |t| t.set_stage_cylinders(diver, None, ""),
+                |_| tr_with("{0} carries no stage now", &[&name]),
+            );
             self.picker = Picker::None;
         }
     }
@@ -137,8 +140,16 @@ impl Session {
         label: &str,
     ) {
         if stage {
-            let r = self.team.set_stage_cylinders(i, Some(set), label);
-            self.team_result(r);
+            let name = self.team.input().divers[i].name.clone();
+            self.change_plan(
+                |t| t.set_stage_cylinders(i, Some(set), label),
+                |s| {
+                    tr_with(
+                        "Stage of {0} now {1}",
+                        &[&name, &s.team.shown_stage_label(i)],
+                    )
+                },
+            );
             self.picker = Picker::None;
             return;
         }
@@ -153,8 +164,9 @@ impl Session {
                     ));
                 }
                 self.save_team();
+                let shown = self.team.shown_label(i);
                 self.after_change(
-                    tr_with("Cylinders of {0} now {1}", &[&name, &label]),
+                    tr_with("Cylinders of {0} now {1}", &[&name, &shown]),
                     before,
                 );
             }

@@ -10,6 +10,8 @@ pub struct KeypadVm {
     pub display: String,
     pub unit: String,
     pub reason: String,
+    /// How to read the value, shown while there is no reason or warning.
+    pub hint: String,
     /// The plan's warnings about the value typed (a start above the working pressure, an
     /// overfill, a low fill), in the core's words; empty when there are none.
     pub warning: String,
@@ -29,10 +31,11 @@ pub fn keypad(s: &Session) -> Option<KeypadVm> {
     let e = s.entry.as_ref()?;
     Some(KeypadVm {
         letters: e.buffer().is_letters(),
-        title: e.shown_title().to_string(),
+        title: e.title().to_string(),
         display: e.buffer().text().to_string(),
         unit: e.unit().to_string(),
         reason: e.reason().to_string(),
+        hint: e.hint().unwrap_or_default().to_string(),
         warning: entry_warnings(s, e.target()).join(" "),
         selected: e.buffer().is_selected(),
         can_decimal: e.buffer().allows_decimal(),
@@ -63,6 +66,6 @@ fn entry_warnings(s: &Session, target: EntryTarget) -> Vec<String> {
                         | Warning::LowFill { supply: x, .. } if *x == supply
                 )
         })
-        .map(Warning::detail)
+        .map(Warning::brief)
         .collect()
 }

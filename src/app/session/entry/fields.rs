@@ -57,21 +57,14 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
             // Two or more cylinders not on a manifold each have a gauge.
             let separate = d.cylinders.independent || d.cylinders.count > 2;
             let title_args: [&dyn std::fmt::Display; 2] = [&d.name, &label];
-            let brief = tr_with("Start for {0} ({1}), read in the water", &title_args);
             reading_field(
                 Reading {
                     gauge: g,
                     start: d.start,
                     unread: s.team.start_status(i, s.now()) == StartStatus::Missing,
-                    title: if separate {
-                        tr_with(
-                            "Start for {0} ({1}), read in the water. Balance the cylinders; enter what each gauge reads",
-                            &title_args,
-                        )
-                    } else {
-                        brief.clone()
-                    },
-                    brief: separate.then_some(brief),
+                    title: tr_with("Start for {0} ({1}), read in the water", &title_args),
+                    hint: separate
+                        .then(|| tr("Balance the cylinders; enter what each gauge reads")),
                     step: Some(g.step),
                 },
                 check(move |s, t| {
@@ -99,7 +92,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                         "Stage pressure for {0} ({1}), read in the water",
                         &[&d.name, &s.team.shown_stage_label(i)],
                     ),
-                    brief: None,
+                    hint: None,
                     step: None,
                 },
                 check(move |s, t| {
@@ -134,7 +127,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                     "Surface breathing rate (SAC) for {0}; leave empty for none",
                     &[&d.name],
                 ),
-                brief: None,
+                hint: None,
                 unit: format!("{}/min", u.volume_label()),
                 live: true,
                 step: None,
@@ -153,7 +146,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
                 false,
             ),
             title: tr("Planned depth for time to turn; leave empty for none"),
-            brief: None,
+            hint: None,
             unit: u.depth_label().to_string(),
             live: true,
             step: None,
@@ -167,7 +160,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
         EntryTarget::DiverName(i) => Field {
             buffer: KeypadBuffer::letters(&input.divers.get(i)?.name, 32),
             title: tr_with("Name for diver {0}", &[&(i + 1)]),
-            brief: None,
+            hint: None,
             unit: String::new(),
             live: true,
             step: None,
@@ -200,7 +193,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
         EntryTarget::LockerName => Field {
             buffer: KeypadBuffer::letters(&draft?.name, crate::storage::locker::MAX_SET_NAME_CHARS),
             title: tr("Name of the cylinder set"),
-            brief: None,
+            hint: None,
             unit: String::new(),
             live: false,
             step: None,
@@ -221,7 +214,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
         EntryTarget::LockerNote => Field {
             buffer: KeypadBuffer::letters(&draft?.note, crate::storage::locker::MAX_SET_NOTE_CHARS),
             title: tr("Note (serial, test date, valves…)"),
-            brief: None,
+            hint: None,
             unit: String::new(),
             live: false,
             step: None,
@@ -242,7 +235,7 @@ pub fn field(s: &Session, target: EntryTarget) -> Option<Field> {
         EntryTarget::FillPressure => Field {
             buffer: KeypadBuffer::digits(&vm::start_text(u, s.fill.pressure), false),
             title: tr("Pressure read at the fill station, cylinder still warm"),
-            brief: None,
+            hint: None,
             unit: u.pressure_label().to_string(),
             live: false,
             step: None,

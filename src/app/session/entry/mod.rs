@@ -51,9 +51,9 @@ pub struct Field {
     /// The keypad (digits or letters) with the value it opens with.
     pub buffer: KeypadBuffer,
     pub title: String,
-    /// The title without its hint, shown while a value is refused so the reason and the
-    /// Cancel and Done keys keep the room on a short screen.
-    pub brief: Option<String>,
+    /// How to read the value, shown in the message line while nothing is wrong (the
+    /// line keeps its room, so no key moves when a reason replaces the hint).
+    pub hint: Option<String>,
     pub unit: String,
     /// The value drives the plan as it is typed: applied on every usable key, and the
     /// team is saved on Done. Other fields are applied once, on Done.
@@ -100,12 +100,9 @@ impl Entry {
     pub fn title(&self) -> &str {
         &self.field.title
     }
-    /// The title to show: without its hint while a value is refused.
-    pub fn shown_title(&self) -> &str {
-        match &self.field.brief {
-            Some(b) if !self.reason.is_empty() => b,
-            _ => &self.field.title,
-        }
+    /// How to read the value, if the field says.
+    pub fn hint(&self) -> Option<&str> {
+        self.field.hint.as_deref()
     }
     pub fn unit(&self) -> &str {
         &self.field.unit

@@ -15,7 +15,7 @@ pub struct Reading {
     /// from the gauge.
     pub unread: bool,
     pub title: String,
-    pub brief: Option<String>,
+    pub hint: Option<String>,
     pub step: Option<f64>,
 }
 
@@ -33,7 +33,7 @@ pub fn reading_field(r: Reading, check: Check, apply: Apply, read_now: Apply) ->
             false,
         ),
         title: r.title,
-        brief: r.brief,
+        hint: r.hint,
         unit: r.gauge.label().to_string(),
         live: true,
         step: r.step,

@@ -38,7 +38,7 @@ fn size_field(
         } else {
             format!("{} ({unit})", vm::capitalised(caption))
         },
-        brief: None,
+        hint: None,
         unit: unit.to_string(),
         live: false,
         step: None,
@@ -128,7 +128,7 @@ pub fn mix_percent(s: &Session, helium: bool) -> Option<Field> {
     Some(Field {
         buffer: KeypadBuffer::digits(&value.to_string(), false),
         title: tr_with("Custom mix: {0} in %", &[&name]),
-        brief: None,
+        hint: None,
         unit: "%".to_string(),
         live: false,
         step: None,

@@ -90,7 +90,7 @@ fn temperature_field(
     Field {
         buffer: KeypadBuffer::digits(&vm::degrees(u, shown), false),
         title,
-        brief: None,
+        hint: None,
         unit: u.temperature_label().to_string(),
         live,
         step: None,
