@@ -2,13 +2,38 @@
 //! today, and what changing a gauge does to it.
 
 use crate::app::readings::{Readings, Source, StartStatus};
-use crate::plan::Gauge;
 use crate::plan::error::InputError;
 use crate::plan::round_down_to_step;
+use crate::plan::{Gauge, Supply, Warning};
 
 use super::TeamController;
 
 impl TeamController {
+    /// The plan's warnings that may be shown at `now`: one about a start's fill (above
+    /// the working pressure, an overfill, a low fill) only once that start was read,
+    /// since it would quote a number nobody read.
+    pub fn shown_warnings(&self, now: i64) -> Vec<&Warning> {
+        self.plan()
+            .warnings
+            .iter()
+            .filter(|w| {
+                let about = match w {
+                    Warning::AboveWorking { diver, supply, .. }
+                    | Warning::Overfill { diver, supply, .. }
+                    | Warning::LowFill { diver, supply, .. } => Some((*diver, *supply)),
+                    _ => None,
+                };
+                match about {
+                    Some((i, Supply::Main)) => self.start_status(i, now) != StartStatus::Missing,
+                    Some((i, Supply::Stage)) => {
+                        self.stage_status(i, now) != Some(StartStatus::Missing)
+                    }
+                    None => true,
+                }
+            })
+            .collect()
+    }
+
     /// Whether each start is a reading taken today.
     pub fn readings(&self) -> &Readings {
         &self.readings

@@ -119,3 +119,26 @@ fn a_saved_team_with_old_preset_names_loads_with_the_names_of_now() {
     assert_eq!(t.labels()[0], "Single aluminium 77.4 cu ft 3000 psi");
     assert_eq!(t.labels()[1], "My own");
 }
+
+#[test]
+fn a_fill_warning_waits_for_its_start_to_be_read() {
+    let mut t = demo();
+    let now = 1_796_342_280;
+    // Ines's twins are 232 bar sets: 250 bar is above their working pressure.
+    t.set_start(0, Pressure::from_bar(250.0)).unwrap();
+    let about_ines = |t: &TeamController| {
+        t.shown_warnings(now)
+            .iter()
+            .any(|w| matches!(w, crate::plan::Warning::AboveWorking { diver: 0, .. }))
+    };
+    assert!(
+        t.plan()
+            .warnings
+            .iter()
+            .any(|w| matches!(w, crate::plan::Warning::AboveWorking { diver: 0, .. })),
+        "the plan has the warning"
+    );
+    assert!(!about_ines(&t), "not shown while the start is unread");
+    t.mark_read(0, now);
+    assert!(about_ines(&t), "shown once read");
+}

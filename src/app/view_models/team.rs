@@ -91,8 +91,8 @@ pub struct DiverCardVm {
 pub fn diver_cards(s: &Session) -> Vec<DiverCardVm> {
     let input = s.team.input();
     let u = input.units;
-    let warnings = &s.team.plan().warnings;
     let now = s.now();
+    let warnings = s.team.shown_warnings(now);
     input
         .divers
         .iter()

@@ -291,7 +291,12 @@ pub fn first_text(s: &Session) -> String {
 
 /// The plan's warnings, one sentence each.
 pub fn warnings(s: &Session) -> Vec<String> {
-    s.team.plan().warning_texts()
+    let names = s.team.plan().names();
+    s.team
+        .shown_warnings(s.now())
+        .into_iter()
+        .map(|w| w.describe(&names))
+        .collect()
 }
 
 /// The team's default pressure unit: "bar" or "psi".
