@@ -4,7 +4,10 @@ use std::collections::{HashMap, HashSet};
 use std::path::{Path, PathBuf};
 use std::time::SystemTime;
 
-use super::atomic::{ReadOutcome, WithinLimits, read_json, set_aside, write_json};
+use super::atomic::{
+    Inspected, ReadOutcome, WithinLimits, inspect_json, kept_aside, read_json,
+    remove_temp_files_before, set_aside, write_json, write_target,
+};
 use super::lock::{LOCK_WAIT, lock_beside};
 use super::locker::{LOCKER_SCHEMA, LockerFile};
 use super::settings::{FoundSettings, SETTINGS_SCHEMA, Settings};
@@ -26,6 +29,44 @@ pub struct LoadReport {
     /// Some settings were reset to their defaults (the file as found was kept aside):
     /// the settings should be saved again.
     pub settings_repaired: bool,
+}
+
+/// What state the locker file was found in.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum LockerState {
+    /// No locker file yet.
+    Missing,
+    /// Read (and repaired if it needed it).
+    Read,
+    /// Its content was not usable: it was moved aside this time (the message says where).
+    SetAside,
+    /// It could not be read for another reason (permissions, I/O, not a regular file) and
+    /// is left where it is; it is never written over.
+    Unreadable,
+}
+
+/// The locker as a command found it.
+#[derive(Debug)]
+pub struct LockerRead {
+    pub locker: LockerFile,
+    pub state: LockerState,
+    /// Lines to show (set aside, left in place, repaired), for `load_locker`.
+    pub messages: Vec<String>,
+}
+
+impl LockerRead {
+    fn new(locker: LockerFile, state: LockerState) -> Self {
+        LockerRead {
+            locker,
+            state,
+            messages: Vec::new(),
+        }
+    }
+
+    /// Whether the locker could not be used this time (set aside or left in place).
+    pub fn unreadable(&self) -> bool {
+        matches!(self.state, LockerState::SetAside | LockerState::Unreadable)
+    }
 }
 
 /// Why a locker change was not made.
@@ -79,7 +120,7 @@ impl Store {
 
     pub fn load(&mut self) -> Loaded {
         let mut report = LoadReport::default();
-        let (locker, _) = self.read_locker(&mut report.messages);
+        let locker = self.read_locker(&mut report.messages).locker;
         let settings_path = self.dir.join(SETTINGS_FILE);
         report.first_launch = !settings_path.exists();
         let settings = self
@@ -100,39 +141,131 @@ impl Store {
 
     /// Load only the locker (the command line's `locker` commands). An unreadable locker
     /// is set aside as in `load`; the messages say where it went.
-    pub fn load_locker(&mut self) -> (LockerFile, Vec<String>) {
+    pub fn load_locker(&mut self) -> LockerRead {
         let mut messages = Vec::new();
-        let (locker, _) = self.read_locker(&mut messages);
+        let mut found = self.read_locker(&mut messages);
+        found.messages = messages;
         self.remember(LOCKER_FILE);
-        (locker, messages)
+        found
     }
 
-    /// The locker as found (set aside if unreadable, `messages` saying where), repaired
-    /// (`LockerFile::repair`). A repair of the ids is written back at once, so that it is
-    /// said once.
-    fn read_locker(&mut self, messages: &mut Vec<String>) -> (LockerFile, bool) {
-        let mut report = LoadReport::default();
-        let found: Option<LockerFile> =
-            self.take(LOCKER_FILE, LOCKER_SCHEMA, "cylinder locker", &mut report);
-        let read = found.is_some();
-        let mut locker = found.unwrap_or_default();
-        messages.append(&mut report.messages);
-        if let Some(said) = locker.repair() {
-            messages.push(said);
+    /// The locker as found. Reading changes nothing on disk unless the file needs it: an
+    /// unusable file is set aside, or repeated ids are renumbered (`LockerFile::repair`)
+    /// and written back, so that it is said once. Either is done only under the lock,
+    /// after reading the file again (another writer may have changed it meanwhile); if
+    /// the lock cannot be had, nothing is written and the repaired copy is only used.
+    fn read_locker(&mut self, messages: &mut Vec<String>) -> LockerRead {
+        let path = self.dir.join(LOCKER_FILE);
+        match inspect_json::<LockerFile>(&path, LOCKER_SCHEMA) {
+            Inspected::Missing => {
+                self.blocked.remove(LOCKER_FILE);
+                return LockerRead::new(LockerFile::default(), LockerState::Missing);
+            }
+            Inspected::Unavailable(reason) => {
+                return self.left_in_place(messages, &path, &reason);
+            }
+            Inspected::Loaded(mut locker) => {
+                if locker.repair().is_empty() {
+                    self.blocked.remove(LOCKER_FILE);
+                    return LockerRead::new(locker, LockerState::Read);
+                }
+            }
+            Inspected::BadContent(_) => {}
+        }
+        let lock = match self.lock_locker() {
+            Ok(lock) => lock,
+            Err(e) => {
+                // Not repaired on disk now: the next command that gets the lock does it.
+                messages.push(e);
+                return match inspect_json::<LockerFile>(&path, LOCKER_SCHEMA) {
+                    Inspected::Loaded(mut locker) => {
+                        locker.repair();
+                        LockerRead::new(locker, LockerState::Read)
+                    }
+                    _ => {
+                        self.blocked.insert(LOCKER_FILE);
+                        LockerRead::new(LockerFile::default(), LockerState::Unreadable)
+                    }
+                };
+            }
+        };
+        let found = self.read_locker_locked(messages);
+        drop(lock);
+        found
+    }
+
+    /// `read_locker` for a caller that holds the lock: sets aside and repairs at once.
+    fn read_locker_locked(&mut self, messages: &mut Vec<String>) -> LockerRead {
+        let path = self.dir.join(LOCKER_FILE);
+        let mut locker = match read_json::<LockerFile>(&path, LOCKER_SCHEMA) {
+            ReadOutcome::Missing => {
+                self.blocked.remove(LOCKER_FILE);
+                return LockerRead::new(LockerFile::default(), LockerState::Missing);
+            }
+            ReadOutcome::LeftInPlace { reason } => {
+                return self.left_in_place(messages, &path, &reason);
+            }
+            ReadOutcome::SetAside { kept_as, reason } => {
+                self.blocked.remove(LOCKER_FILE);
+                messages.push(unreadable(
+                    "cylinder locker",
+                    &reason,
+                    &kept_as.display(),
+                    false,
+                ));
+                return LockerRead::new(LockerFile::default(), LockerState::SetAside);
+            }
+            ReadOutcome::Loaded(locker) => locker,
+        };
+        self.blocked.remove(LOCKER_FILE);
+        let said = locker.repair();
+        if !said.is_empty() {
+            messages.extend(said);
             if let Err(e) = self.save(LOCKER_FILE, &locker) {
                 messages.push(e);
             }
         }
-        (locker, read)
+        LockerRead::new(locker, LockerState::Read)
+    }
+
+    /// A locker that cannot be read for a reason other than its content: never written.
+    fn left_in_place(
+        &mut self,
+        messages: &mut Vec<String>,
+        path: &Path,
+        reason: &str,
+    ) -> LockerRead {
+        self.blocked.insert(LOCKER_FILE);
+        messages.push(unreadable("cylinder locker", reason, &path.display(), true));
+        LockerRead::new(LockerFile::default(), LockerState::Unreadable)
+    }
+
+    /// Take the locker's lock; stale temp files of killed writers are removed under it.
+    fn lock_locker(&self) -> Result<super::lock::FileLock, String> {
+        let path = self.dir.join(LOCKER_FILE);
+        let lock = lock_beside(&path, LOCK_WAIT)
+            .map_err(|e| format!("could not save {LOCKER_FILE}: {e}"))?;
+        let since = SystemTime::now();
+        if let Ok(target) = write_target(&path)
+            && let (Some(dir), Some(name)) = (target.parent(), target.file_name())
+        {
+            remove_temp_files_before(dir, &name.to_string_lossy(), since);
+        }
+        Ok(lock)
     }
 
     /// The locker again (the app, when another program changed it): the locker, whether
     /// the file was read (not missing, not set aside), and lines to show.
     pub fn reload_locker(&mut self) -> (LockerFile, bool, Vec<String>) {
         let mut messages = Vec::new();
-        let (locker, read) = self.read_locker(&mut messages);
+        let found = self.read_locker(&mut messages);
         self.remember(LOCKER_FILE);
-        (locker, read, messages)
+        (found.locker, found.state == LockerState::Read, messages)
+    }
+
+    /// Lockers set aside as unreadable, in this store's folder (oldest name first).
+    pub fn kept_aside_lockers(&self) -> Vec<PathBuf> {
+        kept_aside(&self.dir, LOCKER_FILE)
     }
 
     /// Whether another program changed the locker since this store last read or wrote it.
@@ -144,6 +277,8 @@ impl Store {
     /// again, apply `change` to what was read, and write it atomically if it changed.
     /// Lines to show (a file set aside, ids repaired) go to `messages`, even on error.
     /// `change` is also told whether the file was read (not missing, not set aside).
+    /// A locker that cannot be read for a reason other than its content (permissions,
+    /// an I/O error, not a regular file) is not changed at all.
     /// Returns the locker as written (or as found, if `change` left it alone).
     pub fn update_locker<R>(
         &mut self,
@@ -151,9 +286,15 @@ impl Store {
         change: impl FnOnce(&mut LockerFile, bool) -> Result<R, InputError>,
     ) -> Result<(R, LockerFile), LockerError> {
         let path = self.dir.join(LOCKER_FILE);
-        let _lock = lock_beside(&path, LOCK_WAIT)
-            .map_err(|e| LockerError::Write(format!("could not save {LOCKER_FILE}: {e}")))?;
-        let (found, read) = self.read_locker(messages);
+        let _lock = self.lock_locker().map_err(LockerError::Write)?;
+        let found = self.read_locker_locked(messages);
+        if found.state == LockerState::Unreadable {
+            return Err(LockerError::Write(format!(
+                "{LOCKER_FILE} was not changed: it could not be read, and is never written over"
+            )));
+        }
+        let read = found.state == LockerState::Read;
+        let found = found.locker;
         let mut locker = found.clone();
         let r = change(&mut locker, read).map_err(LockerError::Input)?;
         if locker != found || !path.exists() {
@@ -188,13 +329,17 @@ impl Store {
                 Some(v)
             }
             ReadOutcome::SetAside { kept_as, reason } => {
-                let untouched = kept_as == path;
-                if untouched {
-                    self.blocked.insert(name);
-                }
+                self.blocked.remove(name);
                 report
                     .messages
-                    .push(unreadable(what, &reason, &kept_as.display(), untouched));
+                    .push(unreadable(what, &reason, &kept_as.display(), false));
+                None
+            }
+            ReadOutcome::LeftInPlace { reason } => {
+                self.blocked.insert(name);
+                report
+                    .messages
+                    .push(unreadable(what, &reason, &path.display(), true));
                 None
             }
         }
@@ -209,7 +354,7 @@ impl Store {
         }
         let path = self.dir.join(SETTINGS_FILE);
         let kept = match set_aside::<()>(&path, String::new()) {
-            ReadOutcome::SetAside { kept_as, .. } if kept_as != path => {
+            ReadOutcome::SetAside { kept_as, .. } => {
                 report.settings_repaired = true;
                 tr_with(
                     "Some settings could not be used and went back to their defaults ({0}). The other settings were kept; the file as it was is kept as {1}.",
@@ -244,7 +389,7 @@ impl Store {
     pub fn set_aside_team(&mut self, reason: &str) -> Option<PathBuf> {
         let path = self.dir.join(TEAM_FILE);
         match set_aside::<()>(&path, reason.to_string()) {
-            ReadOutcome::SetAside { kept_as, .. } if kept_as != path => Some(kept_as),
+            ReadOutcome::SetAside { kept_as, .. } => Some(kept_as),
             _ => {
                 self.blocked.insert(TEAM_FILE);
                 None
@@ -265,7 +410,9 @@ impl Store {
                 "{name} is not saved: the unreadable file is kept in its place"
             ));
         }
-        write_json(&self.dir.join(name), value)
+        // The data folder is made on the first save (a file in its place is an error).
+        std::fs::create_dir_all(&self.dir)
+            .and_then(|()| write_json(&self.dir.join(name), value))
             .map_err(|e| format!("could not save {name}: {e}"))?;
         self.remember(name);
         Ok(())
