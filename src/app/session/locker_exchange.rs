@@ -162,11 +162,7 @@ fn json_files(dir: &Path) -> Vec<(PathBuf, bool)> {
     let mut found: Vec<(PathBuf, bool)> = std::fs::read_dir(dir)
         .map(|rd| {
             rd.filter_map(|e| e.ok())
-                .filter(|e| {
-                    e.path()
-                        .extension()
-                        .is_some_and(|x| x.eq_ignore_ascii_case("json"))
-                })
+                .filter(|e| crate::storage::exchange::is_json_file_name(&e.path()))
                 .filter_map(|e| {
                     let t = e.file_type().ok()?;
                     (t.is_file() || t.is_symlink()).then(|| (e.path(), t.is_symlink()))
