@@ -13,6 +13,7 @@ fn cli(dir: &Path, action: LockerAction) -> Result<String, String> {
     run(&action, dir, &mut notes).map_err(|e| match e {
         CliError::Input(e) => e.to_string(),
         CliError::Write(e) => e,
+        CliError::Unreadable(_) => "the locker could not be read".to_string(),
     })
 }
 
@@ -41,7 +42,7 @@ fn app_add(s: &mut Session, name: &str, litres: f64) {
 }
 
 fn names_on_disk(dir: &Path) -> Vec<String> {
-    let (l, _) = Store::new(dir).load_locker();
+    let l = Store::new(dir).load_locker().locker;
     let mut v: Vec<String> = l.entries.iter().map(|e| e.name.clone()).collect();
     v.sort();
     v
@@ -94,7 +95,7 @@ fn the_app_and_the_command_line_change_the_locker_in_turn_and_lose_nothing() {
         names_on_disk(dir),
         ["App two", "Cli one", "Cli three", "Cli two"]
     );
-    let (l, _) = Store::new(dir).load_locker();
+    let l = Store::new(dir).load_locker().locker;
     assert_eq!(l.mine().map(|e| e.name.as_str()), Some("App two"));
 
     // Focus or resume re-reads what the command line did.

@@ -516,7 +516,8 @@ fn check_locker_bytes(bytes: Vec<u8>) -> Result<bool, TestCaseError> {
     let path = dir.path().join("locker.json");
     std::fs::write(&path, &bytes).unwrap();
     let imported = read_locker_file(&path);
-    let (locker, messages) = Store::new(dir.path()).load_locker();
+    let found = Store::new(dir.path()).load_locker();
+    let (locker, messages) = (found.locker, found.messages);
     prop_assert!(locker.entries.len() <= MAX_LOCKER_SETS);
     let mut ids: Vec<u64> = locker.entries.iter().map(|e| e.id).collect();
     ids.sort();

@@ -503,3 +503,97 @@ fn chart_needs_two_divers() {
         );
     }
 }
+
+/// Characters that draw nothing or something private are refused in every name, and a
+/// name must show something: "Bram" and "Bra<zero-width space>m" were two rows both
+/// reading "Bram". Names compare case-blind, so "Bram" and "bram" are one name.
+#[test]
+fn invisible_characters_and_case_twins_are_refused() {
+    let d = tempfile::tempdir().unwrap();
+    let dir = d.path();
+    let team = dir.join("t.json");
+    let plan_with = |names: [&str; 2]| {
+        let mut v: serde_json::Value = serde_json::from_str(&demo()).unwrap();
+        v["divers"][0]["name"] = serde_json::json!(names[0]);
+        v["divers"][1]["name"] = serde_json::json!(names[1]);
+        std::fs::write(&team, v.to_string()).unwrap();
+        turnsheet(dir, &["plan", team.to_str().unwrap()])
+    };
+    for u in [
+        0x200B, 0x00AD, 0xFEFF, 0x2061, 0x034F, 0x180E, 0xE0001, 0xE0041, 0xF0000, 0x3164, 0x2800,
+        0xFE0F,
+    ] {
+        let c = char::from_u32(u).unwrap();
+        let code = format!("U+{u:04X}");
+        let r = plan_with(["Bram", &format!("Bra{c}m")]);
+        assert_eq!(r.code, 2, "{code}: {}", r.out);
+        assert!(
+            r.err.contains("divers[1].name") && r.err.contains(&code),
+            "{code}: {}",
+            r.err
+        );
+        let r = turnsheet(dir, &["locker", "add", &format!("Twin{c}"), "2x12L@232bar"]);
+        assert_eq!(r.code, 2, "{code}: {}", r.out);
+        assert!(r.err.contains("NAME") && r.err.contains(&code), "{}", r.err);
+    }
+    let r = plan_with(["Bram", "bram"]);
+    assert_eq!(r.code, 2, "{}", r.out);
+    assert!(
+        r.err.contains("divers[1].name") && r.err.contains("already called"),
+        "{}",
+        r.err
+    );
+    let r = plan_with(["Bram", "\u{301}"]);
+    assert_eq!(r.code, 2, "{}", r.out);
+    assert!(r.err.contains("visible character"), "{}", r.err);
+    let r = turnsheet(dir, &["locker", "add", "\u{3164}", "2x12L@232bar"]);
+    assert_eq!(r.code, 2, "{}", r.out);
+}
+
+/// `-o` never makes a folder, prints the path with control characters escaped, and
+/// writes through a symbolic link (the link is kept).
+#[cfg(unix)]
+#[test]
+fn output_paths_make_no_folder_print_no_escape_and_follow_links() {
+    let d = tempfile::tempdir().unwrap();
+    let dir = d.path();
+    let team = dir.join("t.json");
+    std::fs::write(&team, demo()).unwrap();
+    let missing = dir.join("missing");
+    let through = format!("{}/../card.svg", missing.display());
+    let r = turnsheet(dir, &["card", team.to_str().unwrap(), "-o", &through]);
+    assert_eq!(r.code, 3, "{}", r.out);
+    assert!(r.err.contains("does not exist"), "{}", r.err);
+    assert!(!missing.exists(), "no folder is made");
+    assert!(!dir.join("card.svg").exists());
+
+    let odd = dir.join("a\u{1b}[2Jb.svg");
+    let r = turnsheet(
+        dir,
+        &["card", team.to_str().unwrap(), "-o", odd.to_str().unwrap()],
+    );
+    assert_eq!(r.code, 0, "{}", r.err);
+    assert!(!r.out.contains('\u{1b}'), "{:?}", r.out);
+    assert!(r.out.contains("a\\u{001b}[2Jb.svg"), "{}", r.out);
+    assert!(odd.exists());
+
+    let real = dir.join("real.svg");
+    std::fs::write(&real, "old").unwrap();
+    let link = dir.join("link.svg");
+    std::os::unix::fs::symlink(&real, &link).unwrap();
+    let r = turnsheet(
+        dir,
+        &["card", team.to_str().unwrap(), "-o", link.to_str().unwrap()],
+    );
+    assert_eq!(r.code, 0, "{}", r.err);
+    assert!(
+        std::fs::symlink_metadata(&link)
+            .unwrap()
+            .file_type()
+            .is_symlink()
+    );
+    assert!(
+        std::fs::read_to_string(&real).unwrap().starts_with("<?xml")
+            || std::fs::read_to_string(&real).unwrap().contains("<svg")
+    );
+}

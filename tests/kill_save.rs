@@ -112,6 +112,7 @@ fn read_locker(dir: &Path) -> LockerFile {
                 kept_as.display()
             )
         }
+        ReadOutcome::LeftInPlace { reason } => panic!("the locker could not be read ({reason})"),
     }
 }
 

@@ -302,7 +302,8 @@ fn bad_import_files_are_refused_and_change_nothing() {
 }
 
 /// Unreadable lockers in the data directory: moved aside byte-identical under a name
-/// that says so, the command says where, `list` exits 0 and `add` then works.
+/// that says so, the command says where, `list` prints the empty locker and exits 4 (the
+/// locker could not be read this time), and `add` then works.
 #[test]
 fn an_unreadable_locker_is_kept_aside_and_the_command_carries_on() {
     let long_name = format!(
@@ -332,7 +333,7 @@ fn an_unreadable_locker_is_kept_aside_and_the_command_carries_on() {
         let file = d.path().join("locker.json");
         std::fs::write(&file, &bytes).unwrap();
         let r = locker(d.path(), &["list"]);
-        assert_eq!(r.code, 0, "{what}: {}", r.err);
+        assert_eq!(r.code, 4, "{what}: {}", r.err);
         assert!(r.out.contains("The locker is empty"), "{what}: {}", r.out);
         let kept = turnsheet::storage::atomic::kept_aside(d.path(), "locker.json");
         assert_eq!(kept.len(), 1, "{what}");
@@ -371,4 +372,247 @@ fn a_locker_that_cannot_be_saved_exits_3_and_says_why() {
     assert_eq!(r.code, 3, "{}", r.err);
     assert!(r.err.contains("could not save locker.json"), "{}", r.err);
     assert_eq!(r.err.lines().count(), 1);
+}
+
+/// A locker of `n` sets, the last two sharing an id (so that reading it repairs it).
+fn locker_with_repeated_id(n: usize) -> String {
+    let set = r#""cylinders": {"count": 2, "water_l": 12, "working_bar": 232}"#;
+    let entries: Vec<String> = (0..n)
+        .map(|i| {
+            let id = if i + 1 == n { i } else { i + 1 };
+            format!(r#"{{"id": {id}, "name": "Set {i}", {set}}}"#)
+        })
+        .collect();
+    format!(r#"{{"schema": 1, "entries": [{}]}}"#, entries.join(", "))
+}
+
+/// `list` repairs a locker with a repeated id while `add` runs: the repair is written
+/// only under the lock, on the locker as it is then, so no add is lost. Each round
+/// starts from the unrepaired file and runs eight `list`s and two `add`s at once (before
+/// the fix, about half of the adds were lost this way, each reported as added).
+#[test]
+fn list_and_add_at_once_lose_no_add() {
+    let d = tempfile::tempdir().unwrap();
+    let dir = d.path();
+    let rounds = 10;
+    let mut lost = Vec::new();
+    for round in 0..rounds {
+        std::fs::write(dir.join("locker.json"), locker_with_repeated_id(60)).unwrap();
+        let names = [format!("Round {round} a"), format!("Round {round} b")];
+        let said = std::thread::scope(|scope| {
+            let listers: Vec<_> = (0..8)
+                .map(|_| scope.spawn(|| locker(dir, &["list"])))
+                .collect();
+            let adders: Vec<_> = names
+                .iter()
+                .map(|n| scope.spawn(move || locker(dir, &["add", n, "2x7L@232bar"])))
+                .collect();
+            let mut said = 0;
+            for l in listers {
+                let l = l.join().unwrap();
+                assert_eq!(l.code, 0, "{}", l.err);
+                said += usize::from(l.err.contains("numbered again"));
+            }
+            for a in adders {
+                let a = a.join().unwrap();
+                assert_eq!(a.code, 0, "{}", a.err);
+                assert!(a.out.contains("Added"), "{}", a.out);
+                said += usize::from(a.err.contains("numbered again"));
+            }
+            said
+        });
+        assert_eq!(said, 1, "round {round}: the repair is said once");
+        let now = file_names(dir);
+        lost.extend(names.iter().filter(|n| !now.contains(n)).cloned());
+        assert!(now.len() >= 60, "round {round}: {now:?}");
+    }
+    assert!(lost.is_empty(), "adds lost: {lost:?}");
+}
+
+/// The names in the locker file itself (no command run).
+fn file_names(dir: &Path) -> Vec<String> {
+    let v: serde_json::Value =
+        serde_json::from_str(&std::fs::read_to_string(dir.join("locker.json")).unwrap()).unwrap();
+    v["entries"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .map(|e| e["name"].as_str().unwrap().to_string())
+        .collect()
+}
+
+/// Listing a locker that needs nothing writes nothing (the file is not even replaced).
+#[test]
+fn a_list_that_repairs_nothing_writes_nothing() {
+    let d = tempfile::tempdir().unwrap();
+    let r = locker(d.path(), &["add", "Twin 12s", "2x12L@232bar"]);
+    assert_eq!(r.code, 0, "{}", r.err);
+    let file = d.path().join("locker.json");
+    let before = std::fs::metadata(&file).unwrap();
+    std::thread::sleep(std::time::Duration::from_millis(20));
+    let r = locker(d.path(), &["list"]);
+    assert_eq!((r.code, r.err.as_str()), (0, ""));
+    let after = std::fs::metadata(&file).unwrap();
+    assert_eq!(before.modified().unwrap(), after.modified().unwrap());
+    #[cfg(unix)]
+    {
+        use std::os::unix::fs::MetadataExt;
+        assert_eq!(before.ino(), after.ino(), "not replaced");
+    }
+}
+
+/// Ids that are not whole numbers in range, and two sets marked mine: repaired and said
+/// once, never a locker set aside.
+#[test]
+fn bad_ids_and_two_mine_sets_are_repaired_and_said_once() {
+    let set = r#""cylinders": {"count": 2, "water_l": 12, "working_bar": 232}"#;
+    for bad in ["18446744073709551616", "-1", "1.5", "\"7\""] {
+        let d = tempfile::tempdir().unwrap();
+        std::fs::write(
+            d.path().join("locker.json"),
+            format!(
+                r#"{{"schema": 1, "entries": [{{"id": {bad}, "name": "A", {set}, "mine": true}}, {{"id": 9, "name": "B", {set}, "mine": true}}, {{"id": 4, "name": "C", {set}}}]}}"#
+            ),
+        )
+        .unwrap();
+        let r = locker(d.path(), &["list", "--json"]);
+        assert_eq!(r.code, 0, "{bad}: {}", r.err);
+        assert!(r.err.contains("numbered again"), "{bad}: {}", r.err);
+        assert!(r.err.contains("2 sets marked as yours"), "{bad}: {}", r.err);
+        assert_eq!(r.err.lines().count(), 2, "{bad}: {}", r.err);
+        assert!(
+            turnsheet::storage::atomic::kept_aside(d.path(), "locker.json").is_empty(),
+            "{bad}: never set aside"
+        );
+        let v: serde_json::Value = serde_json::from_str(&r.out).unwrap();
+        let mine: Vec<bool> = v["sets"]
+            .as_array()
+            .unwrap()
+            .iter()
+            .map(|s| s["mine"].as_bool().unwrap())
+            .collect();
+        assert_eq!(
+            mine,
+            [true, false, false],
+            "{bad}: the lowest id stays mine"
+        );
+        let r = locker(d.path(), &["list"]);
+        assert_eq!((r.code, r.err.as_str()), (0, ""), "{bad}: said once");
+    }
+}
+
+/// A locker that cannot be read for a reason other than its content (here a symbolic
+/// link loop: an I/O error even for root) is left where it is; `list` exits 4 and `add`
+/// refuses to write a fresh locker over it.
+#[cfg(unix)]
+#[test]
+fn a_locker_that_cannot_be_opened_is_left_alone_and_never_written() {
+    let d = tempfile::tempdir().unwrap();
+    let file = d.path().join("locker.json");
+    std::os::unix::fs::symlink("locker.json", &file).unwrap();
+    let r = locker(d.path(), &["list"]);
+    assert_eq!(r.code, 4, "{}", r.err);
+    assert!(r.err.contains("left untouched"), "{}", r.err);
+    let r = locker(d.path(), &["add", "Twin 12s", "2x12L@232bar"]);
+    assert_eq!(r.code, 3, "{}", r.err);
+    assert!(r.err.contains("was not changed"), "{}", r.err);
+    assert!(
+        std::fs::symlink_metadata(&file)
+            .unwrap()
+            .file_type()
+            .is_symlink(),
+        "the link is still there"
+    );
+    assert!(turnsheet::storage::atomic::kept_aside(d.path(), "locker.json").is_empty());
+
+    // A data directory that is a file is an error, not an empty locker.
+    let not_a_dir = d.path().join("data");
+    std::fs::write(&not_a_dir, "x").unwrap();
+    let r = locker(&not_a_dir, &["list"]);
+    assert_eq!(r.code, 4, "{}", r.err);
+    assert!(r.err.contains("is a file, not a folder"), "{}", r.err);
+    assert_eq!(std::fs::read_to_string(&not_a_dir).unwrap(), "x");
+}
+
+/// After a locker was set aside, every locker command says so until it is dealt with;
+/// `export` never writes an unreadable or empty locker over a file.
+#[test]
+fn a_set_aside_locker_is_mentioned_and_export_keeps_a_good_backup() {
+    let d = tempfile::tempdir().unwrap();
+    let dir = d.path();
+    assert_eq!(locker(dir, &["add", "Twin 12s", "2x12L@232bar"]).code, 0);
+    let backup = dir.join("backup.json");
+    let r = locker(dir, &["export", backup.to_str().unwrap()]);
+    assert_eq!(r.code, 0, "{}", r.err);
+    let good = std::fs::read(&backup).unwrap();
+
+    std::fs::write(dir.join("locker.json"), "garbage").unwrap();
+    let r = locker(dir, &["export", "--force", backup.to_str().unwrap()]);
+    assert_eq!(r.code, 4, "{}", r.err);
+    assert!(r.err.contains("nothing was exported"), "{}", r.err);
+    assert_eq!(std::fs::read(&backup).unwrap(), good, "the backup is kept");
+
+    // The locker is empty now: an empty export never replaces a file, even with --force.
+    let r = locker(dir, &["export", "--force", backup.to_str().unwrap()]);
+    assert_eq!(r.code, 2, "{}", r.err);
+    assert!(r.err.contains("the locker is empty"), "{}", r.err);
+    assert_eq!(std::fs::read(&backup).unwrap(), good, "the backup is kept");
+
+    // Every locker command mentions the file set aside, in one line.
+    for args in [vec!["list"], vec!["add", "Pony", "1x3L@200bar"]] {
+        let r = locker(dir, &args);
+        assert_eq!(r.code, 0, "{args:?}: {}", r.err);
+        assert_eq!(r.err.lines().count(), 1, "{args:?}: {}", r.err);
+        assert!(
+            r.err.contains("set aside as unreadable") && r.err.contains("locker.json.unreadable-"),
+            "{args:?}: {}",
+            r.err
+        );
+    }
+}
+
+/// A write keeps the old file's permissions, writes through a symbolic link (the link
+/// stays), and removes temp files left by a killed writer.
+#[cfg(unix)]
+#[test]
+fn writes_keep_the_mode_follow_the_link_and_clean_up() {
+    use std::os::unix::fs::PermissionsExt;
+    let d = tempfile::tempdir().unwrap();
+    let dir = d.path();
+    assert_eq!(locker(dir, &["add", "A", "2x12L@232bar"]).code, 0);
+    let file = dir.join("locker.json");
+    std::fs::set_permissions(&file, std::fs::Permissions::from_mode(0o600)).unwrap();
+    let stale = dir.join(".locker.json.999999-1-0.tmp");
+    std::fs::write(&stale, "half a locker").unwrap();
+    assert_eq!(locker(dir, &["add", "B", "2x12L@232bar"]).code, 0);
+    let mode = std::fs::metadata(&file).unwrap().permissions().mode() & 0o777;
+    assert_eq!(mode, 0o600, "the mode is kept");
+    assert!(
+        !stale.exists(),
+        "a temp file older than the lock is removed"
+    );
+
+    // locker.json as a link into another folder: the target is written, the link kept.
+    let elsewhere = dir.join("synced");
+    std::fs::create_dir(&elsewhere).unwrap();
+    let target = elsewhere.join("my-locker.json");
+    std::fs::rename(&file, &target).unwrap();
+    std::os::unix::fs::symlink(&target, &file).unwrap();
+    let r = locker(dir, &["add", "C", "2x12L@232bar"]);
+    assert_eq!(r.code, 0, "{}", r.err);
+    assert!(
+        std::fs::symlink_metadata(&file)
+            .unwrap()
+            .file_type()
+            .is_symlink()
+    );
+    let v: serde_json::Value =
+        serde_json::from_str(&std::fs::read_to_string(&target).unwrap()).unwrap();
+    assert_eq!(
+        v["entries"].as_array().unwrap().len(),
+        3,
+        "written through the link"
+    );
+    let mode = std::fs::metadata(&target).unwrap().permissions().mode() & 0o777;
+    assert_eq!(mode, 0o600);
 }

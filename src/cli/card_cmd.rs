@@ -96,7 +96,7 @@ pub fn run(args: &CardArgs) -> Result<String, CliError> {
         None => Ok(svg),
         Some(path) => {
             write(path, &svg)?;
-            Ok(format!("card written to {}\n", path.display()))
+            Ok(format!("card written to {}\n", super::shown_path(path)))
         }
     }
 }
@@ -105,5 +105,5 @@ pub fn run(args: &CardArgs) -> Result<String, CliError> {
 /// the file that was there is untouched, and the message says so.
 pub fn write(path: &Path, text: &str) -> Result<(), CliError> {
     crate::storage::atomic::write_text(path, text)
-        .map_err(|e| CliError::Write(format!("cannot write {}: {e}", path.display())))
+        .map_err(|e| CliError::Write(format!("cannot write {}: {e}", super::shown_path(path))))
 }

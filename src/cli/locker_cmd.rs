@@ -17,8 +17,8 @@ use crate::storage::locker::{
 };
 use crate::storage::store::LOCKER_FILE;
 
-use super::CliError;
 use super::locker_files::{describe, locker_error};
+use super::{CliError, shown_path};
 
 #[derive(clap::Subcommand, Debug)]
 pub enum LockerAction {
@@ -117,12 +117,50 @@ pub fn run(
     notes: &mut Vec<String>,
 ) -> Result<String, CliError> {
     let mut store = Store::new(data_dir);
+    let result = act(action, &mut store, notes);
+    kept_aside_note(&store, notes);
+    result
+}
+
+/// One line while lockers set aside earlier are still there (those named in this run's
+/// lines are not repeated): their sets are not in the locker until someone looks.
+fn kept_aside_note(store: &Store, notes: &mut Vec<String>) {
+    let kept: Vec<_> = store
+        .kept_aside_lockers()
+        .into_iter()
+        .filter(|k| {
+            let name = k.file_name().unwrap_or_default().to_string_lossy();
+            !notes.iter().any(|n| n.contains(&*name))
+        })
+        .collect();
+    if let Some(newest) = kept.last() {
+        notes.push(format!(
+            "{} set aside as unreadable earlier {} still beside the locker (newest: {}); sets in {} are not in the locker: look at {}, then move or delete {}",
+            if kept.len() == 1 { "1 locker file".to_string() } else { format!("{} locker files", kept.len()) },
+            if kept.len() == 1 { "is" } else { "are" },
+            shown_path(newest),
+            if kept.len() == 1 { "it" } else { "them" },
+            if kept.len() == 1 { "it" } else { "them" },
+            if kept.len() == 1 { "it" } else { "them" },
+        ));
+    }
+}
+
+fn act(
+    action: &LockerAction,
+    store: &mut Store,
+    notes: &mut Vec<String>,
+) -> Result<String, CliError> {
     let path = store.path_of(LOCKER_FILE);
     match action {
         LockerAction::List { json } => {
-            let (locker, messages) = store.load_locker();
-            notes.extend(messages);
-            Ok(list(&locker, &path, *json))
+            let found = store.load_locker();
+            notes.extend(found.messages.iter().cloned());
+            let out = list(&found.locker, &path, *json);
+            if found.unreadable() {
+                return Err(CliError::Unreadable(out));
+            }
+            Ok(out)
         }
         LockerAction::Add {
             name,
@@ -138,17 +176,22 @@ pub fn run(
                 note,
                 mine: *mine,
             };
-            add(&mut store, notes, &path, &new)
+            add(store, notes, &path, &new)
         }
-        LockerAction::Remove { name } => remove(&mut store, notes, &path, name),
+        LockerAction::Remove { name } => remove(store, notes, &path, name),
         LockerAction::Export { file, force } => {
-            let (locker, messages) = store.load_locker();
-            notes.extend(messages);
-            super::locker_files::export(&locker, file, *force)
+            let found = store.load_locker();
+            notes.extend(found.messages.iter().cloned());
+            if found.unreadable() {
+                notes.push(format!(
+                    "nothing was exported: the locker could not be read; {} was not written",
+                    shown_path(file)
+                ));
+                return Err(CliError::Unreadable(String::new()));
+            }
+            super::locker_files::export(&found.locker, file, *force)
         }
-        LockerAction::Import { file } => {
-            super::locker_files::import(&mut store, notes, &path, file)
-        }
+        LockerAction::Import { file } => super::locker_files::import(store, notes, &path, file),
     }
 }
 
@@ -188,7 +231,7 @@ fn list(locker: &LockerFile, path: &Path, json: bool) -> String {
     if locker.entries.is_empty() {
         return format!(
             "The locker is empty ({}).\nAdd a set with: turnsheet locker add NAME {SPEC_FORM}\n",
-            path.display()
+            shown_path(path)
         );
     }
     let rows: Vec<(&LockerEntry, String)> = locker
@@ -207,7 +250,7 @@ fn list(locker: &LockerFile, path: &Path, json: bool) -> String {
     let mut s = format!(
         "{} in {}:\n",
         sets_word(locker.entries.len()),
-        path.display()
+        shown_path(path)
     );
     for (e, spec) in &rows {
         let mark = if e.mine { "*" } else { " " };
@@ -277,7 +320,7 @@ fn add(
     let mut s = format!(
         "Added '{name}' ({}) to {}; {} now.\n",
         format_cylinder_spec(&set),
-        path.display(),
+        shown_path(path),
         sets_word(count)
     );
     if new.mine {
@@ -301,7 +344,7 @@ fn remove(
         describe(&removed, i)
             .0
             .unwrap_or_else(|| "not a usable set".to_string()),
-        path.display(),
+        shown_path(path),
         sets_word(locker.entries.len())
     );
     if removed.mine {

@@ -9,14 +9,14 @@ use crate::storage::exchange::{export_locker, sets_word};
 use crate::storage::locker::{LockerEntry, LockerFile, read_locker_file};
 use crate::storage::store::LockerError;
 
-use super::CliError;
+use super::{CliError, shown_path};
 
 /// Write the locker to `file` (whole or not at all); an existing file only with `force`.
 pub fn export(locker: &LockerFile, file: &Path, force: bool) -> Result<String, CliError> {
     if file.is_dir() {
         return Err(InputError::new(
             "FILE",
-            format!("{} is a directory; give a file name", file.display()),
+            format!("{} is a directory; give a file name", shown_path(file)),
         )
         .into());
     }
@@ -25,7 +25,17 @@ pub fn export(locker: &LockerFile, file: &Path, force: bool) -> Result<String, C
             "FILE",
             format!(
                 "{} already exists; choose another name, or add --force to replace it",
-                file.display()
+                shown_path(file)
+            ),
+        )
+        .into());
+    }
+    if locker.entries.is_empty() && file.exists() {
+        return Err(InputError::new(
+            "FILE",
+            format!(
+                "the locker is empty; {} was not replaced (an empty export would only lose what it holds)",
+                shown_path(file)
             ),
         )
         .into());
@@ -34,7 +44,7 @@ pub fn export(locker: &LockerFile, file: &Path, force: bool) -> Result<String, C
     Ok(format!(
         "Exported {} to {}.\n",
         sets_word(locker.entries.len()),
-        file.display()
+        shown_path(file)
     ))
 }
 
@@ -53,7 +63,7 @@ pub fn import(
             Ok(report)
         })
         .map_err(locker_error)?;
-    let mut s = format!("Imported {} into {}:\n", file.display(), path.display());
+    let mut s = format!("Imported {} into {}:\n", shown_path(file), shown_path(path));
     for n in &report.added {
         let spec = merged
             .find_by_name(n)

@@ -1,7 +1,8 @@
 //! The command line: `plan` prints a team's turn pressures, `gas` a cylinder's contents,
 //! `chart` pairing charts, `locker` the app's cylinder sets.
 //! Exit codes: 0 ok, 2 bad input (the message names the field), 3 a file or the output
-//! could not be written (full disk, closed pipe, read-only directory). Never a panic.
+//! could not be written (full disk, closed pipe, read-only directory), 4 the locker could
+//! not be read (set aside, or left in place; the message says which). Never a panic.
 
 pub mod card_cmd;
 pub mod chart_cmd;
@@ -22,6 +23,8 @@ use crate::plan::error::InputError;
 pub const EXIT_BAD_INPUT: i32 = 2;
 /// Exit code when the output or a file could not be written.
 pub const EXIT_WRITE_FAILED: i32 = 3;
+/// Exit code when the locker could not be read this time (`locker list`, `locker export`).
+pub const EXIT_UNREADABLE: i32 = 4;
 
 /// Why a command failed.
 #[derive(Debug)]
@@ -30,6 +33,9 @@ pub enum CliError {
     Input(InputError),
     /// A file could not be written (the message says which and why).
     Write(String),
+    /// The locker could not be read (the lines on standard error say why and where it
+    /// went); the text is still printed to standard output.
+    Unreadable(String),
 }
 
 impl From<InputError> for CliError {
@@ -179,7 +185,30 @@ pub fn run(command: Command) -> i32 {
             say(&e);
             EXIT_WRITE_FAILED
         }
+        Err(CliError::Unreadable(text)) => {
+            if let Err(e) = write_stdout(&text) {
+                say(&format!("could not write the output: {e}"));
+            }
+            EXIT_UNREADABLE
+        }
     }
+}
+
+/// A path as printed to the terminal: control characters and the other characters refused
+/// in names (bidirectional controls, invisible characters) are written as `\u{…}`, so
+/// a file name can never drive the terminal or hide part of itself.
+pub fn shown_path(path: &std::path::Path) -> String {
+    path.display()
+        .to_string()
+        .chars()
+        .map(|c| {
+            if c.is_control() || crate::plan::text::refused_char(c).is_some() {
+                format!("\\u{{{:04x}}}", c as u32)
+            } else {
+                c.to_string()
+            }
+        })
+        .collect()
 }
 
 /// Write all of `text` to standard output and flush it; the error is returned, never a panic.

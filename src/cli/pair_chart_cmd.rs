@@ -76,8 +76,9 @@ fn set_of(field: &str, text: &str) -> Result<CylinderSet, InputError> {
         Ok(set) => Ok(set),
         Err(spec_error) => {
             let mut store = Store::new(crate::storage::data_dir::desktop_data_dir());
-            let (locker, set_aside) = store.load_locker();
-            set_aside.iter().for_each(|m| super::say(m));
+            let found = store.load_locker();
+            found.messages.iter().for_each(|m| super::say(m));
+            let locker = found.locker;
             match locker.find_by_name(text).first() {
                 Some(&k) => locker.entries[k].cylinders.to_set(field),
                 None => Err(InputError::new(
@@ -205,7 +206,7 @@ pub fn run(args: &PairArgs) -> Result<String, CliError> {
         None => Ok(text),
         Some(path) => {
             super::card_cmd::write(path, &text)?;
-            Ok(format!("chart written to {}\n", path.display()))
+            Ok(format!("chart written to {}\n", super::shown_path(path)))
         }
     }
 }

@@ -191,7 +191,7 @@ fn validate_diver(u: UnitSystem, g: Gauge, i: usize, d: &DiverInput) -> Result<(
             tr("a name of 1 to 24 characters is needed"),
         ));
     }
-    super::text::check_text(&format!("{f}.name"), name)?;
+    super::text::check_name(&format!("{f}.name"), name)?;
     validate_supply(u, g, &f, &d.cylinders, &d.mix, d.start)?;
     if let Some(st) = &d.stage {
         validate_supply(

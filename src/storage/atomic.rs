@@ -7,13 +7,14 @@
 
 use std::fs;
 use std::io::Write;
-use std::path::Path;
+use std::path::{Path, PathBuf};
 
 use serde::Serialize;
 
 pub use super::reading::{
-    MAX_FILE_BYTES, ReadOutcome, TextReadError, WithinLimits, check_envelope, human_bytes,
-    kept_aside, not_regular, one_line, open_regular, read_json, read_text, set_aside,
+    Inspected, MAX_FILE_BYTES, ReadOutcome, TextReadError, WithinLimits, check_envelope,
+    human_bytes, inspect_json, kept_aside, not_regular, one_line, open_regular, read_json,
+    read_text, set_aside,
 };
 
 /// Bytes written in one step.
@@ -56,15 +57,38 @@ pub fn write_text(path: &Path, text: &str) -> std::io::Result<()> {
     write_steps(path, text.as_bytes(), &mut |_| Ok(()))
 }
 
+/// Where a write to `path` goes: `path` itself, or the file a symbolic link at `path`
+/// points to (the link stays a link; a link to nothing is refused).
+pub fn write_target(path: &Path) -> std::io::Result<PathBuf> {
+    let is_link = fs::symlink_metadata(path).is_ok_and(|m| m.file_type().is_symlink());
+    if !is_link {
+        return Ok(path.to_path_buf());
+    }
+    fs::canonicalize(path).map_err(|e| {
+        let to = fs::read_link(path).map_or_else(|_| "?".to_string(), |t| t.display().to_string());
+        std::io::Error::new(
+            e.kind(),
+            format!(
+                "{} is a symbolic link to {to}, which cannot be reached ({e}); nothing was written",
+                path.display()
+            ),
+        )
+    })
+}
+
 /// The one writer. `before` is called before each step and may end the write there.
 /// A target that exists but is not a regular file (a folder, a FIFO, a device) is
-/// never replaced. The temp file's name is unique to the writer; one left behind by a
+/// never replaced; a symbolic link is written through (its target is replaced, the link
+/// kept); the folder must exist (none is created). The new file keeps the old one's
+/// permissions. The temp file's name is unique to the writer; one left behind by a
 /// killed writer is removed by a later write once it is ten minutes old.
 pub fn write_steps(
     path: &Path,
     bytes: &[u8],
     before: &mut dyn FnMut(WriteStep) -> Result<(), Interrupt>,
 ) -> std::io::Result<()> {
+    let target = write_target(path)?;
+    let path = target.as_path();
     if let Some(kind) = not_regular(path) {
         return Err(std::io::Error::other(format!(
             "{} is {kind}, not a regular file; it was not replaced",
@@ -82,16 +106,30 @@ pub fn write_steps(
         .unwrap_or(0);
     static WRITES: std::sync::atomic::AtomicU64 = std::sync::atomic::AtomicU64::new(0);
     let n = WRITES.fetch_add(1, std::sync::atomic::Ordering::Relaxed);
+    if !dir.is_dir() {
+        return Err(std::io::Error::new(
+            std::io::ErrorKind::NotFound,
+            format!(
+                "the folder {} does not exist (no folder is created); nothing was written",
+                dir.display()
+            ),
+        ));
+    }
     let tmp = dir.join(format!(".{name}.{}-{nanos}-{n}.tmp", std::process::id()));
-    let existed = path.exists();
+    let old = fs::metadata(path).ok();
+    let existed = old.is_some();
     let written = (|| -> Result<(), Interrupt> {
-        fs::create_dir_all(dir).map_err(Interrupt::Fail)?;
         before(WriteStep::CreateTemp)?;
         let mut f = fs::OpenOptions::new()
             .write(true)
             .create_new(true)
             .open(&tmp)
             .map_err(Interrupt::Fail)?;
+        // The replaced file's permissions (a private 600 locker stays private).
+        if let Some(m) = &old {
+            f.set_permissions(m.permissions())
+                .map_err(Interrupt::Fail)?;
+        }
         for (i, chunk) in bytes.chunks(CHUNK).enumerate() {
             before(WriteStep::Write(i))?;
             f.write_all(chunk).map_err(Interrupt::Fail)?;
@@ -144,6 +182,17 @@ pub fn write_steps(
 
 /// Temp files of `name` older than ten minutes: left by a writer that was killed.
 fn remove_stale_temp_files(dir: &Path, name: &str) {
+    if let Some(ten_minutes_ago) =
+        std::time::SystemTime::now().checked_sub(std::time::Duration::from_secs(600))
+    {
+        remove_temp_files_before(dir, name, ten_minutes_ago);
+    }
+}
+
+/// Temp files of `name` in `dir` last changed before `before`. A writer that holds the
+/// lock calls it with the time it took the lock: every such file was left by a writer
+/// that was killed (a live one would still hold the lock).
+pub fn remove_temp_files_before(dir: &Path, name: &str, before: std::time::SystemTime) {
     let prefix = format!(".{name}.");
     let Ok(entries) = fs::read_dir(dir) else {
         return;
@@ -157,9 +206,7 @@ fn remove_stale_temp_files(dir: &Path, name: &str) {
         let old = e
             .metadata()
             .and_then(|m| m.modified())
-            .ok()
-            .and_then(|t| t.elapsed().ok())
-            .is_some_and(|age| age > std::time::Duration::from_secs(600));
+            .is_ok_and(|t| t < before);
         if old {
             let _ = fs::remove_file(e.path());
         }
@@ -237,7 +284,10 @@ mod tests {
         let dir = tempfile::tempdir().unwrap();
         let p = dir.path().join("a.json");
         let cases: Vec<(Vec<u8>, &str)> = vec![
-            (vec![b' '; MAX_FILE_BYTES as usize + 1], "limit is 1 MB"),
+            (
+                vec![b' '; MAX_FILE_BYTES as usize + 1],
+                "the file is 1048577 bytes and the limit is 1 MB (1048576 bytes)",
+            ),
             (
                 b"{\"schema\": 1,\n \"value\": \xff}".to_vec(),
                 "byte 24 (line 2, column 11)",

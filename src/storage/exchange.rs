@@ -35,6 +35,13 @@ pub fn free_path(dir: &Path, file_name: &str) -> PathBuf {
         .unwrap_or(first)
 }
 
+/// Whether `path` names a JSON file: ends in `.json`, in any case (`.JSON` from a phone or
+/// another system too).
+pub fn is_json_file_name(path: &Path) -> bool {
+    path.extension()
+        .is_some_and(|x| x.eq_ignore_ascii_case("json"))
+}
+
 /// Write the locker to `file`, in the format `import_locker` reads.
 pub fn export_locker(locker: &LockerFile, file: &Path) -> Result<(), String> {
     write_json(file, locker).map_err(|e| format!("could not write {}: {e}", file.display()))
@@ -68,6 +75,16 @@ impl MergeReport {
 #[cfg(test)]
 mod tests {
     use super::*;
+
+    #[test]
+    fn json_files_are_found_in_any_case() {
+        for yes in ["a.json", "B.JSON", "c.Json", "dir/x.jSoN"] {
+            assert!(is_json_file_name(Path::new(yes)), "{yes}");
+        }
+        for no in ["a.txt", "json", "a.json.txt", "a.jsonl", ".json"] {
+            assert!(!is_json_file_name(Path::new(no)), "{no}");
+        }
+    }
 
     #[test]
     fn free_path_never_replaces_a_file() {

@@ -6,7 +6,7 @@ use serde::{Deserialize, Serialize};
 
 use super::atomic::{MAX_FILE_BYTES, WithinLimits, check_envelope, one_line, read_text};
 use crate::formats::team_file::CylindersFile;
-use crate::i18n::tr_n;
+use crate::i18n::{tr_n, tr_with};
 use crate::plan::Material;
 use crate::plan::error::InputError;
 use crate::plan::text;
@@ -27,6 +27,10 @@ pub const MAX_SET_ID: u64 = (1 << 53) - 1;
 #[derive(Clone, Debug, PartialEq, Serialize, Deserialize)]
 #[serde(deny_unknown_fields)]
 pub struct LockerEntry {
+    /// Read leniently: anything that is not a whole number from 1 to `MAX_SET_ID`
+    /// (a string, a fraction, a negative or too large number, nothing) reads as 0, which
+    /// `LockerFile::repair` renumbers, so that one bad id never makes a locker unreadable.
+    #[serde(default, deserialize_with = "lenient_id")]
     pub id: u64,
     pub name: String,
     pub cylinders: CylindersFile,
@@ -55,6 +59,12 @@ impl Default for LockerFile {
     }
 }
 
+/// Any JSON value as an id: a whole number that fits, else 0 (renumbered on repair).
+fn lenient_id<'de, D: serde::Deserializer<'de>>(d: D) -> Result<u64, D::Error> {
+    let v = serde_json::Value::deserialize(d)?;
+    Ok(v.as_u64().unwrap_or(0))
+}
+
 impl LockerEntry {
     /// Name and note within their limits; `field` is where the entry sits, e.g. `entries[3]`.
     pub fn check_text(&self, field: &str) -> Result<(), InputError> {
@@ -71,8 +81,8 @@ impl LockerEntry {
     }
 }
 
-/// A set name: 1 to 40 characters once trimmed, and only characters the core's one text
-/// check (`plan::text::check_text`) accepts.
+/// A set name: 1 to 40 characters once trimmed, only characters the core's one text
+/// check accepts, and at least one visible (`plan::text::check_name`).
 pub fn check_set_name(field: &str, name: &str) -> Result<(), InputError> {
     let t = name.trim();
     let n = t.chars().count();
@@ -82,7 +92,7 @@ pub fn check_set_name(field: &str, name: &str) -> Result<(), InputError> {
             format!("a name of 1 to {MAX_SET_NAME_CHARS} characters is needed; got {n}"),
         ));
     }
-    text::check_text(field, t)
+    text::check_name(field, t)
 }
 
 /// A note: at most 60 characters, checked like a name.
@@ -99,7 +109,7 @@ pub fn check_set_note(field: &str, note: &str) -> Result<(), InputError> {
 
 /// The same name, as people read it: trimmed, normalised, case ignored.
 pub(crate) fn same_name(a: &str, b: &str) -> bool {
-    text::nfc(a.trim()).to_lowercase() == text::nfc(b.trim()).to_lowercase()
+    text::same_text(a, b)
 }
 
 /// `NAME (n)`, shortened so that it fits the name limit.
@@ -158,31 +168,50 @@ impl LockerFile {
         }
     }
 
-    /// Make a locker as read safe to use: names and notes trimmed and normalised (NFC),
-    /// and, if two sets share an id or an id is 0 or above `MAX_SET_ID`, every set
-    /// numbered again from 1 in its order. Returns the one line to show when ids changed.
-    pub fn repair(&mut self) -> Option<String> {
+    /// Make a locker as read safe to use: names and notes trimmed and normalised (NFC);
+    /// if two sets share an id or an id is not usable (0, above `MAX_SET_ID`, or not a
+    /// whole number in the file), every set numbered again from 1 in its order; if more
+    /// than one set is marked mine, only the one with the lowest id stays mine. Returns
+    /// the lines to show (empty when nothing but the text changed).
+    pub fn repair(&mut self) -> Vec<String> {
         for e in &mut self.entries {
             e.name = text::nfc(e.name.trim());
             e.note = text::nfc(e.note.trim());
         }
+        let mut said = Vec::new();
         let mut seen = std::collections::HashSet::new();
         let bad = self
             .entries
             .iter()
             .any(|e| e.id == 0 || e.id > MAX_SET_ID || !seen.insert(e.id));
-        if !bad {
-            return None;
+        if bad {
+            for (i, e) in self.entries.iter_mut().enumerate() {
+                e.id = i as u64 + 1;
+            }
+            said.push(tr_n(
+                "The locker held repeated or out-of-range set numbers; its {n} set were numbered again from 1 (names and cylinders unchanged).",
+                "The locker held repeated or out-of-range set numbers; its {n} sets were numbered again from 1 (names and cylinders unchanged).",
+                self.entries.len() as u64,
+                &[],
+            ));
         }
-        for (i, e) in self.entries.iter_mut().enumerate() {
-            e.id = i as u64 + 1;
+        let marked = self.entries.iter().filter(|e| e.mine).count();
+        if marked > 1 {
+            let keep = self
+                .entries
+                .iter()
+                .filter(|e| e.mine)
+                .min_by_key(|e| e.id)
+                .map(|e| (e.id, e.name.clone()));
+            if let Some((id, name)) = keep {
+                self.set_mine(id);
+                said.push(tr_with(
+                    "The locker had {0} sets marked as yours; only '{1}' (the first) is yours now.",
+                    &[&marked, &text::shown(&name)],
+                ));
+            }
         }
-        Some(tr_n(
-            "The locker held repeated or out-of-range set numbers; its {n} set were numbered again from 1 (names and cylinders unchanged).",
-            "The locker held repeated or out-of-range set numbers; its {n} sets were numbered again from 1 (names and cylinders unchanged).",
-            self.entries.len() as u64,
-            &[],
-        ))
+        said
     }
     pub fn mine(&self) -> Option<&LockerEntry> {
         self.entries.iter().find(|e| e.mine)
@@ -292,20 +321,58 @@ mod tests {
             entry(MAX_SET_ID, "A", 12.0),
             entry(5, "Jose\u{301}", 12.0),
         ]);
-        assert!(l.repair().is_none(), "ids in range and unique are kept");
+        assert!(l.repair().is_empty(), "ids in range and unique are kept");
         assert_eq!(l.entries[1].name, "Jos\u{e9}", "stored composed");
         let next = l.next_id();
         assert!(next != MAX_SET_ID && next != 5 && next >= 1, "{next}");
         l.entries[1].id = MAX_SET_ID;
-        let said = l.repair().expect("a duplicate is renumbered");
-        assert!(said.contains("numbered again"), "{said}");
+        let said = l.repair();
+        assert_eq!(said.len(), 1, "a duplicate is renumbered: {said:?}");
+        assert!(said[0].contains("numbered again"), "{said:?}");
         let ids: Vec<u64> = l.entries.iter().map(|e| e.id).collect();
         assert_eq!(ids, [1, 2]);
-        assert!(l.repair().is_none(), "said once");
+        assert!(l.repair().is_empty(), "said once");
         l.entries[0].id = u64::MAX;
-        assert!(l.repair().is_some(), "beyond the highest id kept");
+        assert!(!l.repair().is_empty(), "beyond the highest id kept");
         l.entries[0].id = 0;
-        assert!(l.repair().is_some());
+        assert!(!l.repair().is_empty());
         assert_eq!(l.next_id(), 3);
+    }
+
+    #[test]
+    fn two_sets_marked_mine_keep_the_lowest_id_once() {
+        let mut l = locker(vec![
+            entry(7, "A", 12.0),
+            entry(3, "B", 12.0),
+            entry(5, "C", 7.0),
+        ]);
+        l.entries[0].mine = true;
+        l.entries[1].mine = true;
+        let said = l.repair();
+        assert_eq!(said.len(), 1, "{said:?}");
+        assert!(said[0].contains("2 sets marked as yours"), "{said:?}");
+        assert!(said[0].contains("'B'"), "{said:?}");
+        assert_eq!(l.mine().map(|e| e.id), Some(3));
+        assert_eq!(l.entries.iter().filter(|e| e.mine).count(), 1);
+        assert!(l.repair().is_empty(), "said once");
+    }
+
+    #[test]
+    fn ids_that_are_not_whole_numbers_are_read_and_renumbered() {
+        let set = r#""cylinders": {"count": 1, "water_l": 12, "working_bar": 232}"#;
+        for bad in ["18446744073709551616", "-1", "1.5", "\"7\"", "null", "[]"] {
+            let text = format!(
+                r#"{{"schema": 1, "entries": [{{"id": {bad}, "name": "A", {set}}}, {{"id": 2, "name": "B", {set}}}]}}"#
+            );
+            let mut l: LockerFile =
+                serde_json::from_str(&text).unwrap_or_else(|e| panic!("{bad}: {e}"));
+            let said = l.repair();
+            assert_eq!(said.len(), 1, "{bad}: {said:?}");
+            let ids: Vec<u64> = l.entries.iter().map(|e| e.id).collect();
+            assert_eq!(ids, [1, 2], "{bad}");
+        }
+        let text = format!(r#"{{"schema": 1, "entries": [{{"name": "A", {set}}}]}}"#);
+        let mut l: LockerFile = serde_json::from_str(&text).unwrap();
+        assert_eq!(l.repair().len(), 1, "a missing id is renumbered too");
     }
 }

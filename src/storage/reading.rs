@@ -46,17 +46,16 @@ impl std::fmt::Display for TextReadError {
     fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
         match self {
             TextReadError::Missing => write!(f, "no such file"),
-            TextReadError::TooLarge { bytes, limit } if *bytes < 1024 => {
+            TextReadError::TooLarge { bytes, limit } if *limit < 1024 => {
                 write!(
                     f,
-                    "the file is {bytes} bytes and the limit is {}",
-                    human_bytes(*limit)
+                    "the file is {bytes} bytes and the limit is {limit} bytes"
                 )
             }
+            // Both in bytes: a file one byte over would otherwise read "1 MB, limit 1 MB".
             TextReadError::TooLarge { bytes, limit } => write!(
                 f,
-                "the file is {} ({bytes} bytes) and the limit is {}",
-                human_bytes(*bytes),
+                "the file is {bytes} bytes and the limit is {} ({limit} bytes)",
                 human_bytes(*limit)
             ),
             TextReadError::NotUtf8 { byte, line, column } => write!(
@@ -158,14 +157,20 @@ pub fn open_regular(path: &Path) -> Result<fs::File, TextReadError> {
     }
     let file = match options.open(path) {
         Ok(f) => f,
-        // A missing file, or a data directory that is a file: nothing to read.
-        Err(e)
-            if matches!(
-                e.kind(),
-                std::io::ErrorKind::NotFound | std::io::ErrorKind::NotADirectory
-            ) =>
-        {
+        Err(e) if e.kind() == std::io::ErrorKind::NotFound => {
             return Err(TextReadError::Missing);
+        }
+        // A folder on the way is a file (a data directory that is a file): an error,
+        // never "no file yet", or an empty file would be written over it.
+        Err(e) if e.kind() == std::io::ErrorKind::NotADirectory => {
+            let folder = path.parent().map(|p| p.display().to_string());
+            return Err(TextReadError::Io(std::io::Error::new(
+                e.kind(),
+                format!(
+                    "{} is a file, not a folder",
+                    folder.unwrap_or_else(|| "the folder".to_string())
+                ),
+            )));
         }
         Err(e) => return Err(TextReadError::Io(e)),
     };
@@ -231,52 +236,78 @@ pub enum ReadOutcome<T> {
     /// No file yet.
     Missing,
     Loaded(T),
-    /// The file could not be read; it was moved to `kept_as` and must not be recreated
-    /// from nothing without telling the user.
+    /// The content could not be used; the file was moved to `kept_as` and must not be
+    /// recreated from nothing without telling the user.
     SetAside {
         kept_as: PathBuf,
         reason: String,
     },
+    /// The file could not be read for a reason that is not its content (not a regular
+    /// file, permission denied, an I/O error), or could not be moved aside: it is left
+    /// where it is and must not be written over.
+    LeftInPlace {
+        reason: String,
+    },
 }
 
-/// A versioned envelope: `{"schema": N, ...payload}` is read through `parse`.
-/// Unreadable files (over the size limit, not UTF-8, bad JSON, wrong shape, newer schema,
-/// outside the type's limits) are renamed aside.
-pub fn read_json<T: DeserializeOwned + WithinLimits>(
+/// What looking at a file found, changing nothing.
+#[derive(Debug)]
+pub enum Inspected<T> {
+    Missing,
+    Loaded(T),
+    /// The content is not usable (size, encoding, JSON, shape, schema, limits): why.
+    BadContent(String),
+    /// Not readable for another reason (not a regular file, permissions, I/O): why.
+    Unavailable(String),
+}
+
+/// Read a versioned envelope `{"schema": N, ...payload}` and change nothing: what was found.
+pub fn inspect_json<T: DeserializeOwned + WithinLimits>(
     path: &Path,
     max_schema: u32,
-) -> ReadOutcome<T> {
+) -> Inspected<T> {
     let text = match read_text(path, MAX_FILE_BYTES) {
         Ok(t) => t,
-        Err(TextReadError::Missing) => return ReadOutcome::Missing,
-        // Not a file the program wrote: left where it is, and never written over.
-        Err(e @ TextReadError::NotRegular(_)) => {
-            return ReadOutcome::SetAside {
-                kept_as: path.to_path_buf(),
-                reason: e.to_string(),
-            };
+        Err(TextReadError::Missing) => return Inspected::Missing,
+        Err(e @ (TextReadError::NotRegular(_) | TextReadError::Io(_))) => {
+            return Inspected::Unavailable(e.to_string());
         }
-        Err(e) => return set_aside(path, e.to_string()),
+        Err(e) => return Inspected::BadContent(e.to_string()),
     };
     if let Err(why) = check_envelope(&text, max_schema) {
-        return set_aside(path, why);
+        return Inspected::BadContent(why);
     }
     let de = &mut serde_json::Deserializer::from_str(&text);
     match serde_path_to_error::deserialize::<_, T>(de) {
         Ok(v) => match v.within_limits() {
-            Ok(()) => ReadOutcome::Loaded(v),
-            Err(why) => set_aside(path, one_line(&why, 300)),
+            Ok(()) => Inspected::Loaded(v),
+            Err(why) => Inspected::BadContent(one_line(&why, 300)),
         },
         Err(e) => {
             let at = e.path().to_string();
             let at = at.trim_end_matches('?').trim_end_matches('.');
             let why = one_line(&e.inner().to_string(), 200);
             if at.is_empty() {
-                set_aside(path, why)
+                Inspected::BadContent(why)
             } else {
-                set_aside(path, format!("{}: {why}", one_line(at, 100)))
+                Inspected::BadContent(format!("{}: {why}", one_line(at, 100)))
             }
         }
+    }
+}
+
+/// Read a versioned file (`inspect_json`); one whose content is not usable (over the size
+/// limit, not UTF-8, bad JSON, wrong shape, newer schema, outside the type's limits) is
+/// renamed aside. One that cannot be read for another reason is left where it is.
+pub fn read_json<T: DeserializeOwned + WithinLimits>(
+    path: &Path,
+    max_schema: u32,
+) -> ReadOutcome<T> {
+    match inspect_json(path, max_schema) {
+        Inspected::Missing => ReadOutcome::Missing,
+        Inspected::Loaded(v) => ReadOutcome::Loaded(v),
+        Inspected::BadContent(why) => set_aside(path, why),
+        Inspected::Unavailable(why) => ReadOutcome::LeftInPlace { reason: why },
     }
 }
 
@@ -331,9 +362,12 @@ pub fn set_aside<T>(path: &Path, reason: String) -> ReadOutcome<T> {
             kept_as: kept,
             reason,
         },
-        // Could not move it: report it as kept in place; the store then refuses to write it.
-        Err(e) => ReadOutcome::SetAside {
-            kept_as: path.to_path_buf(),
+        // Gone between the read and the move: another program moved or removed it.
+        Err(e) if e.kind() == std::io::ErrorKind::NotFound => ReadOutcome::LeftInPlace {
+            reason: format!("{reason}; another program moved or removed it meanwhile"),
+        },
+        // Could not move it: left in place; the store then refuses to write it.
+        Err(e) => ReadOutcome::LeftInPlace {
             reason: format!("{reason}; could not move it aside: {e}"),
         },
     }

@@ -5,12 +5,14 @@ use std::path::{Path, PathBuf};
 use std::time::SystemTime;
 
 use super::atomic::{ReadOutcome, WithinLimits, read_json, set_aside, write_json};
-use super::lock::{LOCK_WAIT, lock_beside};
-use super::locker::{LOCKER_SCHEMA, LockerFile};
+use super::locker::LockerFile;
 use super::settings::{FoundSettings, SETTINGS_SCHEMA, Settings};
 use super::team_state::{TEAM_SCHEMA, TeamState};
 use crate::i18n::tr_with;
 use crate::plan::error::InputError;
+
+mod locker_io;
+pub use locker_io::{LockerRead, LockerState};
 
 pub const LOCKER_FILE: &str = "locker.json";
 pub const SETTINGS_FILE: &str = "settings.json";
@@ -79,7 +81,7 @@ impl Store {
 
     pub fn load(&mut self) -> Loaded {
         let mut report = LoadReport::default();
-        let (locker, _) = self.read_locker(&mut report.messages);
+        let locker = self.read_locker(&mut report.messages).locker;
         let settings_path = self.dir.join(SETTINGS_FILE);
         report.first_launch = !settings_path.exists();
         let settings = self
@@ -96,73 +98,6 @@ impl Store {
             team,
             report,
         }
-    }
-
-    /// Load only the locker (the command line's `locker` commands). An unreadable locker
-    /// is set aside as in `load`; the messages say where it went.
-    pub fn load_locker(&mut self) -> (LockerFile, Vec<String>) {
-        let mut messages = Vec::new();
-        let (locker, _) = self.read_locker(&mut messages);
-        self.remember(LOCKER_FILE);
-        (locker, messages)
-    }
-
-    /// The locker as found (set aside if unreadable, `messages` saying where), repaired
-    /// (`LockerFile::repair`). A repair of the ids is written back at once, so that it is
-    /// said once.
-    fn read_locker(&mut self, messages: &mut Vec<String>) -> (LockerFile, bool) {
-        let mut report = LoadReport::default();
-        let found: Option<LockerFile> =
-            self.take(LOCKER_FILE, LOCKER_SCHEMA, "cylinder locker", &mut report);
-        let read = found.is_some();
-        let mut locker = found.unwrap_or_default();
-        messages.append(&mut report.messages);
-        if let Some(said) = locker.repair() {
-            messages.push(said);
-            if let Err(e) = self.save(LOCKER_FILE, &locker) {
-                messages.push(e);
-            }
-        }
-        (locker, read)
-    }
-
-    /// The locker again (the app, when another program changed it): the locker, whether
-    /// the file was read (not missing, not set aside), and lines to show.
-    pub fn reload_locker(&mut self) -> (LockerFile, bool, Vec<String>) {
-        let mut messages = Vec::new();
-        let (locker, read) = self.read_locker(&mut messages);
-        self.remember(LOCKER_FILE);
-        (locker, read, messages)
-    }
-
-    /// Whether another program changed the locker since this store last read or wrote it.
-    pub fn locker_changed_on_disk(&self) -> bool {
-        self.seen.get(LOCKER_FILE).copied().flatten() != self.modified(LOCKER_FILE)
-    }
-
-    /// Change the locker safely against other writers: take the lock beside it, read it
-    /// again, apply `change` to what was read, and write it atomically if it changed.
-    /// Lines to show (a file set aside, ids repaired) go to `messages`, even on error.
-    /// `change` is also told whether the file was read (not missing, not set aside).
-    /// Returns the locker as written (or as found, if `change` left it alone).
-    pub fn update_locker<R>(
-        &mut self,
-        messages: &mut Vec<String>,
-        change: impl FnOnce(&mut LockerFile, bool) -> Result<R, InputError>,
-    ) -> Result<(R, LockerFile), LockerError> {
-        let path = self.dir.join(LOCKER_FILE);
-        let _lock = lock_beside(&path, LOCK_WAIT)
-            .map_err(|e| LockerError::Write(format!("could not save {LOCKER_FILE}: {e}")))?;
-        let (found, read) = self.read_locker(messages);
-        let mut locker = found.clone();
-        let r = change(&mut locker, read).map_err(LockerError::Input)?;
-        if locker != found || !path.exists() {
-            self.save(LOCKER_FILE, &locker)
-                .map_err(LockerError::Write)?;
-        } else {
-            self.remember(LOCKER_FILE);
-        }
-        Ok((r, locker))
     }
 
     /// Path of one of the store's files.
@@ -188,13 +123,17 @@ impl Store {
                 Some(v)
             }
             ReadOutcome::SetAside { kept_as, reason } => {
-                let untouched = kept_as == path;
-                if untouched {
-                    self.blocked.insert(name);
-                }
+                self.blocked.remove(name);
                 report
                     .messages
-                    .push(unreadable(what, &reason, &kept_as.display(), untouched));
+                    .push(unreadable(what, &reason, &kept_as.display(), false));
+                None
+            }
+            ReadOutcome::LeftInPlace { reason } => {
+                self.blocked.insert(name);
+                report
+                    .messages
+                    .push(unreadable(what, &reason, &path.display(), true));
                 None
             }
         }
@@ -209,7 +148,7 @@ impl Store {
         }
         let path = self.dir.join(SETTINGS_FILE);
         let kept = match set_aside::<()>(&path, String::new()) {
-            ReadOutcome::SetAside { kept_as, .. } if kept_as != path => {
+            ReadOutcome::SetAside { kept_as, .. } => {
                 report.settings_repaired = true;
                 tr_with(
                     "Some settings could not be used and went back to their defaults ({0}). The other settings were kept; the file as it was is kept as {1}.",
@@ -244,7 +183,7 @@ impl Store {
     pub fn set_aside_team(&mut self, reason: &str) -> Option<PathBuf> {
         let path = self.dir.join(TEAM_FILE);
         match set_aside::<()>(&path, reason.to_string()) {
-            ReadOutcome::SetAside { kept_as, .. } if kept_as != path => Some(kept_as),
+            ReadOutcome::SetAside { kept_as, .. } => Some(kept_as),
             _ => {
                 self.blocked.insert(TEAM_FILE);
                 None
@@ -265,7 +204,9 @@ impl Store {
                 "{name} is not saved: the unreadable file is kept in its place"
             ));
         }
-        write_json(&self.dir.join(name), value)
+        // The data folder is made on the first save (a file in its place is an error).
+        std::fs::create_dir_all(&self.dir)
+            .and_then(|()| write_json(&self.dir.join(name), value))
             .map_err(|e| format!("could not save {name}: {e}"))?;
         self.remember(name);
         Ok(())

@@ -64,6 +64,8 @@ impl Session {
         let svg = card_svg(&heading, input, self.team.plan(), &charts);
         let name = format!("turnsheet-card-{}.svg", stamp.format("%Y-%m-%d-%H%M%S"));
         let path = self.exchange.card_dir.join(&name);
+        // The app's own card folder is made on first use (writes never make folders).
+        let _ = std::fs::create_dir_all(&self.exchange.card_dir);
         match crate::storage::atomic::write_text(&path, &svg) {
             Ok(()) => {
                 // Where the platform keeps files its owner can open (Android's Downloads),

@@ -156,13 +156,13 @@ impl Session {
     }
 }
 
-/// The `.json` entries of `dir`, sorted, each with whether it is a symbolic link (never
+/// The `.json` entries of `dir` (any case: `.JSON` too), sorted, each with whether it is a symbolic link (never
 /// followed). Folders and other non-files are left out.
 fn json_files(dir: &Path) -> Vec<(PathBuf, bool)> {
     let mut found: Vec<(PathBuf, bool)> = std::fs::read_dir(dir)
         .map(|rd| {
             rd.filter_map(|e| e.ok())
-                .filter(|e| e.path().extension().is_some_and(|x| x == "json"))
+                .filter(|e| crate::storage::exchange::is_json_file_name(&e.path()))
                 .filter_map(|e| {
                     let t = e.file_type().ok()?;
                     (t.is_file() || t.is_symlink()).then(|| (e.path(), t.is_symlink()))
