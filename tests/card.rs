@@ -26,10 +26,11 @@ fn heading() -> CardHeading {
         dive: Some("Hollowmere spring, upstream".into()),
         date: Some("2026-12-05".into()),
         read_at: Vec::new(),
+        labels: Default::default(),
     }
 }
 
-fn render(svg: &str, scale: f32) -> resvg::tiny_skia::Pixmap {
+fn tree(svg: &str) -> resvg::usvg::Tree {
     let mut db = resvg::usvg::fontdb::Database::new();
     for f in [
         &include_bytes!("../ui/fonts/Roboto-Regular.ttf")[..],
@@ -41,7 +42,11 @@ fn render(svg: &str, scale: f32) -> resvg::tiny_skia::Pixmap {
         fontdb: std::sync::Arc::new(db),
         ..Default::default()
     };
-    let tree = resvg::usvg::Tree::from_str(svg, &opt).expect("card parses as SVG");
+    resvg::usvg::Tree::from_str(svg, &opt).expect("card parses as SVG")
+}
+
+fn render(svg: &str, scale: f32) -> resvg::tiny_skia::Pixmap {
+    let tree = tree(svg);
     let size = tree.size();
     let (w, h) = (
         (size.width() * scale).ceil() as u32,
@@ -239,4 +244,65 @@ fn an_unknown_card_language_is_refused_with_the_codes() {
         assert!(err.contains(code), "{code} not listed: {err}");
     }
     assert!(!err.contains("panicked"), "{err}");
+}
+
+/// Every text of the card laid out by resvg with the app's fonts: its words and the box
+/// its glyphs fill, as (left, top, right, bottom) in mm.
+fn laid_out_texts(svg: &str) -> Vec<(String, [f32; 4])> {
+    fn walk(g: &resvg::usvg::Group, mm: f32, out: &mut Vec<(String, [f32; 4])>) {
+        for node in g.children() {
+            match node {
+                resvg::usvg::Node::Group(g) => walk(g, mm, out),
+                resvg::usvg::Node::Text(t) => {
+                    let words = t.chunks().iter().map(|c| c.text()).collect::<String>();
+                    let r = t.flattened().abs_bounding_box();
+                    out.push((
+                        words,
+                        [r.left() / mm, r.top() / mm, r.right() / mm, r.bottom() / mm],
+                    ));
+                }
+                _ => {}
+            }
+        }
+    }
+    let tree = tree(svg);
+    // The canvas is in CSS px; the page is 100 mm wide.
+    let mm = tree.size().width() / 100.0;
+    let mut out = Vec::new();
+    walk(tree.root(), mm, &mut out);
+    out
+}
+
+#[test]
+fn long_set_names_stay_on_the_page_and_off_the_turns() {
+    use turnsheet::plan::SetLabels;
+    // The longest names a set can have (40 characters), with wide letters.
+    let team = demo();
+    let plan = plan_team(&team).unwrap();
+    let long = "MMMM WWWW Sidemount aluminium 77.4 cu ft";
+    assert_eq!(long.chars().count(), 40);
+    let mut heading = heading();
+    heading.labels = SetLabels {
+        sets: vec![String::new(), long.into(), long.into()],
+        stages: vec![long.into(), String::new(), long.into()],
+    };
+    for heading in [heading, self::heading()] {
+        let svg = card_svg(&heading, &team, &plan, &[]);
+        let texts = laid_out_texts(&svg);
+        assert!(texts.len() > 10, "{texts:?}");
+        // Inside the 5 mm margins of the 100 × 150 mm page.
+        for (words, [left, top, right, bottom]) in &texts {
+            assert!(
+                *left >= 4.5 && *right <= 95.5 && *top >= 0.0 && *bottom <= 145.5,
+                "{words} runs off the page: {left} {top} {right} {bottom}"
+            );
+        }
+        // No two texts' glyphs touch.
+        for (k, (a, ra)) in texts.iter().enumerate() {
+            for (b, rb) in &texts[k + 1..] {
+                let apart = ra[2] <= rb[0] || rb[2] <= ra[0] || ra[3] <= rb[1] || rb[3] <= ra[1];
+                assert!(apart, "'{a}' {ra:?} overlaps '{b}' {rb:?}");
+            }
+        }
+    }
 }

@@ -199,18 +199,123 @@ fn chart_and_gas_spell_the_unit_alike() {
         assert_eq!(out.status.code(), Some(0), "{unit_flag} {unit}");
         String::from_utf8(out.stdout).unwrap()
     };
-    let psi = chart("--unit", "psi");
+    let psi = chart("--units", "psi");
     assert!(psi.starts_with("mine psi\\buddy psi"), "{psi}");
-    // The old spelling still works and means the same.
+    // The other spelling and the old values still work and mean the same.
+    assert_eq!(chart("--unit", "psi"), psi);
     assert_eq!(chart("--units", "imperial"), psi);
     assert_eq!(chart("--units", "metric"), chart("--unit", "bar"));
-    // Help shows the one spelling only.
-    let help = bin().args(["chart", "--help"]).output().unwrap();
-    let help = String::from_utf8(help.stdout).unwrap();
+    let gas = |unit_flag: &str| {
+        let out = bin()
+            .args([
+                "gas",
+                "--litres",
+                "12",
+                "--pressure",
+                "3000",
+                unit_flag,
+                "psi",
+            ])
+            .output()
+            .unwrap();
+        assert_eq!(out.status.code(), Some(0), "gas {unit_flag}");
+        String::from_utf8(out.stdout).unwrap()
+    };
+    assert!(gas("--units").contains("at 3000 psi"));
+    assert_eq!(gas("--unit"), gas("--units"));
+    // Help shows the one spelling only, the same in both commands.
+    for command in ["chart", "gas"] {
+        let help = bin().args([command, "--help"]).output().unwrap();
+        let help = String::from_utf8(help.stdout).unwrap();
+        assert!(
+            help.contains("--units <UNIT>") && !help.contains("--unit <") && !help.contains("old"),
+            "{command}: {help}"
+        );
+    }
+}
+
+#[test]
+fn a_spec_can_say_its_pair_is_independent() {
+    let chart = |mine: &str| {
+        let out = bin()
+            .args(["chart", "--mine", mine, "--buddy", "1x18L@232bar"])
+            .output()
+            .unwrap();
+        assert_eq!(out.status.code(), Some(0), "{mine}");
+        String::from_utf8(out.stdout).unwrap()
+    };
+    let twins = chart("2x11.1L@207bar");
+    assert!(twins.contains("Me (Twin 11.1 L 207 bar, "), "{twins}");
+    // Sidemount: the generic size's name, as the app gives it; the same turns.
+    let pair = chart("2x11.1L@207bar:indep");
     assert!(
-        help.contains("--unit <UNIT>") && !help.contains("--units <"),
-        "{help}"
+        pair.contains("Me (Sidemount aluminium 11.1 L 207 bar, "),
+        "{pair}"
     );
+    let cells = |t: &str| {
+        t.lines()
+            .skip_while(|l| !l.starts_with("rows:"))
+            .collect::<Vec<_>>()
+            .join("\n")
+    };
+    assert_eq!(cells(&twins), cells(&pair));
+    let out = bin()
+        .args([
+            "chart",
+            "--mine",
+            "1x11.1L@207bar:indep",
+            "--buddy",
+            "1x18L@232bar",
+        ])
+        .output()
+        .unwrap();
+    assert_eq!(out.status.code(), Some(2));
+    assert!(String::from_utf8_lossy(&out.stderr).contains("only a pair"));
+}
+
+#[test]
+fn free_gas_and_water_temperature_are_shown_as_everywhere_else() {
+    // 11.1 L of air at 207 bar: about 2196 L free gas. Shown cu ft round down (gas on
+    // hand): 1 cu ft = 28.316846592 L exactly (NIST SP 811, appendix B).
+    let out = bin()
+        .args(["gas", "--litres", "11.1", "--pressure", "207"])
+        .output()
+        .unwrap();
+    let text = String::from_utf8(out.stdout).unwrap();
+    let v: serde_json::Value = serde_json::from_slice(
+        &bin()
+            .args(["gas", "--litres", "11.1", "--pressure", "207", "--json"])
+            .output()
+            .unwrap()
+            .stdout,
+    )
+    .unwrap();
+    let litres = v["content_l"].as_f64().unwrap();
+    let cuft = (litres / 28.316846592 * 10.0).floor() / 10.0;
+    let real = text.lines().find(|l| l.contains("real gas")).unwrap();
+    assert!(
+        real.contains(&format!("{} L free gas ({cuft:.1} cu ft)", litres.floor())),
+        "{real} ({litres} L)"
+    );
+    let hand: f64 = 11.1 * 207.0 / 28.316846592;
+    let hand_line = text.lines().find(|l| l.contains("tank factor")).unwrap();
+    assert!(
+        hand_line.contains(&format!("({:.1} cu ft)", (hand * 10.0).floor() / 10.0)),
+        "{hand_line}"
+    );
+    // Half a degree: the plan's table, its charts and the card round it alike.
+    let mut team = demo();
+    team["water_temp"] = 14.5.into();
+    let dir = tempfile::tempdir().unwrap();
+    let path = dir.path().join("team.json");
+    std::fs::write(&path, team.to_string()).unwrap();
+    let said = |args: &[&str]| {
+        let out = bin().args(args).arg(&path).output().unwrap();
+        String::from_utf8(out.stdout).unwrap()
+    };
+    assert!(said(&["plan"]).contains("water 15 °C"));
+    assert!(said(&["chart"]).contains("water 15 °C"));
+    assert!(said(&["card", "--date", "today"]).contains("water 15 °C"));
 }
 
 #[test]

@@ -616,6 +616,7 @@ fn check_card_name((name, dive): (String, String)) -> Result<bool, TestCaseError
                 dive,
                 date: Some("today".into()),
                 read_at: vec!["read 09:42".into(); t.divers.len()],
+                labels: Default::default(),
             };
             let svg = card_svg(&heading, &t, &p, &[]);
             let doc = roxmltree::Document::parse(&svg);

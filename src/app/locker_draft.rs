@@ -199,17 +199,19 @@ impl Draft {
     }
 }
 
-/// The name made from the sizes: "Single 15 L 232 bar", "Twin 12 L 232 bar",
-/// "3 × 40 cu ft 3000 psi".
+/// The name made from the sizes: the core's ([`CylinderSet::describe`]), "Single 15 L
+/// 232 bar", "Twin 12 L 232 bar", "2 × 12 L 232 bar, independent", "3 × 40 cu ft 3000 psi".
 pub fn made_name(set: &CylinderSet) -> String {
-    format!("{}{}", count_word(set.count), set.spec.describe())
+    set.describe()
 }
 
-fn count_word(count: u8) -> String {
-    match count {
-        1 => "Single ".to_string(),
-        2 => "Twin ".to_string(),
-        n => format!("{n} × "),
+/// The words of the core's name around the sizes, in this thread's language: ("Twin ",
+/// "") for twins, ("2 × ", ", independent") for an independent pair.
+fn count_words(set: &CylinderSet) -> (String, String) {
+    let (name, sizes) = (set.describe(), set.spec.describe());
+    match name.split_once(&sizes) {
+        Some((before, after)) => (before.to_string(), after.to_string()),
+        None => (String::new(), String::new()),
     }
 }
 
@@ -225,12 +227,16 @@ fn rename(name: &str, old: &CylinderSet, now: &CylinderSet) -> Option<String> {
         })
         .into_iter()
         .find(|w| name.contains(w.as_str()))?;
+    // The core's own name for the old sizes (in any language): the core's for the new.
+    if crate::plan::is_made_name(name, old) {
+        return Some(made_name(now));
+    }
     let is = now.spec.describe();
     let mut name = name.replacen(&was, &is, 1);
     if old.count != now.count {
-        let (w, n) = (count_word(old.count), count_word(now.count));
+        let (w, n) = (count_words(old).0, count_words(now).0);
         let (wx, nx) = (format!("{} × ", old.count), format!("{} × ", now.count));
-        if let Some(rest) = name.strip_prefix(&w) {
+        if let Some(rest) = name.strip_prefix(&w).filter(|_| !w.is_empty()) {
             name = format!("{n}{rest}");
         } else if name.contains(&wx) {
             // "Sidemount 2 × …": the count inside the name.

@@ -9,7 +9,7 @@ use crate::plan::error::InputError;
 use crate::plan::team_charts;
 
 use super::CliError;
-use super::plan_cmd::{named, plan_named, read_team};
+use super::plan_cmd::{named, plan_named, read_named_team};
 
 /// Arguments of `card`.
 #[derive(clap::Args, Debug)]
@@ -56,7 +56,7 @@ fn language(code: Option<&str>) -> Result<Language, InputError> {
 /// The card's SVG text for a team file.
 pub fn card_text(args: &CardArgs) -> Result<String, InputError> {
     let lang = language(args.lang.as_deref())?;
-    let team = read_team(&args.team)?;
+    let (team, labels) = read_named_team(&args.team)?;
     let plan = plan_named(&team)?;
     let charts = if args.charts {
         team_charts(&team, 2, 7).map_err(|e| named(e, &team))?
@@ -85,6 +85,7 @@ pub fn card_text(args: &CardArgs) -> Result<String, InputError> {
                 .unwrap_or_else(|| tr_with("made {0}", &[&made])),
         ),
         read_at: Vec::new(),
+        labels,
     };
     Ok(card_svg(&heading, &team, &plan, &charts))
 }

@@ -8,7 +8,7 @@ use crate::plan::error::InputError;
 use crate::plan::shown;
 use crate::plan::team_charts;
 
-use super::plan_cmd::{named, read_team};
+use super::plan_cmd::{named, read_named_team};
 
 #[derive(Serialize, Debug)]
 struct JsonChart {
@@ -31,7 +31,7 @@ pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String
             "at most 41 rows and columns (above + below ≤ 40)",
         ));
     }
-    let team = read_team(path)?;
+    let (team, labels) = read_named_team(path)?;
     // A chart pairs a diver with a teammate: a team of one (or none) has none to print.
     team.validate().map_err(|e| named(e, &team))?;
     let charts = team_charts(&team, above, below).map_err(|e| named(e, &team))?;
@@ -51,19 +51,23 @@ pub fn run(path: &Path, above: usize, below: usize, json: bool) -> Result<String
             .collect();
         return Ok(serde_json::to_string_pretty(&out).unwrap_or_default() + "\n");
     }
-    Ok(chart_text(&team, &charts))
+    Ok(chart_text(&team, &charts, &labels))
 }
 
-/// Charts as text, each on its own divers' gauges.
-pub fn chart_text(team: &crate::plan::TeamInput, charts: &[crate::plan::PairChart]) -> String {
+/// Charts as text, each on its own divers' gauges, each set by its one name.
+pub fn chart_text(
+    team: &crate::plan::TeamInput,
+    charts: &[crate::plan::PairChart],
+    labels: &crate::plan::SetLabels,
+) -> String {
     let u = team.units;
     let mut s = format!(
-        "Pairing charts: rule of {}, water {:.0} {}.\n\
+        "Pairing charts: rule of {}, water {} {}.\n\
          Each chart gives the first diver's turn for their start (rows) and the teammate's start (columns),\n\
          each on their own gauge. With more than one teammate, keep the HIGHEST turn of your charts.\n\
          Between lines, read the next higher own start and the next lower teammate start.\n",
         team.rule.name(),
-        u.temperature_value(team.water_temp),
+        shown::degrees(u.temperature_value(team.water_temp)),
         u.temperature_label()
     );
     let width = charts
@@ -80,10 +84,10 @@ pub fn chart_text(team: &crate::plan::TeamInput, charts: &[crate::plan::PairChar
         s.push_str(&format!(
             "\n{} ({}, {}) with {} ({}, {})\n",
             me.name,
-            me.cylinders.describe(),
+            labels.set_name(team, c.me),
             me.mix.label(),
             buddy.name,
-            buddy.cylinders.describe(),
+            labels.set_name(team, c.buddy),
             buddy.mix.label()
         ));
         let (mu, bu) = (c.my_gauge.label(), c.buddy_gauge.label());

@@ -14,11 +14,11 @@ pub struct GasArgs {
     /// Water capacity in litres (all cylinders of the set together).
     #[arg(long, allow_negative_numbers = true)]
     pub litres: f64,
-    /// Gauge pressure, in --unit.
+    /// Gauge pressure, in --units.
     #[arg(long, allow_negative_numbers = true)]
     pub pressure: f64,
-    /// Pressure unit.
-    #[arg(long, value_enum, default_value_t = PressureUnit::Bar)]
+    /// Pressure unit: bar or psi (as for `chart --units`).
+    #[arg(long = "units", alias = "unit", value_enum, default_value_t = PressureUnit::Bar)]
     pub unit: PressureUnit,
     /// Oxygen, percent.
     #[arg(long, default_value_t = 21.0, allow_negative_numbers = true)]
@@ -45,6 +45,11 @@ pub struct GasJson {
     pub pressure_after: Option<f64>,
     pub pressure_after_ideal: Option<f64>,
     pub unit: String,
+}
+
+/// Free gas in cu ft as shown: gas on hand, so rounded down, to a tenth.
+fn cuft(v: Volume) -> String {
+    shown::fixed(shown::down(v.cuft(), 1), 1)
 }
 
 pub fn run(a: &GasArgs) -> Result<String, InputError> {
@@ -102,23 +107,23 @@ pub fn run(a: &GasArgs) -> Result<String, InputError> {
         return Ok(serde_json::to_string_pretty(&out).unwrap_or_default() + "\n");
     }
     let mut s = format!(
-        "{} L of {} at {} {unit}, {} °C:\n  real gas (GERG-2008): {:.0} L free gas ({:.1} cu ft)\n  tank factor (by hand): {} L × {} bar = {} L free gas ({:.1} cu ft)\n",
+        "{} L of {} at {} {unit}, {} °C:\n  real gas (GERG-2008): {} L free gas ({} cu ft)\n  tank factor (by hand): {} L × {} bar = {} L free gas ({} cu ft)\n",
         a.litres,
         out.mix,
         a.pressure,
         a.temp,
-        real.litres().floor(),
-        real.cuft(),
+        shown::start(real.litres()),
+        cuft(real),
         shown::num(a.litres),
         shown::num(shown::down(p.bar(), 1)),
         shown::num(shown::down(hand.litres(), 1)),
-        hand.cuft()
+        cuft(hand)
     );
     if let (Some(c), Some(t2)) = (after, a.to_temp) {
         s.push_str(&format!(
-            "  at {t2} °C: {:.0} {unit} (real gas); {:.0} {unit} (ideal gas)\n",
-            in_unit(c.real).floor(),
-            in_unit(c.ideal).floor()
+            "  at {t2} °C: {} {unit} (real gas); {} {unit} (ideal gas)\n",
+            shown::start(in_unit(c.real)),
+            shown::start(in_unit(c.ideal))
         ));
     }
     Ok(s)

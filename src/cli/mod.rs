@@ -76,7 +76,11 @@ pub enum Command {
     /// Without "step", a gauge in the other unit reads 10 bar or 100 psi.
     /// A diver may carry a stage: "stage": {"cylinders": {...}, "mix": {...}, "start": 200};
     /// stages are matched on volume among the divers who carry one and get a drop pressure.
+    /// A diver (or a stage) may name the set: "set_name": "Cave 12s" (1 to 40 characters);
+    /// without it a set is called as in the app: a generic size's name, else its sizes.
     /// water_temp is °C (metric) or °F (imperial); mix defaults to air; unknown keys are errors.
+    /// The app's saved team (last-team.json in the data directory) is read too, with the
+    /// names the app gave the sets.
     Plan {
         /// The team file (JSON).
         team: std::path::PathBuf,
@@ -118,7 +122,8 @@ pub enum Command {
     /// and the command carries on with an empty locker.
     #[command(
         after_help = "SPEC is COUNTxSIZE@RATING: 2x12L@232bar (two 12 L cylinders, 232 bar \
-working pressure) or 1x80cuft@3000psi (one cylinder rated 80 cu ft at 3000 psi)."
+working pressure, twins on a manifold) or 1x80cuft@3000psi (one cylinder rated 80 cu ft at \
+3000 psi). A pair of independent cylinders (sidemount) adds :indep: 2x11.1L@207bar:indep."
     )]
     Locker {
         #[command(subcommand)]
@@ -126,10 +131,11 @@ working pressure) or 1x80cuft@3000psi (one cylinder rated 80 cu ft at 3000 psi).
     },
 }
 
-/// A pressure unit on the command line: `--unit bar|psi` for `gas` and `chart`.
+/// A pressure unit on the command line: `--units bar|psi` for `gas` and `chart`
+/// (`--unit` is read too).
 #[derive(clap::ValueEnum, Clone, Copy, Debug, PartialEq, Eq)]
 pub enum PressureUnit {
-    /// Bar (also read as `metric`, the old `chart --units` value).
+    /// Bar (also read as `metric`).
     #[value(alias = "metric")]
     Bar,
     /// Psi (also read as `imperial`).
@@ -157,7 +163,7 @@ pub fn run(command: Command) -> i32 {
             (None, Some(_), Some(_)) => pair_chart_cmd::run(&pair),
             _ => Err(CliError::Input(InputError::new(
                 "chart",
-                "give a team file, or --mine SPEC and --buddy SPEC (SPEC: a locker set's name or COUNTxSIZE@RATING, e.g. 2x12L@232bar)",
+                "give a team file, or --mine SPEC and --buddy SPEC (SPEC: a locker set's name or COUNTxSIZE@RATING, e.g. 2x12L@232bar, or 2x11.1L@207bar:indep for independent cylinders)",
             ))),
         },
         Command::Locker { action } => locker_cmd::run(

@@ -10,7 +10,9 @@ use crate::plan::error::{InputError, check_range};
 use crate::plan::round_down_to_step;
 use crate::plan::shown;
 use crate::plan::validate_step;
-use crate::plan::{CylinderSet, DiverInput, Mix, Rule, TeamInput, Temperature, UnitSystem, Water};
+use crate::plan::{
+    CylinderSet, DiverInput, Mix, Rule, SetLabels, TeamInput, Temperature, UnitSystem, Water,
+};
 use crate::plan::{PairChart, pair_chart};
 use crate::storage::Store;
 
@@ -27,7 +29,8 @@ pub enum ChartFormat {
 /// The options of a pairing chart for two sets.
 #[derive(clap::Args, Debug, Clone)]
 pub struct PairArgs {
-    /// My set: a locker set's name, or COUNTxSIZE@RATING (2x12L@232bar, 1x80cuft@3000psi).
+    /// My set: a locker set's name, or COUNTxSIZE@RATING (2x12L@232bar, 1x80cuft@3000psi;
+    /// a pair of independent cylinders adds :indep, 2x11.1L@207bar:indep).
     #[arg(long)]
     pub mine: Option<String>,
     /// The buddy's set, written the same way.
@@ -49,9 +52,8 @@ pub struct PairArgs {
     /// Distance between rows and columns (default: the step).
     #[arg(long)]
     pub every: Option<f64>,
-    /// Pressure unit: bar or psi (as for `gas --unit`; `--units metric|imperial` is
-    /// still read).
-    #[arg(long, alias = "units", value_enum, default_value_t = PressureUnit::Bar)]
+    /// Pressure unit: bar or psi (as for `gas --units`).
+    #[arg(long = "units", alias = "unit", value_enum, default_value_t = PressureUnit::Bar)]
     pub unit: PressureUnit,
     /// Oxygen in both sets, percent.
     #[arg(long, default_value_t = 21.0)]
@@ -70,17 +72,20 @@ pub struct PairArgs {
     pub output: Option<PathBuf>,
 }
 
-/// A set from a SPEC or, failing that, a locker set of that name.
-fn set_of(field: &str, text: &str) -> Result<CylinderSet, InputError> {
+/// A set from a SPEC or, failing that, a locker set of that name (with the name).
+fn set_of(field: &str, text: &str) -> Result<(CylinderSet, String), InputError> {
     match parse_cylinder_spec(text) {
-        Ok(set) => Ok(set),
+        Ok(set) => Ok((set, String::new())),
         Err(spec_error) => {
             let mut store = Store::new(crate::storage::data_dir::desktop_data_dir());
             let found = store.load_locker();
             found.messages.iter().for_each(|m| super::say(m));
             let locker = found.locker;
             match locker.find_by_name(text).first() {
-                Some(&k) => locker.entries[k].cylinders.to_set(field),
+                Some(&k) => {
+                    let e = &locker.entries[k];
+                    Ok((e.cylinders.to_set(field)?, e.name.clone()))
+                }
                 None => Err(InputError::new(
                     field,
                     format!("no locker set is called that, and {}", spec_error.message),
@@ -103,8 +108,13 @@ fn starts(from: f64, to: f64, every: f64) -> Vec<f64> {
 
 /// The two-diver team and the chart of "Me" against "Buddy".
 pub fn pair(args: &PairArgs) -> Result<(TeamInput, PairChart), InputError> {
-    let mine = set_of("--mine", args.mine.as_deref().unwrap_or_default())?;
-    let buddy = set_of("--buddy", args.buddy.as_deref().unwrap_or_default())?;
+    pair_named(args).map(|(team, _, chart)| (team, chart))
+}
+
+/// [`pair`], with the locker names of the two sets (empty for a SPEC).
+pub fn pair_named(args: &PairArgs) -> Result<(TeamInput, SetLabels, PairChart), InputError> {
+    let (mine, my_name) = set_of("--mine", args.mine.as_deref().unwrap_or_default())?;
+    let (buddy, buddy_name) = set_of("--buddy", args.buddy.as_deref().unwrap_or_default())?;
     let units = match args.unit {
         PressureUnit::Bar => UnitSystem::Metric,
         PressureUnit::Psi => UnitSystem::Imperial,
@@ -166,7 +176,11 @@ pub fn pair(args: &PairArgs) -> Result<(TeamInput, PairChart), InputError> {
         divers: vec![diver("Me", mine, rows[0]), diver("Buddy", buddy, cols[0])],
     };
     let chart = pair_chart(&team, 0, 1, &rows, &cols)?;
-    Ok((team, chart))
+    let labels = SetLabels {
+        sets: vec![my_name, buddy_name],
+        stages: Vec::new(),
+    };
+    Ok((team, labels, chart))
 }
 
 /// The chart as CSV: first row the buddy's starts, first column mine, cells my turn.
@@ -196,11 +210,13 @@ pub fn csv(chart: &PairChart) -> String {
 
 /// Run the pairing chart.
 pub fn run(args: &PairArgs) -> Result<String, CliError> {
-    let (team, chart) = pair(args)?;
+    let (team, labels, chart) = pair_named(args)?;
     let text = match args.format {
         ChartFormat::Csv => csv(&chart),
         ChartFormat::Svg => charts_svg(&team, std::slice::from_ref(&chart)),
-        ChartFormat::Text => super::chart_cmd::chart_text(&team, std::slice::from_ref(&chart)),
+        ChartFormat::Text => {
+            super::chart_cmd::chart_text(&team, std::slice::from_ref(&chart), &labels)
+        }
     };
     match &args.output {
         None => Ok(text),

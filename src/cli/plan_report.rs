@@ -4,7 +4,7 @@ use serde::Serialize;
 
 use crate::plan::margin_for_display;
 use crate::plan::shown;
-use crate::plan::{PressureUnit, TeamInput, TeamPlan, UnitSystem};
+use crate::plan::{PressureUnit, SetLabels, TeamInput, TeamPlan, UnitSystem};
 use crate::plan::{allowance_sentence, hand_working, turn_sentence};
 
 #[derive(Serialize, Debug)]
@@ -32,6 +32,8 @@ pub struct JsonPlan {
 #[derive(Serialize, Debug)]
 pub struct JsonDiver {
     pub name: String,
+    /// The cylinders' one name, as the app and the card write it.
+    pub set_name: String,
     /// The diver's gauge unit: `start`, `turn*` and `stage_*` pressures are in it.
     pub unit: PressureUnit,
     /// The diver's graduation, in `unit`.
@@ -54,6 +56,8 @@ pub struct JsonDiver {
     pub minutes_to_turn: Option<f64>,
     /// Stage drop pressure (shown, on the gauge step), or null without a stage.
     pub stage_drop: Option<f64>,
+    /// The stage's one name, or null without a stage.
+    pub stage_set_name: Option<String>,
     pub stage_drop_real: Option<f64>,
     pub stage_drop_hand: Option<f64>,
     pub stage_set_by: Option<String>,
@@ -64,7 +68,7 @@ fn r3(x: f64) -> f64 {
     (x * 1000.0).round() / 1000.0
 }
 
-pub fn json_report(input: &TeamInput, plan: &TeamPlan) -> JsonPlan {
+pub fn json_report(input: &TeamInput, plan: &TeamPlan, labels: &SetLabels) -> JsonPlan {
     let u = input.units;
     let names = plan.names();
     JsonPlan {
@@ -98,6 +102,7 @@ pub fn json_report(input: &TeamInput, plan: &TeamPlan) -> JsonPlan {
                 let hand = hand_working(input, plan, i);
                 JsonDiver {
                     name: d.name.clone(),
+                    set_name: labels.set_name(input, i),
                     unit: g.unit,
                     step: g.step,
                     start: r3(g.value(d.start)),
@@ -114,6 +119,7 @@ pub fn json_report(input: &TeamInput, plan: &TeamPlan) -> JsonPlan {
                     controlling: d.controlling,
                     minutes_to_turn: d.minutes_to_turn.map(r3),
                     stage_drop: d.stage.as_ref().map(|st| r3(st.drop_shown_value)),
+                    stage_set_name: labels.stage_name(input, i),
                     stage_drop_real: d.stage.as_ref().map(|st| r3(g.value(st.drop_real))),
                     stage_drop_hand: d.stage.as_ref().map(|st| r3(g.value(st.drop_hand))),
                     stage_set_by: d
@@ -127,18 +133,29 @@ pub fn json_report(input: &TeamInput, plan: &TeamPlan) -> JsonPlan {
     }
 }
 
-pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
+/// The plan as a table: one line per diver, the set and diver columns as wide as their
+/// longest entry so no column moves.
+pub fn text_report(input: &TeamInput, plan: &TeamPlan, labels: &SetLabels) -> String {
     let u = input.units;
     let vu = u.volume_label();
     let mut s = String::new();
     s.push_str(&format!(
-        "Turn pressures, rule of {}, water {:.0} {}; each diver's start and TURN on their own gauge, in the unit shown\n\n",
+        "Turn pressures, rule of {}, water {} {}; each diver's start and TURN on their own gauge, in the unit shown\n\n",
         input.rule.name(),
-        u.temperature_value(input.water_temp),
+        shown::degrees(u.temperature_value(input.water_temp)),
         u.temperature_label()
     ));
+    let set_names: Vec<String> = (0..plan.divers.len())
+        .map(|i| labels.set_name(input, i))
+        .collect();
+    let widest = |lens: Vec<usize>, least: usize| lens.into_iter().max().unwrap_or(0).max(least);
+    let nw = widest(
+        plan.divers.iter().map(|d| d.name.chars().count()).collect(),
+        16,
+    );
+    let cw = widest(set_names.iter().map(|n| n.chars().count()).collect(), 26);
     s.push_str(&format!(
-        "  {:<16} {:<26} {:<10} {:>7} {:>7} {:<4} {:<9} {:<12} {:>14} {:>8}\n",
+        "  {:<nw$} {:<cw$} {:<10} {:>7} {:>7} {:<4} {:<9} {:<12} {:>14} {:>8}\n",
         "diver",
         "cylinders",
         "mix",
@@ -163,9 +180,9 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
             .map(shown::minutes)
             .unwrap_or_else(|| "-".into());
         s.push_str(&format!(
-            "{mark} {:<16} {:<26} {:<10} {:>7} {:>7} {:<4} {:<9} {:<12} {:>14} {:>8}\n",
+            "{mark} {:<nw$} {:<cw$} {:<10} {:>7} {:>7} {:<4} {:<9} {:<12} {:>14} {:>8}\n",
             d.name,
-            inp.cylinders.describe(),
+            set_names[i],
             inp.mix.label(),
             shown::start(g.value(d.start)),
             shown::turn(d.turn_shown_value),
@@ -205,14 +222,18 @@ pub fn text_report(input: &TeamInput, plan: &TeamPlan) -> String {
             input.rule.name()
         ));
         for (i, d) in plan.divers.iter().enumerate() {
-            if let (Some(st), Some(si)) = (&d.stage, &input.divers[i].stage) {
+            if let (Some(st), Some(si), Some(stage_name)) = (
+                &d.stage,
+                &input.divers[i].stage,
+                labels.stage_name(input, i),
+            ) {
                 let g = d.gauge;
                 s.push_str(&format!(
-                    "{} {:<16} drop stage at {} {u} ({}, {}, start {} {u}; {})\n",
+                    "{} {:<nw$} drop stage at {} {u} ({}, {}, start {} {u}; {})\n",
                     if st.controlling { "*" } else { " " },
                     d.name,
                     shown::turn(st.drop_shown_value),
-                    si.cylinders.describe(),
+                    stage_name,
                     si.mix.label(),
                     shown::start(g.value(st.start)),
                     st.set_by.describe(),

@@ -4,7 +4,7 @@
 
 use crate::i18n::{tr, tr_with};
 use crate::plan::shown;
-use crate::plan::{PairChart, TeamInput, TeamPlan};
+use crate::plan::{PairChart, SetLabels, TeamInput, TeamPlan};
 
 pub use super::svg_page::{FONT, PAGE_H, PAGE_W, wrap, xml_escape};
 use super::svg_page::{MARGIN, Page, svg_of};
@@ -24,6 +24,37 @@ pub struct CardHeading {
     /// When each diver's start was read ("read 09:42"), in team order; empty when not
     /// known (the command line plans from a file).
     pub read_at: Vec<String>,
+    /// What the divers called their sets; each is written by its one name
+    /// (`plan::set_name`), as the app and `plan` write it.
+    pub labels: SetLabels,
+}
+
+/// Size of a diver's turn figure, mm.
+const TURN_SIZE: f64 = 8.5;
+/// Mean advance of a character, in ems: Roboto's letters average under half an em (the
+/// demo card's lines measured 0.44 to 0.47 em in its rendering, our own measurement); its
+/// bold digits are about 0.56 em. Rounded up, so an estimate is never short.
+const TEXT_EM: f64 = 0.48;
+const BOLD_DIGIT_EM: f64 = 0.58;
+
+/// How wide `text` is estimated to be at `size` mm.
+fn estimated_width(text: &str, size: f64, em: f64) -> f64 {
+    text.chars().count() as f64 * size * em
+}
+
+/// `text` in lines that fit `width` mm at `size` mm: wrapped at spaces into at most
+/// `max_lines` lines, and made smaller (not under 60 %) while it would still run over.
+fn fit(text: &str, width: f64, size: f64, max_lines: usize) -> (Vec<String>, f64) {
+    let mut s = size;
+    loop {
+        let per_line = (width / (s * TEXT_EM)).floor().max(1.0) as usize;
+        let lines = wrap(text, per_line);
+        let fits = lines.len() <= max_lines && lines.iter().all(|l| l.chars().count() <= per_line);
+        if fits || s < size * 0.6 {
+            return (lines, s);
+        }
+        s *= 0.95;
+    }
 }
 
 /// The card page for a planned team.
@@ -89,58 +120,55 @@ fn card_page(heading: &CardHeading, team: &TeamInput, plan: &TeamPlan) -> Page {
             d.name.clone()
         };
         p.text(MARGIN, top + 4.5, 3.8, true, "start", &name);
-        p.text(
-            MARGIN,
-            top + 8.3,
-            2.8,
-            false,
-            "start",
-            &format!("{} · {}", inp.cylinders.describe(), inp.mix.label()),
-        );
+        // The set's line ends before the turn figure beside it.
+        let turn = format!("{} {}", shown::turn(d.turn_shown_value), g.label());
+        let beside = right - estimated_width(&turn, TURN_SIZE, BOLD_DIGIT_EM) - 2.0;
+        let set = heading.labels.set_name(team, i);
+        let (set, size) = fit(&set, beside - MARGIN, 2.8, 1);
+        p.text(MARGIN, top + 8.3, size, false, "start", &set.join(" "));
         p.text(
             MARGIN,
             top + 11.8,
             2.8,
             false,
             "start",
-            &match heading.read_at.get(i).filter(|r| !r.is_empty()) {
-                Some(read) => tr_with(
-                    "start {0} {1} ({2})",
-                    &[&shown::start(g.value(d.start)), &g.label(), read],
-                ),
-                None => tr_with(
-                    "start {0} {1}",
-                    &[&shown::start(g.value(d.start)), &g.label()],
-                ),
-            },
+            &format!(
+                "{} · {}",
+                inp.mix.label(),
+                match heading.read_at.get(i).filter(|r| !r.is_empty()) {
+                    Some(read) => tr_with(
+                        "start {0} {1} ({2})",
+                        &[&shown::start(g.value(d.start)), &g.label(), read],
+                    ),
+                    None => tr_with(
+                        "start {0} {1}",
+                        &[&shown::start(g.value(d.start)), &g.label()],
+                    ),
+                }
+            ),
         );
         p.text(right - 38.0, top + 4.3, 2.6, false, "end", &tr("TURN"));
-        p.text(
-            right,
-            top + 10.5,
-            8.5,
-            true,
-            "end",
-            &format!("{} {}", shown::turn(d.turn_shown_value), g.label()),
-        );
-        if let (Some(st), Some(si)) = (&d.stage, &inp.stage) {
-            p.text(
-                MARGIN,
-                top + 15.3,
-                2.8,
-                true,
-                "start",
-                &tr_with(
-                    "drop stage at {0} {1} ({2}, {3}, start {4} {1})",
-                    &[
-                        &shown::turn(st.drop_shown_value),
-                        &g.label(),
-                        &si.cylinders.describe(),
-                        &si.mix.label(),
-                        &shown::start(g.value(st.start)),
-                    ],
-                ),
+        p.text(right, top + 10.5, TURN_SIZE, true, "end", &turn);
+        if let (Some(st), Some(si), Some(stage_name)) =
+            (&d.stage, &inp.stage, heading.labels.stage_name(team, i))
+        {
+            let drop = tr_with(
+                "drop stage at {0} {1} ({2}, {3}, start {4} {1})",
+                &[
+                    &shown::turn(st.drop_shown_value),
+                    &g.label(),
+                    &stage_name,
+                    &si.mix.label(),
+                    &shown::start(g.value(st.start)),
+                ],
             );
+            // A second line where the diver's block has room for it, else smaller type.
+            let room = if block >= 15.3 + 3.3 + 1.5 { 2 } else { 1 };
+            let (lines, size) = fit(&drop, right - MARGIN, 2.8, room);
+            for (k, line) in lines.iter().enumerate() {
+                let at = top + 15.3 + k as f64 * size * 1.18;
+                p.text(MARGIN, at, size, true, "start", line);
+            }
         }
         p.line(MARGIN, top + block, right, top + block, 0.2);
     }

@@ -3,6 +3,9 @@
 //! - `2x12L@232bar`: two cylinders of 12 L water capacity, working pressure 232 bar;
 //! - `1x80cuft@3000psi`: one cylinder rated 80 cu ft of free gas at 3000 psi.
 //!
+//! - `2x11.1L@207bar:indep`: two independent cylinders (sidemount) rather than twins on a
+//!   manifold; `:independent` is read too, and only a pair can be independent.
+//!
 //! `COUNTx` may be left out (one cylinder). Letters are case-insensitive, spaces are
 //! ignored, `×` may stand for `x` and a decimal comma for a decimal point. A size in L
 //! goes with a rating in bar, a size in cu ft with a rating in psi. Ranges are the
@@ -65,6 +68,19 @@ pub fn parse_cylinder_spec(text: &str) -> Result<CylinderSet, InputError> {
         .collect();
     if s.is_empty() {
         return Err(bad(shown, "no cylinder set given"));
+    }
+    let (s, independent) = match s
+        .strip_suffix(":independent")
+        .or_else(|| s.strip_suffix(":indep"))
+    {
+        Some(rest) => (rest.to_string(), true),
+        None => (s, false),
+    };
+    if s.contains(':') {
+        return Err(bad(
+            shown,
+            "after ':' only 'indep' is read (a pair of independent cylinders)",
+        ));
     }
     let Some((left, rating)) = s.split_once('@') else {
         return Err(bad(
@@ -137,15 +153,30 @@ pub fn parse_cylinder_spec(text: &str) -> Result<CylinderSet, InputError> {
             ));
         }
     };
-    let set = CylinderSet::new(count, spec);
+    if independent && count != 2 {
+        return Err(InputError::new(
+            "SPEC.count",
+            format!("'{shown}': only a pair can be independent (2x…:indep); write {SPEC_FORM}"),
+        ));
+    }
+    let set = CylinderSet {
+        count,
+        independent,
+        spec,
+    };
     validate_cylinders(UnitSystem::Metric, "SPEC", &set)?;
     Ok(set)
 }
 
 /// The canonical one-line form of a set, which `parse_cylinder_spec` reads back exactly
-/// (shortest decimal that round-trips, no exponent).
+/// (shortest decimal that round-trips, no exponent; `:indep` for an independent pair).
 pub fn format_cylinder_spec(set: &CylinderSet) -> String {
-    match set.spec {
+    let indep = if set.is_independent_pair() {
+        ":indep"
+    } else {
+        ""
+    };
+    let one = match set.spec {
         CylinderSpec::Stamped {
             water_l,
             working_bar,
@@ -154,7 +185,8 @@ pub fn format_cylinder_spec(set: &CylinderSet) -> String {
             rated_cuft,
             rated_psi,
         } => format!("{}x{}cuft@{}psi", set.count, rated_cuft, rated_psi),
-    }
+    };
+    one + indep
 }
 
 #[cfg(test)]
@@ -197,6 +229,16 @@ mod tests {
             parse_cylinder_spec("7L@232bar").unwrap(),
             stamped(1, 7.0, 232.0)
         );
+        // An independent pair (sidemount), in both spellings.
+        let pair = CylinderSet::independent_pair(CylinderSpec::Stamped {
+            water_l: 11.1,
+            working_bar: 207.0,
+        });
+        assert_eq!(parse_cylinder_spec("2x11.1L@207bar:indep").unwrap(), pair);
+        assert_eq!(
+            parse_cylinder_spec("2 x 11.1 L @ 207 bar : Independent").unwrap(),
+            pair
+        );
     }
 
     #[test]
@@ -219,6 +261,8 @@ mod tests {
             ("2x40L@232bar", "SPEC.water_l", "out of range"),
             ("2x12L@20bar", "SPEC.working_bar", "out of range"),
             ("1x80cuft@300psi", "SPEC.rated_psi", "out of range"),
+            ("1x12L@232bar:indep", "SPEC.count", "only a pair"),
+            ("2x12L@232bar:manifold", "SPEC", "only 'indep'"),
         ];
         for (text, field, why) in cases {
             let e = parse_cylinder_spec(text).unwrap_err();
@@ -239,6 +283,10 @@ mod tests {
             stamped(2, 12.0, 232.0),
             stamped(1, 11.1, 207.0),
             stamped(4, 5.5, 300.0),
+            CylinderSet::independent_pair(CylinderSpec::Rated {
+                rated_cuft: 77.4,
+                rated_psi: 3000.0,
+            }),
         ] {
             let text = format_cylinder_spec(&set);
             assert_eq!(parse_cylinder_spec(&text).unwrap(), set, "{text}");

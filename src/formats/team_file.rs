@@ -5,9 +5,12 @@ use serde::{Deserialize, Serialize};
 
 use crate::plan::error::InputError;
 use crate::plan::{
-    CylinderSet, CylinderSpec, DiverInput, Gauge, Mix, PressureUnit, Rule, StageInput, TeamInput,
-    UnitSystem, Water,
+    CylinderSet, CylinderSpec, DiverInput, Gauge, Mix, PressureUnit, Rule, SetLabels, StageInput,
+    TeamInput, UnitSystem, Water,
 };
+
+/// Longest set name a team file gives, in characters (a locker set's limit).
+pub const MAX_SET_NAME_CHARS: usize = 40;
 
 #[derive(Clone, Debug, PartialEq, Serialize, Deserialize)]
 #[serde(deny_unknown_fields)]
@@ -37,6 +40,10 @@ fn default_rule() -> String {
 #[serde(deny_unknown_fields)]
 pub struct DiverFile {
     pub name: String,
+    /// What the diver calls these cylinders ("Cave 12s"); without it, the set's one name
+    /// (`plan::set_name`).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub set_name: Option<String>,
     pub cylinders: CylindersFile,
     #[serde(default)]
     pub mix: Mix,
@@ -68,6 +75,9 @@ pub struct GaugeFile {
 #[derive(Clone, Debug, PartialEq, Serialize, Deserialize)]
 #[serde(deny_unknown_fields)]
 pub struct StageFile {
+    /// What the diver calls the stage, as `set_name` of the diver.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub set_name: Option<String>,
     pub cylinders: CylindersFile,
     #[serde(default)]
     pub mix: Mix,
@@ -155,6 +165,21 @@ impl CylindersFile {
             spec,
         })
     }
+}
+
+/// A set name from a file: trimmed and normalised, 1 to [`MAX_SET_NAME_CHARS`]
+/// characters, checked like a diver's name; the error names `field`.
+pub fn check_set_label(field: &str, name: &str) -> Result<String, InputError> {
+    let t = crate::plan::text::nfc(name.trim());
+    let n = t.chars().count();
+    if n == 0 || n > MAX_SET_NAME_CHARS {
+        return Err(InputError::new(
+            field,
+            format!("a set name of 1 to {MAX_SET_NAME_CHARS} characters; got {n}"),
+        ));
+    }
+    crate::plan::text::check_text(field, &t)?;
+    Ok(t)
 }
 
 impl TeamFile {
@@ -247,6 +272,27 @@ impl TeamFile {
         })
     }
 
+    /// The set names the file gives (`set_name` of each diver and stage), in team order;
+    /// empty where it gives none. A name is 1 to 40 characters once trimmed, checked like
+    /// a diver's name.
+    pub fn set_labels(&self) -> Result<SetLabels, InputError> {
+        let label = |field: String, name: &Option<String>| match name {
+            None => Ok(String::new()),
+            Some(name) => check_set_label(&field, name),
+        };
+        let mut labels = SetLabels::default();
+        for (i, d) in self.divers.iter().enumerate() {
+            labels
+                .sets
+                .push(label(format!("divers[{i}].set_name"), &d.set_name)?);
+            let stage = d.stage.as_ref().and_then(|st| st.set_name.clone());
+            labels
+                .stages
+                .push(label(format!("divers[{i}].stage.set_name"), &stage)?);
+        }
+        Ok(labels)
+    }
+
     /// The file form of planning inputs.
     pub fn from_input(t: &TeamInput) -> TeamFile {
         let u = t.units;
@@ -270,6 +316,7 @@ impl TeamFile {
                     let g = t.gauge_of(i);
                     DiverFile {
                         name: d.name.clone(),
+                        set_name: None,
                         cylinders: CylindersFile::from_set(&d.cylinders),
                         mix: d.mix,
                         start: round6(g.value(d.start)),
@@ -281,6 +328,7 @@ impl TeamFile {
                             .sac_l_per_min
                             .map(|s| round6(u.volume_value(crate::plan::Volume::from_litres(s)))),
                         stage: d.stage.as_ref().map(|st| StageFile {
+                            set_name: None,
                             cylinders: CylindersFile::from_set(&st.cylinders),
                             mix: st.mix,
                             start: round6(g.value(st.start)),
@@ -342,6 +390,21 @@ mod tests {
         let t = t.replace(",\"step\":5", "");
         let input = TeamFile::parse(&t).unwrap().to_input().unwrap();
         assert_eq!(input.gauge_of(1).step, 10.0);
+    }
+
+    #[test]
+    fn set_names_are_read_and_checked() {
+        let t = TEXT.replace(r#"{"name":"A","#, r#"{"name":"A","set_name":" Cave 80s ","#);
+        let f = TeamFile::parse(&t).unwrap();
+        let labels = f.set_labels().unwrap();
+        assert_eq!(labels.sets, ["Cave 80s", ""]);
+        assert_eq!(labels.stages, ["", ""]);
+        let long = t.replace("Cave 80s", &"x".repeat(41));
+        let e = TeamFile::parse(&long).unwrap().set_labels().unwrap_err();
+        assert_eq!(e.field, "divers[0].set_name", "{e}");
+        let stage = TEXT.replace(r#""stage":{"#, r#""stage":{"set_name":"","#);
+        let e = TeamFile::parse(&stage).unwrap().set_labels().unwrap_err();
+        assert_eq!(e.field, "divers[1].stage.set_name", "{e}");
     }
 
     #[test]

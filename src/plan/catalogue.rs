@@ -2,7 +2,7 @@
 //! divers should check their own stamps.
 
 use super::cylinders::{CylinderSet, CylinderSpec};
-use crate::i18n::{Language, LanguageScope, tr, tr_with};
+use crate::i18n::{tr, tr_with};
 
 /// Cylinder material, for the locker's description.
 #[derive(Clone, Copy, Debug, PartialEq, Eq, serde::Serialize, serde::Deserialize, Default)]
@@ -113,25 +113,6 @@ pub fn current_preset_name(name: &str) -> &str {
         .iter()
         .find(|(old, _)| *old == name)
         .map_or(name, |(_, now)| now)
-}
-
-/// A set's name as people read it in this thread's language: a preset's name or a name
-/// made from the sizes (in any language) is written anew, with this language's words and
-/// decimal separator; a name the diver typed is kept as typed.
-pub fn shown_label(label: &str, set: &CylinderSet) -> String {
-    let label = current_preset_name(label);
-    if let Some(p) = presets().into_iter().find(|p| p.name == label) {
-        return p.shown_name();
-    }
-    let made = Language::ALL.iter().any(|&l| {
-        let _scope = LanguageScope::new(l);
-        set.describe() == label
-    });
-    if made {
-        set.describe()
-    } else {
-        label.to_string()
-    }
 }
 
 /// The catalogue: metric stamps first, then imperial ratings. Each name gives the count
@@ -291,33 +272,5 @@ mod tests {
         }
         // Every name fits a locker entry's name (40 characters).
         assert!(all.iter().all(|p| p.name.chars().count() <= 40));
-    }
-
-    #[test]
-    fn set_names_are_written_in_the_readers_language_unless_typed() {
-        use crate::i18n::{Language, LanguageScope};
-        let sm = presets()
-            .into_iter()
-            .find(|p| p.name == "Sidemount aluminium 77.4 cu ft 3000 psi")
-            .unwrap();
-        let twin = CylinderSet::new(
-            2,
-            CylinderSpec::Stamped {
-                water_l: 11.1,
-                working_bar: 232.0,
-            },
-        );
-        let made_in_english = twin.describe();
-        let _de = LanguageScope::new(Language::German);
-        // A preset, a name made in English, an old preset name, a typed name.
-        let preset = shown_label(sm.name, &sm.set);
-        assert!(
-            preset.contains("77,4") && preset.contains("Aluminium"),
-            "{preset}"
-        );
-        let made = shown_label(&made_in_english, &twin);
-        assert!(made.contains("11,1") && made != made_in_english, "{made}");
-        assert_eq!(shown_label("Sidemount 2 × aluminium 80", &sm.set), preset);
-        assert_eq!(shown_label("My 11.1 doubles", &twin), "My 11.1 doubles");
     }
 }

@@ -157,10 +157,10 @@ impl CylinderSet {
     pub fn working_pressure(&self) -> Pressure {
         self.spec.working_pressure()
     }
-    /// The set's one name, the same in the app, on the command line and on the card:
-    /// "Single 15 L 232 bar", "Twin 12 L 232 bar", "2 × 12 L 232 bar, independent",
-    /// "3 × 40 cu ft 3000 psi". The words are in this thread's language, the figures
-    /// with its decimal separator.
+    /// The name made from the sizes: "Single 15 L 232 bar", "Twin 12 L 232 bar",
+    /// "2 × 12 L 232 bar, independent", "3 × 40 cu ft 3000 psi". The words are in this
+    /// thread's language, the figures with its decimal separator. Front ends write a set
+    /// by its one name, [`crate::plan::set_name`], which falls back on this one.
     pub fn describe(&self) -> String {
         let one = self.spec.describe();
         match self.count {

@@ -52,6 +52,7 @@ mod gauge;
 mod hand_check;
 mod matching;
 mod mix;
+mod naming;
 mod out_of_gas;
 mod pencil;
 mod real_gas;
@@ -77,9 +78,11 @@ pub use units::{
 // Rounding to the gauge graduation: turns up, starts down, nudges to the next mark.
 pub use rounding::{next_step, round_down_to_step, round_up_to_step};
 // Gases and cylinders, and the generic presets.
-pub use catalogue::{Material, Preset, current_preset_name, presets, shown_label};
+pub use catalogue::{Material, Preset, current_preset_name, presets};
+// A set's one name, for every front end.
 pub use cylinders::{CylinderSet, CylinderSpec, rating_temperature};
 pub use mix::{Composition, Mix};
+pub use naming::{SetLabels, is_made_name, set_name, shown_label};
 // The two gas models: tank factors (pencil arithmetic) and real gas (GERG-2008).
 pub use gas_model::{
     ContentModel, HandModel, MAX_MODEL_PRESSURE_BAR, ModelKind, bracketed_pressure,

@@ -172,3 +172,26 @@ fn a_typed_name_gets_a_warning_when_the_sizes_change() {
     assert_eq!(l.draft().unwrap().name_warning(), None);
     assert_eq!(l.draft().unwrap().sizes(), Some(stamped(2, 11.0, 232.0)));
 }
+
+#[test]
+fn an_independent_pair_is_named_as_the_core_names_it() {
+    let mut d = Draft::blank();
+    d.independent = true;
+    let before = d.clone();
+    d.first = Some(11.1);
+    d.second = Some(207.0);
+    d.follow_sizes(&before);
+    assert_eq!(d.name, "2 × 11.1 L 207 bar, independent");
+    let before = d.clone();
+    d.first = Some(12.0);
+    d.follow_sizes(&before);
+    assert_eq!(d.name, "2 × 12 L 207 bar, independent");
+    // A name the core made, so each language writes it its own way.
+    let set = d.sizes().unwrap();
+    let _de = crate::i18n::LanguageScope::new(crate::i18n::Language::German);
+    let shown = crate::plan::shown_label(&d.name, &set);
+    assert!(
+        shown != d.name && shown.starts_with("2 × 12 L 207 bar"),
+        "{shown}"
+    );
+}

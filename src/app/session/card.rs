@@ -60,6 +60,7 @@ impl Session {
                 stamp.format("%Y %H:%M")
             )),
             read_at: (0..input.divers.len()).map(|i| self.read_text(i)).collect(),
+            labels: self.team.set_labels(),
         };
         let svg = card_svg(&heading, input, self.team.plan(), &charts);
         let name = format!("turnsheet-card-{}.svg", stamp.format("%Y-%m-%d-%H%M%S"));

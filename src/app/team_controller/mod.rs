@@ -6,7 +6,8 @@ use crate::plan::error::InputError;
 use crate::plan::next_step;
 use crate::plan::round_down_to_step;
 use crate::plan::{
-    Gauge, Mix, Pressure, Rule, TeamInput, TeamPlan, UnitSystem, current_preset_name, plan_team,
+    Gauge, Mix, Pressure, Rule, SetLabels, TeamInput, TeamPlan, UnitSystem, current_preset_name,
+    plan_team,
 };
 use crate::storage::team_state::{TEAM_SCHEMA, TeamState};
 
@@ -114,14 +115,21 @@ impl TeamController {
     pub fn stage_labels(&self) -> &[String] {
         &self.stage_labels
     }
-    /// Diver `i`'s set as people read it in this language (see [`crate::plan::shown_label`]).
-    pub fn shown_label(&self, i: usize) -> String {
-        crate::plan::shown_label(&self.labels[i], &self.input.divers[i].cylinders)
+    /// Every diver's labels, for the card and the plan's other front ends.
+    pub fn set_labels(&self) -> SetLabels {
+        SetLabels {
+            sets: self.labels.clone(),
+            stages: self.stage_labels.clone(),
+        }
     }
-    /// Diver `i`'s stage as people read it in this language; empty without a stage.
+    /// Diver `i`'s set by its one name, in this language (see [`crate::plan::set_name`]).
+    pub fn shown_label(&self, i: usize) -> String {
+        crate::plan::set_name(Some(&self.labels[i]), &self.input.divers[i].cylinders)
+    }
+    /// Diver `i`'s stage by its one name, in this language; empty without a stage.
     pub fn shown_stage_label(&self, i: usize) -> String {
         match &self.input.divers[i].stage {
-            Some(st) => crate::plan::shown_label(&self.stage_labels[i], &st.cylinders),
+            Some(st) => crate::plan::set_name(Some(&self.stage_labels[i]), &st.cylinders),
             None => String::new(),
         }
     }

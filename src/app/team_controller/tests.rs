@@ -114,6 +114,7 @@ fn a_typed_name_is_stored_in_one_form() {
 #[test]
 fn a_saved_team_with_old_preset_names_loads_with_the_names_of_now() {
     let mut state = demo().to_state();
+    // "Aluminium 80" is a preset's old name on purpose: files saved with it still load.
     state.cylinder_labels = vec!["Aluminium 80".into(), "My own".into(), String::new()];
     let t = TeamController::from_state(&state).unwrap();
     assert_eq!(t.labels()[0], "Single aluminium 77.4 cu ft 3000 psi");

@@ -11,7 +11,7 @@ use crate::plan::{
     turn_sentence,
 };
 
-/// "Drop stage at 140 bar (Aluminium 40, EAN32, start 200 bar)" for a diver with a
+/// "Drop stage at 140 bar (Single aluminium 40 cu ft 3000 psi, EAN32, start 200 bar)" for a diver with a
 /// stage, else empty.
 pub fn stage_text(s: &Session, i: usize) -> String {
     let plan = s.team.plan();
