@@ -306,3 +306,47 @@ fn long_set_names_stay_on_the_page_and_off_the_turns() {
         }
     }
 }
+
+/// Units that stay on the line of their number.
+const UNITS: [&str; 10] = [
+    "L/min", "cu", "bar", "psi", "min", "°C", "°F", "L", "ft", "m",
+];
+
+#[test]
+fn no_card_line_parts_a_number_from_its_unit_in_any_language() {
+    use turnsheet::i18n::{Language, LanguageScope};
+    let team = demo();
+    let plan = plan_team(&team).unwrap();
+    let charts = team_charts(&team, 2, 7).unwrap();
+    let names = plan.names();
+    for l in Language::ALL {
+        let _scope = LanguageScope::new(l);
+        let svg = card_svg(&heading(), &team, &plan, &charts);
+        let lines = texts_of(&svg);
+        for pair in lines.windows(2) {
+            let ends_in_number = pair[0].trim_end().ends_with(|c: char| c.is_ascii_digit());
+            let first = pair[1].split(' ').next().unwrap_or("");
+            let unit = UNITS.contains(&first.trim_end_matches([',', '.', ')', ';']));
+            assert!(
+                !(ends_in_number && unit),
+                "{l:?}: a line ends {:?} and the next begins {:?}",
+                pair[0],
+                pair[1]
+            );
+        }
+        // A no-break space the language writes (French, before ":") is kept.
+        if l == Language::French {
+            assert!(
+                lines.iter().any(|t| t.contains("\u{a0}:")),
+                "French lost its no-break space before ':'"
+            );
+        }
+        // No possessive of a name, in any language (a name may be "Me" or "Chris").
+        for n in &names {
+            for t in &lines {
+                assert!(!t.contains(&format!("{n}'s")), "{l:?}: {t}");
+                assert!(!t.contains(&format!("{n}’s")), "{l:?}: {t}");
+            }
+        }
+    }
+}

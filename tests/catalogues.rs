@@ -304,3 +304,34 @@ fn every_language_has_its_catalogue_and_plural_rule() {
         );
     }
 }
+
+#[test]
+fn no_message_makes_a_possessive_of_a_name() {
+    // "{0}'s start" reads "Me's start" or "Chris's start": a name is never given an
+    // apostrophe-s, in English or in a catalogue.
+    let used = used();
+    let mut found = Vec::new();
+    for m in used.keys() {
+        for text in std::iter::once(&m.msgid).chain(&m.plural) {
+            for mark in ["}'s", "}’s"] {
+                if text.contains(mark) {
+                    found.push(format!("msgid {text:?}"));
+                }
+            }
+        }
+    }
+    for (l, text) in catalogues() {
+        for (msgid, forms) in translations(text) {
+            for f in forms {
+                if f.contains("}'s") || f.contains("}’s") {
+                    found.push(format!("{}: {msgid:?} → {f:?}", l.code()));
+                }
+            }
+        }
+    }
+    assert!(
+        found.is_empty(),
+        "possessives of a name:\n{}",
+        found.join("\n")
+    );
+}

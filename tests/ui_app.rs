@@ -917,7 +917,7 @@ fn the_team_card_is_written_from_starts_read_today_only() {
 }
 
 fn count(app: &App, label: &str) -> usize {
-    ElementHandle::find_by_accessible_label(&app.window, label).count()
+    ui_common::all(app, label).len()
 }
 
 /// Make saving fail, even for root: the data directory is replaced by a file.

@@ -132,3 +132,84 @@ fn the_settings_choice_overrides_the_system_language() {
     again.set_system_language(Language::Italian);
     assert_eq!(again.session.borrow().language(), Language::German);
 }
+
+/// Units that must stay on the line of their number.
+const UNITS: [&str; 11] = [
+    "L/min", "cu ft", "bar", "psi", "min", "°C", "°F", "L", "m", "ft", "%",
+];
+
+/// The first place where a number and its unit are parted by an ordinary space (where
+/// a narrow screen may end the line), if any.
+fn unit_split(text: &str) -> Option<String> {
+    let c: Vec<char> = text.chars().collect();
+    for k in 1..c.len() {
+        if c[k] != ' ' || !c[k - 1].is_ascii_digit() {
+            continue;
+        }
+        let rest: String = c[k + 1..].iter().collect();
+        let unit = UNITS.iter().any(|u| {
+            rest.starts_with(u)
+                && rest[u.len()..]
+                    .chars()
+                    .next()
+                    .is_none_or(|n| !n.is_alphanumeric())
+        });
+        if unit {
+            let from = k.saturating_sub(12);
+            return Some(c[from..(k + 8).min(c.len())].iter().collect());
+        }
+    }
+    None
+}
+
+#[test]
+fn numbers_keep_their_units_in_every_language() {
+    use slint::Model;
+    use turnsheet::app::adapters::refresh_all;
+    use turnsheet::app::ui::{LockerAdapter, PickerAdapter, TurnsAdapter};
+    i_slint_backend_testing::init_no_event_loop();
+    assert!(
+        unit_split("tras unos 18 min.").is_some(),
+        "the check can fail"
+    );
+    assert!(unit_split("18\u{a0}min, 12 Liters").is_none());
+    for l in Language::ALL {
+        let dir = tempfile::tempdir().unwrap();
+        let app = open(dir.path(), l);
+        {
+            let mut s = app.session.borrow_mut();
+            for i in 0..s.team.len() {
+                s.confirm_start(i);
+            }
+            s.open_cylinder_picker(0);
+        }
+        refresh_all(&app.window, &app.session.borrow());
+        let mut shown = Vec::new();
+        let p = app.window.global::<PickerAdapter>();
+        shown.push(p.get_title().to_string());
+        for rows in [p.get_locker(), p.get_singles(), p.get_pairs()] {
+            for r in rows.iter() {
+                shown.push(r.title.to_string());
+                shown.push(r.detail.to_string());
+            }
+        }
+        let k = app.window.global::<LockerAdapter>();
+        for r in k.get_presets().iter() {
+            shown.push(r.name.to_string());
+            shown.push(r.detail.to_string());
+        }
+        for r in k.get_entries().iter() {
+            shown.push(r.name.to_string());
+            shown.push(r.detail.to_string());
+        }
+        let t = app.window.global::<TurnsAdapter>();
+        let first = t.get_first_text().to_string();
+        assert!(!first.is_empty(), "{l:?}: no first-to-turn line");
+        shown.push(first);
+        shown.extend(t.get_warnings().iter().map(|w| w.to_string()));
+        assert!(shown.len() > 20, "{l:?}: {} texts", shown.len());
+        for text in &shown {
+            assert_eq!(unit_split(text), None, "{l:?}: {text:?}");
+        }
+    }
+}

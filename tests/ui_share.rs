@@ -14,6 +14,7 @@ use turnsheet::app::nav::Screen;
 use turnsheet::app::qr_image::{QUIET_ZONE, qr_matrix};
 use turnsheet::app::ui::PlanQrAdapter;
 use turnsheet::app::{App, CLOCK_WATCH};
+use turnsheet::i18n::{Language, tr};
 
 /// 3 December 2026, 09:00 UTC.
 const MORNING: i64 = 1_796_288_400;
@@ -219,6 +220,45 @@ fn six_divers_fit_one_code_that_reads_back_on_a_small_phone() {
     assert!(m.version <= 20, "version {}", m.version);
     assert!(per_module >= 3.0, "{per_module} px per module");
     assert_eq!(decode_screen(&app), vec![text]);
+    // In every language the same team still fits one code of at most version 20.
+    for l in Language::ALL {
+        app.set_system_language(l);
+        let text = plan_text(&app);
+        let m = qr_matrix(&text).expect("one code");
+        println!("{l:?}: {} bytes, QR version {}", text.len(), m.version);
+        assert!(m.version <= 20, "{l:?}: version {}\n{text}", m.version);
+    }
+}
+
+/// The caption over a code.
+const CAPTION: &str = "Point a phone camera at the code: it reads the plan as plain text, with no app and no network.";
+
+#[test]
+fn the_code_and_its_caption_speak_the_screen_language() {
+    software_backend();
+    let dir = tempfile::tempdir().unwrap();
+    let clock = ManualClock::at(MORNING);
+    let app = small_phone(dir.path(), &clock, 3);
+    read_every_gauge(&app);
+    let english = plan_text(&app);
+    for l in [Language::German, Language::French, Language::Spanish] {
+        app.set_system_language(l);
+        app.session.borrow_mut().open_plan_qr();
+        refresh_all(&app.window, &app.session.borrow());
+        let a = app.window.global::<PlanQrAdapter>();
+        assert!(a.get_open(), "{l:?}");
+        let caption = a.get_caption().to_string();
+        assert_eq!(caption, tr(CAPTION), "{l:?}");
+        assert_ne!(caption, CAPTION, "{l:?}: the caption is English");
+        // The code reads back as the plan in the diver's words, letters like "ü" and
+        // "é" included.
+        let text = plan_text(&app);
+        assert_eq!(decode_adapter(&app), vec![text.clone()], "{l:?}");
+        for (ours, en) in text.lines().zip(english.lines()) {
+            assert_ne!(ours, en, "{l:?}: an English line");
+        }
+        app.session.borrow_mut().close_plan_qr();
+    }
 }
 
 #[test]

@@ -30,7 +30,10 @@ fn values(app: &App, label: &str) -> Vec<String> {
         .match_descendants()
         .match_predicate({
             let label = label.to_string();
-            move |e| e.accessible_label().as_deref() == Some(label.as_str())
+            move |e| {
+                e.accessible_label()
+                    .is_some_and(|l| l.replace('\u{a0}', " ") == label)
+            }
         })
         .find_all()
         .into_iter()
@@ -61,8 +64,16 @@ fn entry_warning(app: &App) -> String {
 }
 
 fn press(app: &App, label: &str) {
-    ElementHandle::find_by_accessible_label(&app.window, label)
-        .next()
+    use i_slint_backend_testing::ElementRoot;
+    let want = label.to_string();
+    app.window
+        .root_element()
+        .query_descendants()
+        .match_predicate(move |e| {
+            e.accessible_label()
+                .is_some_and(|l| l.replace('\u{a0}', " ") == want)
+        })
+        .find_first()
         .unwrap_or_else(|| panic!("no element labelled {label:?}"))
         .invoke_accessible_default_action();
 }

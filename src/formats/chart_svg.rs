@@ -24,7 +24,7 @@ pub(super) fn chart_page(team: &TeamInput, chart: &PairChart) -> Page {
     y += 4.5;
     for line in wrap(
         &tr_with(
-            "Rows: {0}'s start ({1}). Columns: {2}'s start ({3}). Cells: {0}'s turn ({1}). Between lines, read the next higher own start and the next lower teammate start; with more teammates keep the highest turn.",
+            "Rows: start read by {0} ({1}). Columns: start read by {2} ({3}). Cells: turn for {0} ({1}). Between lines, read the next higher own start and the next lower teammate start; with more teammates keep the highest turn.",
             &[&me.name, &mu, &buddy.name, &bu],
         ),
         64,

@@ -27,18 +27,57 @@ pub fn xml_escape(s: &str) -> String {
     out
 }
 
-/// Split text into lines of at most `width` characters at spaces.
+/// Where a line may end: an ordinary space. A no-break space (U+00A0, U+2007, U+202F,
+/// the French space before ":" or in "1 447") never ends a line and stays in the text.
+fn breaks_at(c: char) -> bool {
+    c.is_whitespace() && !matches!(c, '\u{a0}' | '\u{2007}' | '\u{202f}')
+}
+
+/// Units that stay on the line of the number before them.
+const UNITS: [&str; 12] = [
+    "L/min", "cu", "bar", "psi", "min", "°C", "°F", "L", "m", "ft", "%", "×",
+];
+
+/// Whether `word` is a unit that belongs to the number before it ("L", "bar)", "min.").
+fn is_unit(word: &str) -> bool {
+    let bare = word.trim_end_matches([',', ';', ':', ')', '.']);
+    UNITS.contains(&bare) || UNITS.contains(&word)
+}
+
+/// The words of `text` between breakable spaces, a number and its unit joined into one
+/// ("1447 L", "77.4 cu ft") so no line ends between them.
+fn words(text: &str) -> Vec<String> {
+    let mut out: Vec<String> = Vec::new();
+    for w in text.split(breaks_at).filter(|w| !w.is_empty()) {
+        let glue = out.last().is_some_and(|last| {
+            let after_number = last.ends_with(|c: char| c.is_ascii_digit()) && is_unit(w);
+            after_number || (last.ends_with(" cu") && w.starts_with("ft"))
+        });
+        match out.last_mut() {
+            Some(last) if glue => {
+                last.push(' ');
+                last.push_str(w);
+            }
+            _ => out.push(w.to_string()),
+        }
+    }
+    out
+}
+
+/// Split text into lines of at most `width` characters at ordinary spaces, never between
+/// a number and its unit nor at a no-break space (a word longer than the line gets a
+/// line of its own).
 pub fn wrap(text: &str, width: usize) -> Vec<String> {
     let mut lines = Vec::new();
     let mut line = String::new();
-    for word in text.split_whitespace() {
+    for word in words(text) {
         if !line.is_empty() && line.chars().count() + 1 + word.chars().count() > width {
             lines.push(std::mem::take(&mut line));
         }
         if !line.is_empty() {
             line.push(' ');
         }
-        line.push_str(word);
+        line.push_str(&word);
     }
     if !line.is_empty() {
         lines.push(line);
@@ -113,5 +152,26 @@ mod tests {
     fn wraps_at_spaces_and_escapes() {
         assert_eq!(wrap("aa bb cc dd", 5), vec!["aa bb", "cc dd"]);
         assert_eq!(xml_escape("A<B & 'C'"), "A&lt;B &amp; &apos;C&apos;");
+    }
+
+    #[test]
+    fn never_breaks_at_a_no_break_space_and_keeps_it() {
+        // French puts a no-break space before ":"; a narrow one groups thousands.
+        let fr = "Lignes\u{a0}: départ lu par Ines, 1\u{202f}447 L";
+        let lines = wrap(fr, 8);
+        assert_eq!(lines[0], "Lignes\u{a0}:", "{lines:?}");
+        assert!(lines.iter().any(|l| l == "1\u{202f}447 L"), "{lines:?}");
+        assert_eq!(lines.concat().matches('\u{a0}').count(), 1, "kept");
+    }
+
+    #[test]
+    fn never_ends_a_line_between_a_number_and_its_unit() {
+        assert_eq!(wrap("total = 1447 L", 8), vec!["total =", "1447 L"]);
+        assert_eq!(
+            wrap("Ines 77.4 cu ft, 12 L) at 23 min.", 9),
+            vec!["Ines", "77.4 cu ft,", "12 L) at", "23 min."]
+        );
+        // Text with no number keeps breaking as before; a lone letter is a word.
+        assert_eq!(wrap("plan A L B", 6), vec!["plan A", "L B"]);
     }
 }

@@ -191,9 +191,27 @@ impl Warning {
     /// The warning in words, led by the diver's name where it is about one diver.
     pub fn describe(&self, names: &[String]) -> String {
         match self.diver().and_then(|i| names.get(i)) {
-            Some(name) => format!("{name}: {}", self.detail()),
+            Some(name) => tr_with("{0}: {1}", &[name, &after_name(&self.detail())]),
             None => self.detail(),
         }
+    }
+}
+
+/// A sentence as it follows "name:" in this thread's language. French, Spanish, Italian
+/// and Portuguese go on in lower case after a colon; English and German keep the
+/// sentence's capital (the languages' usual typography, from memory). A word in capitals
+/// ("SAC", "EAN32") keeps them.
+fn after_name(detail: &str) -> String {
+    use crate::i18n::{Language, language};
+    if matches!(language(), Language::English | Language::German) {
+        return detail.to_string();
+    }
+    let mut c = detail.chars();
+    match (c.next(), c.clone().next()) {
+        (Some(first), Some(second)) if !second.is_uppercase() => {
+            first.to_lowercase().collect::<String>() + c.as_str()
+        }
+        _ => detail.to_string(),
     }
 }
 
@@ -248,5 +266,36 @@ mod tests {
         );
         assert!(w.brief().len() < w.detail().len());
         assert_eq!(Warning::NoGasSpent.brief(), Warning::NoGasSpent.detail());
+    }
+
+    #[test]
+    fn each_language_sets_the_punctuation_after_the_name() {
+        use crate::i18n::{Language, LanguageScope};
+        let w = Warning::Overfill {
+            diver: 0,
+            supply: Supply::Main,
+            start: 330.0,
+            working: 300.0,
+            unit: PressureUnit::Bar,
+        };
+        let names = vec!["Sol".to_string()];
+        // French puts a no-break space before the colon and goes on in lower case.
+        let fr = {
+            let _fr = LanguageScope::new(Language::French);
+            w.describe(&names)
+        };
+        assert!(fr.starts_with("Sol\u{a0}: "), "{fr}");
+        let after = fr["Sol\u{a0}: ".len()..].chars().next().unwrap();
+        assert!(after.is_lowercase(), "{fr}");
+        // German keeps the capital of the noun after the colon.
+        let de = {
+            let _de = LanguageScope::new(Language::German);
+            w.describe(&names)
+        };
+        assert!(de.starts_with("Sol: "), "{de}");
+        assert!(de["Sol: ".len()..].starts_with(char::is_uppercase), "{de}");
+        let _fr = LanguageScope::new(Language::French);
+        assert_eq!(after_name("SAC unknown"), "SAC unknown");
+        assert_eq!(after_name("Overfill"), "overfill");
     }
 }

@@ -64,8 +64,10 @@ pub fn data_card_dir(data_dir: &Path) -> PathBuf {
 
 /// Where the app's team cards go so that their owner can open them. Desktop: the
 /// user's Documents folder if it exists, else Downloads, else `<data dir>/cards`.
-/// Android: `<data dir>/cards` (app storage) for now; the shared Downloads collection
-/// needs the platform's media store (DEVELOPERS.md, "Android").
+/// Android: `<data dir>/cards` (app storage), the copy the app keeps; the platform start
+/// also hands each card to the shared Downloads collection (Download/Turnsheet, through
+/// the media store: `platform/android_share.rs`, `Exchange::publish_card`), where the
+/// phone's file apps open it.
 pub fn user_card_dir(data_dir: &Path) -> PathBuf {
     if cfg!(target_os = "android") {
         return data_card_dir(data_dir);

@@ -8,9 +8,19 @@ use slint::ComponentHandle;
 use turnsheet::app::App;
 use turnsheet::app::ui::{Nav, Page};
 
-/// Every element labelled `label`.
+/// Every element labelled `label`. A no-break space in a label (kept between a number and
+/// its unit, "pick Twin 12 L 232 bar") matches an ordinary space in `label`.
 pub fn all(app: &App, label: &str) -> Vec<ElementHandle> {
-    ElementHandle::find_by_accessible_label(&app.window, label).collect()
+    let want = label.replace('\u{a0}', " ");
+    use i_slint_backend_testing::ElementRoot;
+    app.window
+        .root_element()
+        .query_descendants()
+        .match_predicate(move |e| {
+            e.accessible_label()
+                .is_some_and(|l| l.replace('\u{a0}', " ") == want)
+        })
+        .find_all()
 }
 
 /// The one element labelled `label` (the test fails when there are none or several).

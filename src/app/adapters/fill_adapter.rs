@@ -33,7 +33,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
     a.set_water_temp(f.water_temp.into());
     a.set_result(f.result.into());
     a.set_unit(f.unit.into());
-    a.set_detail(f.detail.into());
-    a.set_use_text(f.use_text.into());
-    a.set_warning(f.warning.into());
+    a.set_detail(vm::keep_units_together(&f.detail).into());
+    a.set_use_text(vm::keep_units_together(&f.use_text).into());
+    a.set_warning(vm::keep_units_together(&f.warning).into());
 }

@@ -69,8 +69,8 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
             .into_iter()
             .map(|r| LockerRow {
                 id: r.id,
-                name: r.name.into(),
-                detail: r.detail.into(),
+                name: vm::keep_units_together(&r.name).into(),
+                detail: vm::keep_units_together(&r.detail).into(),
                 note: r.note.into(),
                 mine: r.mine,
             })
@@ -80,18 +80,18 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
         vm::preset_rows()
             .into_iter()
             .map(|(name, detail)| PresetRow {
-                name: name.into(),
-                detail: detail.into(),
+                name: vm::keep_units_together(&name).into(),
+                detail: vm::keep_units_together(&detail).into(),
             })
             .collect(),
     ));
-    a.set_undo_text(vm::undo_text(s).into());
+    a.set_undo_text(vm::keep_units_together(&vm::undo_text(s)).into());
     a.set_exchange_hint(s.exchange.hint().into());
     a.set_exchange_text(s.exchange.message.clone().into());
 
     let e = ui.global::<LockerEditAdapter>();
     if let Some(d) = vm::locker_edit(s) {
-        e.set_title(d.title.into());
+        e.set_title(vm::keep_units_together(&d.title).into());
         e.set_name(d.name.into());
         e.set_name_warning(d.name_warning.into());
         e.set_count(d.count);
@@ -102,6 +102,6 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
         e.set_second_value(d.second_value.into());
         e.set_material_index(d.material_index);
         e.set_note(d.note.into());
-        e.set_summary(d.summary.into());
+        e.set_summary(vm::keep_units_together(&d.summary).into());
     }
 }

@@ -54,7 +54,7 @@ pub fn connect(ui: &AppWindow, s: &Shared) {
 pub fn refresh(ui: &AppWindow, s: &Session) {
     ui.global::<Nav>().set_page(page(s.page()));
     ui.global::<StatusAdapter>()
-        .set_message(vm::status(s).into());
+        .set_message(vm::keep_units_together(&vm::status(s)).into());
     ui.global::<StatusAdapter>()
         .set_demo_note(vm::demo_note(s).into());
 }

@@ -53,7 +53,7 @@ fn rows(rows: Vec<vm::PickRowVm>) -> slint::ModelRc<PickRow> {
     model(
         rows.into_iter()
             .map(|r| PickRow {
-                title: r.title.into(),
+                title: vm::keep_units_together(&r.title).into(),
                 detail: vm::keep_units_together(&r.detail).into(),
                 mine: r.mine,
                 count: r.count.into(),
@@ -70,7 +70,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
     a.set_custom_open(p.custom.is_some());
     a.set_stage_mode(p.stage_mode);
     a.set_mix_open(p.mix_open);
-    a.set_title(p.title.into());
+    a.set_title(vm::keep_units_together(&p.title).into());
     if p.cylinders_open {
         a.set_locker(rows(p.locker));
         a.set_singles(rows(p.singles));
@@ -95,7 +95,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
         a.set_o2(o2);
         a.set_he(he);
         a.set_mix_text(text.into());
-        a.set_mix_reason(reason.into());
+        a.set_mix_reason(vm::keep_units_together(&reason).into());
         a.set_mix_rows(model(
             p.mix_rows
                 .into_iter()

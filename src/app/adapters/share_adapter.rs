@@ -11,9 +11,7 @@ use super::super::qr_image::qr_image;
 use super::super::session::Session;
 use super::super::ui::{AppWindow, PlanQrAdapter};
 use super::{Shared, act, handles};
-
-/// What the caption says over a code.
-const CAPTION: &str = "Point a phone camera at the code: it reads the plan as plain text, with no app and no network.";
+use crate::i18n::tr;
 
 pub fn connect(ui: &AppWindow, s: &Shared) {
     let a = ui.global::<PlanQrAdapter>();
@@ -47,12 +45,15 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
     match qr_image(&text) {
         Some(image) => {
             a.set_code(image);
-            a.set_caption(CAPTION.into());
+            a.set_caption(
+                tr("Point a phone camera at the code: it reads the plan as plain text, with no app and no network.")
+                    .into(),
+            );
         }
         None => {
             a.set_code(slint::Image::default());
             a.set_caption(
-                "The plan is too long for one QR code. Copy it as text or save the team card instead."
+                tr("The plan is too long for one QR code. Copy it as text or save the team card instead.")
                     .into(),
             );
         }

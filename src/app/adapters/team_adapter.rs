@@ -97,11 +97,11 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
     a.set_step_options(strings(p.step_options));
     a.set_step_index(p.step_index);
     a.set_depth_text(p.depth_text.into());
-    a.set_water_text(p.water_text.into());
+    a.set_water_text(vm::keep_units_together(&p.water_text).into());
     a.set_water_temp(p.water_temp.into());
     a.set_settings_summary(vm::keep_units_together(&p.settings_summary).into());
-    a.set_undo_text(p.undo.into());
+    a.set_undo_text(vm::keep_units_together(&p.undo).into());
     a.set_can_add(p.can_add);
     a.set_can_remove(p.can_remove);
-    a.set_summary(p.summary.into());
+    a.set_summary(vm::keep_units_together(&p.summary).into());
 }

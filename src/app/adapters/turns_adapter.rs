@@ -38,8 +38,13 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
     ));
     a.set_rule_text(vm::keep_units_together(&vm::rule_text(s)).into());
     a.set_margin_text(vm::keep_units_together(&vm::margin_text(s)).into());
-    a.set_warnings(strings(vm::warnings(s)));
-    a.set_first_text(vm::first_text(s).into());
+    a.set_warnings(strings(
+        vm::warnings(s)
+            .iter()
+            .map(|w| vm::keep_units_together(w))
+            .collect(),
+    ));
+    a.set_first_text(vm::keep_units_together(&vm::first_text(s)).into());
     let blocking = vm::starts_blocking(s).unwrap_or_default();
     a.set_error(blocking.clone().into());
     let b = ui.global::<BuddyAdapter>();
@@ -54,7 +59,7 @@ pub fn refresh(ui: &AppWindow, s: &Session) {
                 unit: r.unit.clone().into(),
                 controlling: r.controlling,
                 stage: vm::keep_units_together(&r.stage_short).into(),
-                read: r.read_short.clone().into(),
+                read: vm::keep_units_together(&r.read_short).into(),
                 info: vm::keep_units_together(&r.buddy_info()).into(),
             })
             .collect(),

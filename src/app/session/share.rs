@@ -22,7 +22,8 @@ impl Session {
         let made = chrono::Local
             .timestamp_opt(self.now, 0)
             .single()
-            .map(|t| t.format("%-d %b %Y %H:%M").to_string());
+            // ISO 8601 date: the same in every language (no month names to translate).
+            .map(|t| t.format("%Y-%m-%d %H:%M").to_string());
         let reads = PlanReads {
             read_at: (0..n).map(|i| self.read_text(i)).collect(),
             stage_read: (0..n)

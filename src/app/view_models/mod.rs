@@ -217,31 +217,53 @@ pub fn error_for_people(names: &[String], e: &crate::plan::InputError) -> String
         }
         field = tail.trim_start_matches('.');
     }
-    let words: Vec<String> = field
-        .split('.')
-        .filter(|p| !p.is_empty())
-        .map(|p| match p {
-            "water_l" => tr("water capacity"),
-            "working_bar" => tr("working pressure"),
-            "rated_cuft" => tr("rated volume"),
-            "rated_psi" => tr("rated pressure"),
-            "sac" => tr("breathing rate"),
-            "gauge_step" => tr("gauge step"),
-            "step" => tr("graduation"),
-            "water_temp" => tr("water temperature"),
-            "o2" => tr("oxygen"),
-            "he" => tr("helium"),
-            "count" => tr("number of cylinders"),
-            other => other.to_string(),
-        })
-        .collect();
-    let what = words.join(" ");
+    let what = field_words(field);
     match (who.is_empty(), what.is_empty()) {
         (true, true) => first_upper(&e.message),
         (true, false) => tr_with("{0}: {1}", &[&first_upper(&what), &e.message]),
         (false, true) => tr_with("{0}: {1}", &[&who, &e.message]),
         (false, false) => tr_with("{0}, {1}: {2}", &[&who, &what, &e.message]),
     }
+}
+
+/// A field path (`stage.cylinders.water_l`) in the reader's words: the last part named,
+/// each part before it wrapped around it by its own message ("stage {0}"), so every
+/// language puts the words in its own order.
+fn field_words(field: &str) -> String {
+    let mut parts: Vec<&str> = field.split('.').filter(|p| !p.is_empty()).collect();
+    let Some(leaf) = parts.pop() else {
+        return String::new();
+    };
+    let mut what = match leaf {
+        "water_l" => tr("water capacity"),
+        "working_bar" => tr("working pressure"),
+        "rated_cuft" => tr("rated volume"),
+        "rated_psi" => tr("rated pressure"),
+        "sac" => tr("breathing rate"),
+        "gauge_step" => tr("gauge step"),
+        "step" => tr("graduation"),
+        "water_temp" => tr("water temperature"),
+        "o2" => tr("oxygen"),
+        "he" => tr("helium"),
+        "count" => tr("number of cylinders"),
+        "start" => tr("start"),
+        "name" => tr("name"),
+        "stage" => tr("stage"),
+        "cylinders" => tr("cylinders"),
+        "mix" => tr("mix"),
+        "depth" => tr("depth"),
+        "locker" => tr("locker"),
+        other => other.to_string(),
+    };
+    for part in parts.iter().rev() {
+        what = match *part {
+            "stage" => tr_with("stage {0}", &[&what]),
+            "cylinders" => tr_with("cylinders {0}", &[&what]),
+            "mix" => tr_with("mix {0}", &[&what]),
+            other => format!("{other} {what}"),
+        };
+    }
+    what
 }
 
 #[cfg(test)]

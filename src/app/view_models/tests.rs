@@ -88,3 +88,20 @@ fn locker_names_made_from_sizes_are_shown_in_the_readers_language() {
     );
     assert!(names.iter().any(|n| n == "Bram's doubles"), "{names:?}");
 }
+
+#[test]
+fn field_names_in_errors_are_in_the_readers_language() {
+    use crate::i18n::{Language, LanguageScope};
+    let names = vec!["Ines".to_string(), "Bram".to_string()];
+    let e = crate::plan::InputError::new("divers[1].stage.start", "x");
+    let _de = LanguageScope::new(Language::German);
+    assert_eq!(
+        error_for_people(&names, &e),
+        "Bram, Startdruck der Stage: x"
+    );
+    let e = crate::plan::InputError::new("divers[0].cylinders.water_l", "x");
+    assert_eq!(
+        error_for_people(&names, &e),
+        "Ines, Wasservolumen der Flaschen: x"
+    );
+}
