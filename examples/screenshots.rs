@@ -160,19 +160,40 @@ fn main() {
         });
     });
 
-    // A small phone (360 × 640) with the system text size at 1.3.
+    // A small phone (360 × 640) with the system text size at 1.3: a window opened at that
+    // size (a window resized from 412 px would be drawn before its layout settled), with
+    // every start read and Bram on his psi gauge, as above.
+    let data = tempfile::tempdir().unwrap();
+    let clock = turnsheet::app::clock::ManualClock::at(1_796_463_720);
+    let app = App::with_clock(data.path(), std::rc::Rc::new(clock)).expect("app");
     app.set_font_scale(1.3);
     app.window
         .window()
         .set_size(slint::LogicalSize::new(360.0, 640.0));
+    app.window.show().unwrap();
+    let shot = |name: &str, f: &dyn Fn(&mut turnsheet::app::session::Session)| {
+        f(&mut app.session.borrow_mut());
+        refresh_all(&app.window, &app.session.borrow());
+        save_png(&app, &out.join(format!("{name}.png")));
+    };
     shot("20-small-team", &|s| {
-        s.back();
-        s.back();
-        s.set_units(turnsheet::plan::UnitSystem::Metric);
+        s.acknowledge_cautions();
+        s.set_gauge(1, turnsheet::app::session::GAUGES[2]);
+        s.open_entry(EntryTarget::Start(1));
+        for k in ["clear", "2", "9", "5", "0"] {
+            s.key(k);
+        }
+        s.entry_done();
+        for i in 0..s.team.len() {
+            s.confirm_start(i);
+            if s.team.input().divers[i].stage.is_some() {
+                s.team.mark_stage_read(i, s.now());
+            }
+        }
     });
     shot("21-small-keypad", &|s| {
         s.open_entry(EntryTarget::Start(0));
-        for k in ["2", "1", "0"] {
+        for k in ["clear", "2", "1", "0"] {
             s.key(k);
         }
     });

@@ -451,6 +451,39 @@ fn chart_command_prints_every_pair() {
 }
 
 #[test]
+fn a_team_chart_refuses_the_options_of_a_two_set_chart() {
+    // The team file holds the rule, gases and gauges: --rule halves, -o or --format svg
+    // beside it would be quietly ignored, and the diver would read the wrong chart.
+    let dir = tempfile::tempdir().unwrap();
+    let svg = dir.path().join("chart.svg");
+    for extra in [
+        vec!["--rule", "halves"],
+        vec!["--format", "svg"],
+        vec!["-o", svg.to_str().unwrap()],
+        vec!["--units", "psi"],
+        vec!["--temp", "8"],
+    ] {
+        let out = bin()
+            .arg("chart")
+            .arg(demo_path())
+            .args(&extra)
+            .output()
+            .unwrap();
+        let err = String::from_utf8_lossy(&out.stderr);
+        assert_eq!(out.status.code(), Some(2), "{extra:?}: {err}");
+        assert!(out.stdout.is_empty(), "{extra:?}");
+        let named = if extra[0] == "-o" {
+            "--output"
+        } else {
+            extra[0]
+        };
+        assert!(err.contains(named), "{extra:?}: {err}");
+        assert!(err.contains("--mine"), "{err}");
+    }
+    assert!(!svg.exists(), "nothing is written");
+}
+
+#[test]
 fn hand_content_is_the_pencil_sum() {
     // Common practice: 12 L of water at 232 bar holds 12 × 232 = 2784 L by hand.
     let v = gas_232("12");

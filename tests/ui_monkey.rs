@@ -11,6 +11,7 @@
 //! "N actions, M checks, 0 violations"; on a violation, the seed and the shortest list of
 //! actions that shows it.
 
+mod layout_check;
 mod monkey;
 
 use monkey::{Config, Team, run_all};

@@ -367,3 +367,52 @@ fn walk(language: Language, light: bool) -> Vec<String> {
     all.retain(|p| unique.insert(p.clone()));
     all
 }
+
+/// On a common large phone (412 × 915, text at 1.0) the Team page opens with the dive's
+/// settings unfolded, so it is the longest the page gets: in every language its last
+/// control can be scrolled to, and every text of the main pages reads whole.
+#[test]
+fn every_language_reaches_the_end_of_the_team_page_on_a_large_phone() {
+    software_backend();
+    let mut found = Vec::new();
+    for language in Language::ALL {
+        let dir = tempfile::tempdir().unwrap();
+        let app = App::new(dir.path()).unwrap();
+        app.set_system_language(language);
+        app.window
+            .window()
+            .set_size(slint::LogicalSize::new(412.0, 915.0));
+        app.window.show().unwrap();
+        let code = language.code();
+        let mut state = |name: &str, f: &dyn Fn(&mut Session)| {
+            f(&mut app.session.borrow_mut());
+            refresh_all(&app.window, &app.session.borrow());
+            found.extend(layout_check::problems(
+                app.window.window(),
+                &format!("{code}-412x915-{name}"),
+            ));
+        };
+        state("team", &|s| s.acknowledge_cautions());
+        state("team-read", &|s| {
+            for i in 0..s.team.len() {
+                s.confirm_start(i);
+            }
+        });
+        state("turns", &|s| s.go(Screen::Turns));
+        state("chart", &|s| s.go(Screen::Chart));
+        state("fill", &|s| {
+            s.back();
+            s.back();
+            s.go(Screen::Fill);
+        });
+        state("settings", &|s| {
+            s.back();
+            s.go(Screen::Settings);
+        });
+        state("locker", &|s| {
+            s.back();
+            s.go(Screen::Locker);
+        });
+    }
+    expect_none(found);
+}

@@ -2,7 +2,7 @@
 
 use crate::formats::team_file::CylindersFile;
 use crate::i18n::{tr, tr_with};
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 use crate::plan::validate_cylinders;
 use crate::plan::{CylinderSet, CylinderSpec, UnitSystem};
 use crate::plan::{Material, Preset};

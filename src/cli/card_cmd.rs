@@ -5,7 +5,7 @@ use std::path::{Path, PathBuf};
 
 use crate::formats::card_svg::{CardHeading, card_svg};
 use crate::i18n::{Language, LanguageScope, tr_with};
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 use crate::plan::team_charts;
 
 use super::CliError;

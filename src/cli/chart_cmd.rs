@@ -4,7 +4,7 @@ use std::path::Path;
 
 use serde::Serialize;
 
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 use crate::plan::shown;
 use crate::plan::team_charts;
 

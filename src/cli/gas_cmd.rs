@@ -2,10 +2,10 @@
 
 use serde::Serialize;
 
-use crate::plan::error::{InputError, check_range};
 use crate::plan::pressure_after_temperature_change;
 use crate::plan::shown;
 use crate::plan::{ContentModel, HandModel, Mix, Pressure, RealGasModel, Temperature, Volume};
+use crate::plan::{InputError, check_range};
 
 use super::PressureUnit;
 

@@ -7,8 +7,8 @@ use serde::Serialize;
 
 use crate::formats::cylinder_spec::{SPEC_FORM, format_cylinder_spec, parse_cylinder_spec};
 use crate::formats::team_file::CylindersFile;
+use crate::plan::InputError;
 use crate::plan::Material;
-use crate::plan::error::InputError;
 use crate::plan::text;
 use crate::storage::Store;
 use crate::storage::exchange::sets_word;

@@ -3,7 +3,7 @@
 use std::path::Path;
 
 use crate::formats::cylinder_spec::format_cylinder_spec;
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 use crate::storage::Store;
 use crate::storage::exchange::{export_locker, sets_word};
 use crate::storage::locker::{LockerEntry, LockerFile, read_locker_file};

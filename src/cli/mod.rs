@@ -17,7 +17,7 @@ use std::io::Write;
 
 use clap::{Parser, Subcommand};
 
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 
 /// Exit code for bad input.
 pub const EXIT_BAD_INPUT: i32 = 2;
@@ -157,9 +157,16 @@ pub fn run(command: Command) -> i32 {
             json,
             pair,
         } => match (team, &pair.mine, &pair.buddy) {
-            (Some(team), None, None) => {
-                chart_cmd::run(&team, above, below, json).map_err(CliError::from)
-            }
+            (Some(team), None, None) => match pair.given_for_two_sets().as_slice() {
+                [] => chart_cmd::run(&team, above, below, json).map_err(CliError::from),
+                given => Err(CliError::Input(InputError::new(
+                    given[0],
+                    format!(
+                        "only a chart of two sets (--mine and --buddy) reads {}; a team file's chart takes its rule, gases, water and gauges from the file and prints to standard output (use --above, --below, --json, or `card --charts` for paper)",
+                        given.join(", ")
+                    ),
+                ))),
+            },
             (None, Some(_), Some(_)) => pair_chart_cmd::run(&pair),
             _ => Err(CliError::Input(InputError::new(
                 "chart",

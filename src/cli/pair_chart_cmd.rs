@@ -6,13 +6,13 @@ use std::path::PathBuf;
 
 use crate::formats::card_svg::charts_svg;
 use crate::formats::cylinder_spec::parse_cylinder_spec;
-use crate::plan::error::{InputError, check_range};
 use crate::plan::round_down_to_step;
 use crate::plan::shown;
 use crate::plan::validate_step;
 use crate::plan::{
     CylinderSet, DiverInput, Mix, Rule, SetLabels, TeamInput, Temperature, UnitSystem, Water,
 };
+use crate::plan::{InputError, check_range};
 use crate::plan::{PairChart, pair_chart};
 use crate::storage::Store;
 
@@ -70,6 +70,31 @@ pub struct PairArgs {
     /// Write here instead of standard output.
     #[arg(short = 'o', long = "output")]
     pub output: Option<PathBuf>,
+}
+
+impl PairArgs {
+    /// The options given that only a chart of two sets reads (a team file brings its own
+    /// rule, gases, water and gauges), by their command-line names.
+    pub fn given_for_two_sets(&self) -> Vec<&'static str> {
+        let mut given = Vec::new();
+        let mut note = |is: bool, name: &'static str| {
+            if is {
+                given.push(name);
+            }
+        };
+        note(self.rule != "thirds", "--rule");
+        note(self.step.is_some(), "--step");
+        note(self.from.is_some(), "--from");
+        note(self.to.is_some(), "--to");
+        note(self.every.is_some(), "--every");
+        note(self.unit != PressureUnit::Bar, "--units");
+        note(self.o2 != 21.0, "--o2");
+        note(self.he != 0.0, "--he");
+        note(self.temp != 20.0, "--temp");
+        note(self.format != ChartFormat::Text, "--format");
+        note(self.output.is_some(), "--output");
+        given
+    }
 }
 
 /// A set from a SPEC or, failing that, a locker set of that name (with the name).

@@ -3,7 +3,7 @@
 use std::path::Path;
 
 use crate::formats::team_file::{TeamFile, check_set_label};
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 use crate::plan::{SetLabels, TeamInput, TeamPlan, plan_team};
 use crate::storage::atomic::{MAX_FILE_BYTES, TextReadError, read_text};
 use crate::storage::team_state::{TEAM_SCHEMA, TeamState};

@@ -12,7 +12,7 @@
 //! planning core's (`validate_cylinders`), so a set that parses here also plans.
 //! No I/O here.
 
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 use crate::plan::{CylinderSet, CylinderSpec, UnitSystem};
 use crate::plan::{MAX_CYLINDERS, validate_cylinders};
 

@@ -45,8 +45,7 @@ mod allowance;
 mod catalogue;
 mod chart;
 mod cylinders;
-/// Input errors that name the field.
-pub mod error;
+mod error;
 mod gas_model;
 mod gauge;
 mod hand_check;
@@ -89,7 +88,7 @@ pub use gas_model::{
 };
 pub use real_gas::RealGasModel;
 // The team's inputs, their limits and the checks that name the field.
-pub use error::InputError;
+pub use error::{InputError, check_range};
 pub use rule::Rule;
 pub use team::{
     DiverInput, LOW_FILL_RATIO, MAX_CYLINDERS, MAX_DIVERS, MAX_FILL_RATIO, MAX_START_BAR,

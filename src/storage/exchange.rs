@@ -8,7 +8,7 @@ use super::atomic::write_json;
 use super::locker::{LockerFile, read_locker_file};
 use super::locker_merge::MergeReport;
 use crate::i18n::{tr_n, tr_with};
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 
 /// The name the app gives an exported locker.
 pub const EXPORT_NAME: &str = "turnsheet-locker.json";

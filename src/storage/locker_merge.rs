@@ -9,7 +9,7 @@ use super::locker::{
     LockerEntry, LockerFile, MAX_LOCKER_SETS, MAX_SET_NAME_CHARS, numbered_name, same_name,
 };
 use crate::i18n::{tr, tr_with};
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 use crate::plan::text;
 
 /// `existing` is `name` itself or the name an earlier import gave it (`NAME (n)`), so that

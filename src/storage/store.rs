@@ -9,7 +9,7 @@ use super::locker::LockerFile;
 use super::settings::{FoundSettings, SETTINGS_SCHEMA, Settings};
 use super::team_state::{TEAM_SCHEMA, TeamState};
 use crate::i18n::tr_with;
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 
 mod locker_io;
 pub use locker_io::{LockerRead, LockerState};

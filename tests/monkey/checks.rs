@@ -127,7 +127,26 @@ pub fn check(robot: &Robot, seen: &[Seen]) -> Result<usize, String> {
     n += check_chart(seen, &t)?;
     n += check_cards(robot, &t)?;
     n += check_inside(robot, seen)?;
+    n += check_layout(robot)?;
     Ok(n)
+}
+
+/// The whole-layout check (`layout_check`: every text readable whole, in its box, not
+/// cut, not over another, reachable by scrolling) on every `LAYOUT_EVERY`th action: it
+/// walks every item of the window, so it runs less often than the others.
+pub const LAYOUT_EVERY: usize = 10;
+
+fn check_layout(robot: &Robot) -> Result<usize, String> {
+    let k = robot.checks_run.get() + 1;
+    robot.checks_run.set(k);
+    if !k.is_multiple_of(LAYOUT_EVERY) {
+        return Ok(0);
+    }
+    let found = crate::layout_check::problems(robot.app.window.window(), "robot");
+    match found.first() {
+        None => Ok(1),
+        Some(first) => Err(format!("{first} ({} layout problems in all)", found.len())),
+    }
 }
 
 /// A boxed chart cell only from two readings of this dive, and equal to the core's turn

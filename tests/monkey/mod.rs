@@ -103,6 +103,8 @@ pub struct Robot {
     pub size: (f32, f32),
     /// Cards in the data directory at the last check.
     pub cards_seen: std::cell::Cell<usize>,
+    /// Checks run so far (the whole-layout check runs on every `LAYOUT_EVERY`th).
+    pub checks_run: std::cell::Cell<usize>,
 }
 
 impl Robot {
@@ -125,6 +127,7 @@ impl Robot {
             dir,
             size: config.size,
             cards_seen: std::cell::Cell::new(0),
+            checks_run: std::cell::Cell::new(0),
         }
     }
 

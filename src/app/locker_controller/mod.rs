@@ -3,7 +3,7 @@
 use crate::formats::team_file::CylindersFile;
 use crate::i18n::{tr, tr_with};
 use crate::plan::CylinderSet;
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 use crate::plan::text;
 use crate::plan::{Material, Preset};
 use crate::storage::locker::{

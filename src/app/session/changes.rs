@@ -5,7 +5,7 @@
 //! diver. A rule that does not suit an overhead dive asks first.
 
 use crate::i18n::tr_with;
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 use crate::plan::{Rule, TeamPlan};
 use crate::storage::team_state::TeamState;
 

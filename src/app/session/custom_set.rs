@@ -3,7 +3,7 @@
 //! rating (cu ft + psi), typed on our own keypad. The picker holds it while it is open.
 
 use crate::app::locker_draft::Draft;
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 use crate::plan::{CylinderSet, CylinderSpec};
 
 use super::{Picker, Session};

@@ -8,7 +8,7 @@
 //! re-reads it too (`refresh_locker`).
 
 use crate::i18n::tr_with;
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 use crate::plan::{Material, presets};
 use crate::storage::locker_merge::merge_changes;
 use crate::storage::store::LockerError;

@@ -12,8 +12,8 @@
 //! - the screen's colours (`appearance.rs`).
 
 use crate::i18n::tr_with;
+use crate::plan::InputError;
 use crate::plan::UnitSystem;
-use crate::plan::error::InputError;
 use crate::storage::settings::Settings;
 use crate::storage::{LoadReport, Store};
 

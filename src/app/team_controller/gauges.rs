@@ -2,7 +2,7 @@
 //! today, and what changing a gauge does to it.
 
 use crate::app::readings::{Readings, Source, StartStatus};
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 use crate::plan::round_down_to_step;
 use crate::plan::{Gauge, Supply, Warning};
 

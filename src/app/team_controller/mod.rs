@@ -2,7 +2,7 @@
 //! the team invalid are refused with the core's error, and the plan stays as it was.
 
 use crate::formats::team_file::TeamFile;
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 use crate::plan::next_step;
 use crate::plan::round_down_to_step;
 use crate::plan::{

@@ -3,7 +3,7 @@
 
 use super::TeamController;
 use crate::i18n::{tr, tr_with};
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 use crate::plan::round_down_to_step;
 use crate::plan::{CylinderSet, DiverInput, Mix, Temperature};
 use crate::plan::{MAX_DIVERS, MIN_DIVERS};

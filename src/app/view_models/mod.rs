@@ -3,7 +3,7 @@
 //! up, start pressures and gas down, times down, the decimal separator). Adapters copy these texts into the Slint globals and do no arithmetic.
 //!
 //! `mod.rs` has the number helpers; the pages' view models are in `team.rs`,
-//! `turns.rs`, `tools.rs` (fill check, chart), `locker.rs` (locker),
+//! `turns.rs` (with `stage_drop.rs`), `tools.rs` (fill check, chart), `locker.rs` (locker),
 //! `pickers.rs` (cylinder and mix pickers),
 //! `settings.rs` and `keypad.rs`.
 
@@ -18,6 +18,7 @@ mod keypad;
 mod locker;
 mod pickers;
 mod settings;
+mod stage_drop;
 mod team;
 mod tools;
 mod turns;
@@ -26,6 +27,7 @@ pub use keypad::{KeypadVm, keypad};
 pub use locker::{LockerEditVm, LockerRowVm, locker_edit, locker_rows, preset_rows, undo_text};
 pub use pickers::{CustomVm, MixRowVm, PickRowVm, PickerVm, picker, picker_title};
 pub use settings::{SettingsVm, cautions, settings};
+pub use stage_drop::stage_text;
 pub use team::{
     DiverCardVm, GaugeChooserVm, TeamPageVm, demo_note, depth_label, diver_cards, gauge_chooser,
     status, team_page, team_summary, water_temp_text, water_text,
@@ -33,7 +35,7 @@ pub use team::{
 pub use tools::{ChartRowVm, ChartVm, FillVm, chart, fill};
 pub use turns::{
     TurnRowVm, buddy_heading, controllers, first_text, margin_text, pressure_unit, rule_head,
-    rule_text, stage_text, starts_blocking, turn_rows, warnings,
+    rule_text, starts_blocking, turn_rows, warnings,
 };
 
 /// Units that must stay on the line of their number.

@@ -11,7 +11,7 @@ use super::super::atomic::{
 use super::super::lock::{FileLock, LOCK_WAIT, lock_beside};
 use super::super::locker::{LOCKER_SCHEMA, LockerFile};
 use super::{LOCKER_FILE, LockerError, Store, unreadable};
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 
 /// What state the locker file was found in.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]

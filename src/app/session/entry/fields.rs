@@ -7,9 +7,9 @@ use crate::app::keypad::KeypadBuffer;
 use crate::app::readings::StartStatus;
 use crate::app::view_models as vm;
 use crate::i18n::{tr, tr_with};
-use crate::plan::error::{InputError, check_range};
 use crate::plan::shown;
 use crate::plan::validate_start;
+use crate::plan::{InputError, check_range};
 use crate::plan::{Pressure, PressureUnit, Volume};
 
 use super::super::Session;

@@ -7,7 +7,7 @@
 use crate::app::keypad::{KeypadBuffer, parse_value};
 use crate::app::view_models as vm;
 use crate::i18n::tr_with;
-use crate::plan::error::InputError;
+use crate::plan::InputError;
 use crate::plan::next_step;
 use crate::plan::shown;
 

@@ -5,7 +5,7 @@
 use crate::app::keypad::KeypadBuffer;
 use crate::app::view_models as vm;
 use crate::i18n::{tr, tr_with};
-use crate::plan::error::check_range;
+use crate::plan::check_range;
 use crate::plan::shown;
 
 use super::super::{Picker, Session};

@@ -5,7 +5,7 @@ use crate::app::keypad::KeypadBuffer;
 use crate::app::view_models as vm;
 use crate::i18n::tr;
 use crate::plan::WATER_TEMP_RANGE_C;
-use crate::plan::error::{InputError, check_range};
+use crate::plan::{InputError, check_range};
 use crate::plan::{Temperature, UnitSystem};
 
 use super::super::Session;
