@@ -357,6 +357,10 @@ fn walk(language: Language, light: bool) -> Vec<String> {
         s.set_units(turnsheet::plan::UnitSystem::Imperial);
         s.set_units(turnsheet::plan::UnitSystem::Metric);
     });
+    // His turn in psi has four digits: the Turns page still fits the width.
+    tall("turns with a psi diver (whole page)", &|s| {
+        s.go(Screen::Turns)
+    });
     tall("fill (whole page)", &|s| {
         s.back();
         s.go(Screen::Fill);

@@ -298,13 +298,15 @@ fn surroundings(item: &ItemRc, screen: Rect) -> (Rect, Vec<Rect>, Option<Rect>) 
             button = Some(Rect::of(&a));
         }
         if let Some(f) = a.downcast::<Flickable>() {
-            // The content scrolls: what lies inside the flickable's content can be reached.
+            // The content scrolls up and down: what lies inside the flickable's content
+            // can be reached. Not sideways: a page a diver must also pan left and right
+            // hides the ends of its lines, so only the flickable's own width counts.
             let f = f.as_pin_ref();
             let at = Rect::of(&a);
             let content = Rect {
-                x: at.x + f.content_x().0,
+                x: at.x,
                 y: at.y + f.content_y().0,
-                w: f.content_width().0.max(at.w),
+                w: at.w,
                 h: f.content_height().0.max(at.h),
             };
             return (content, clips, button);
