@@ -433,6 +433,11 @@ fn chart_command_prints_every_pair() {
     let text = String::from_utf8(out.stdout).unwrap();
     assert!(text.contains("keep the HIGHEST turn"), "{text}");
     assert_eq!(text.matches("rows: ").count(), 6, "3 divers make 6 charts");
+    // No possessive of a name ("Ines's start"): the start is read by a diver.
+    assert!(text.contains("rows: start read by Ines (bar)"), "{text}");
+    for name in ["Ines", "Bram", "Sol"] {
+        assert!(!text.contains(&format!("{name}'s")), "{text}");
+    }
     let out = bin()
         .args(["chart", "--json"])
         .arg(demo_path())

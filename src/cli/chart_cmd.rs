@@ -91,19 +91,13 @@ pub fn chart_text(
             buddy.mix.label()
         ));
         let (mu, bu) = (c.my_gauge.label(), c.buddy_gauge.label());
-        // "Me" (the pairing chart of two sets) reads "my start", not "Me's start".
-        let whose = |name: &str| {
-            if name == "Me" {
-                "my".to_string()
-            } else {
-                format!("{name}'s")
-            }
-        };
+        // No possessive of a name ("Me's start" for the chart of two sets): the start
+        // is "read by" a diver, the turn is "for" one.
         s.push_str(&format!(
-            "rows: {} start ({mu}); columns: {} start ({bu}); cells: {} turn ({mu}, on {} {mu})\n",
-            whose(&me.name),
-            whose(&buddy.name),
-            whose(&me.name),
+            "rows: start read by {} ({mu}); columns: start read by {} ({bu}); cells: turn for {} ({mu}, on {} {mu} marks)\n",
+            me.name,
+            buddy.name,
+            me.name,
             shown::num(c.my_gauge.step)
         ));
         s.push_str(&format!("{:>w$} │", format!("{mu}\\{bu}"), w = width + 2));
