@@ -265,7 +265,12 @@ fn locker_add_edit_delete_survive_a_restart() {
         press(&app, "Locker");
         assert_eq!(value(&app, "locker entry"), "Deep");
         press(&app, "edit Deep");
+        assert_eq!(value(&app, "cylinder count"), "2");
         press(&app, "fewer cylinders");
+        assert_eq!(value(&app, "cylinder count"), "1");
+        // One cylinder is the fewest: the step down does nothing more.
+        press(&app, "fewer cylinders");
+        assert_eq!(value(&app, "cylinder count"), "1");
         press(&app, "Save");
         // A second set, then delete it with undo.
         press(&app, "copy Single aluminium 40 cu ft 3000 psi");
