@@ -195,7 +195,9 @@ fn update(used: &BTreeMap<Message, BTreeSet<String>>) {
     write_entries(&mut pot, used, &BTreeMap::new());
     std::fs::write(lang_dir().join("turnsheet.pot"), pot).unwrap();
     for (l, text) in catalogues() {
-        let mut po = header(text);
+        // The header without the blank lines before the first message (each message
+        // brings its own), so an update adds none.
+        let mut po = header(text).trim_end().to_string() + "\n";
         write_entries(&mut po, used, &translations(text));
         let path = lang_dir()
             .join(l.code())

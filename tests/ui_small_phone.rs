@@ -403,6 +403,18 @@ fn every_language_reaches_the_end_of_the_team_page_on_a_large_phone() {
             }
         });
         state("turns", &|s| s.go(Screen::Turns));
+        // Imperial volumes, Bram on his psi gauge (four-digit turn and start).
+        state("turns-imperial-psi", &|s| {
+            s.back();
+            s.set_units(turnsheet::plan::UnitSystem::Imperial);
+            s.set_gauge(1, turnsheet::app::session::GAUGES[2]);
+            s.open_entry(EntryTarget::Start(1));
+            for k in ["clear", "2", "9", "5", "0"] {
+                s.key(k);
+            }
+            s.entry_done();
+            s.go(Screen::Turns);
+        });
         state("chart", &|s| s.go(Screen::Chart));
         state("fill", &|s| {
             s.back();

@@ -200,9 +200,10 @@ pub fn capitalised(s: &str) -> String {
     first_upper(&s.to_lowercase())
 }
 
-/// A gauge as the card's button shows it: "bar · 10".
+/// A gauge with its graduation, each number with its unit: "bar, 10 bar steps" (the
+/// diver card's gauge button, the Turns page, the status after a change).
 pub fn gauge_text(g: Gauge) -> String {
-    format!("{} · {}", g.label(), shown::num(g.step))
+    tr_with("{0}, {1} {0} steps", &[&g.label(), &shown::num(g.step)])
 }
 
 /// An input error in words for a person: the diver's name and the field in plain words

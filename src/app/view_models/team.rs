@@ -69,7 +69,7 @@ pub struct DiverCardVm {
     /// The start on the diver's gauge, or "—" when nobody has read it.
     pub start: String,
     pub unit: String,
-    /// The diver's gauge: "bar · 10".
+    /// The diver's gauge: "bar, 10 bar steps".
     pub gauge: String,
     /// What the start is worth: not read, entered earlier (check), predicted; empty when
     /// it was read today.
@@ -262,7 +262,7 @@ pub fn gauge_chooser(s: &Session) -> Option<GaugeChooserVm> {
             .iter()
             .map(|g| {
                 (
-                    tr_with("{0}, {1} {0} steps", &[&g.label(), &shown::num(g.step)]),
+                    super::gauge_text(*g),
                     tr_with("gauge {0} {1}", &[&g.label(), &shown::num(g.step)]),
                     *g == now,
                 )
