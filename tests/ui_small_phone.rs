@@ -310,6 +310,13 @@ fn walk(language: Language, light: bool) -> Vec<String> {
     state("keypad-locker-name", true, &|s| {
         s.open_entry(EntryTarget::LockerName)
     });
+    // The longest name a set may have (40 characters), typed in wide letters: all of
+    // it stays on the keypad's line, the end being typed too.
+    state("keypad-long-name", true, &|s| {
+        for k in 0..40 {
+            s.key(if k % 9 == 8 { " " } else { "W" });
+        }
+    });
     // Leaving the changed set asks first.
     state("prompt-discard", false, &|s| {
         s.key("A");

@@ -193,7 +193,44 @@ fn check_cards(robot: &Robot, t: &Truth) -> Result<usize, String> {
             t.usable
         ));
     }
+    if count > seen {
+        return check_card_turns(&dir, t).map(|n| n + 1);
+    }
     Ok(1)
+}
+
+/// The card just written holds each diver's turn as the core plans it, on their gauge
+/// ("160 bar" as one line of the card).
+fn check_card_turns(dir: &std::path::Path, t: &Truth) -> Result<usize, String> {
+    let newest = std::fs::read_dir(dir)
+        .map_err(|e| e.to_string())?
+        .flatten()
+        .max_by_key(|e| e.metadata().and_then(|m| m.modified()).ok())
+        .ok_or("no card in the cards folder")?;
+    let svg = std::fs::read_to_string(newest.path()).map_err(|e| e.to_string())?;
+    let lines: Vec<String> = svg
+        .split("<text")
+        .skip(1)
+        .filter_map(|t| {
+            let body = &t[t.find('>')? + 1..];
+            Some(body[..body.find("</text>")?].replace('\u{a0}', " "))
+        })
+        .collect();
+    for d in &t.plan.divers {
+        let turn = format!(
+            "{} {}",
+            turnsheet::plan::shown::turn(d.turn_shown_value),
+            d.gauge.label()
+        );
+        if !lines.iter().any(|l| l.trim() == turn) {
+            return Err(format!(
+                "the card {:?} does not show the turn of {} as {turn:?}",
+                newest.file_name(),
+                d.name
+            ));
+        }
+    }
+    Ok(t.plan.divers.len())
 }
 
 /// No text or control past the left or right edge of the window.

@@ -48,6 +48,12 @@ pub enum Action {
     Scroll(f32),
     /// Time passes for animations and the tap guard (milliseconds).
     Wait(u64),
+    /// Keys pressed one after another on the open keypad, as a diver types what the
+    /// gauge reads: "clear", the digits, "done".
+    Type(String),
+    /// A screen reader's action on a control anywhere on the page, scrolled into view or
+    /// not (the robot saves cards this way, so that the card check has cards to read).
+    Reach(String),
 }
 
 #[derive(Default)]
@@ -55,6 +61,8 @@ pub struct Report {
     pub actions: usize,
     pub checks: usize,
     pub violations: usize,
+    /// Cards the robot had the app write (each one's turns checked against the core).
+    pub cards: usize,
     /// Milliseconds from an action to the redrawn window, when timed.
     pub frame_ms: Vec<f64>,
 }
@@ -221,6 +229,26 @@ impl Robot {
             Action::Wait(ms) => {
                 i_slint_backend_testing::mock_elapsed_time(Duration::from_millis(*ms));
             }
+            Action::Type(digits) => {
+                let keys = std::iter::once("clear".to_string())
+                    .chain(digits.chars().map(String::from))
+                    .chain(std::iter::once("done".to_string()));
+                for key in keys {
+                    if let Some(e) = self.find(&key) {
+                        e.invoke_accessible_default_action();
+                    }
+                    slint::platform::update_timers_and_animations();
+                }
+            }
+            Action::Reach(label) => {
+                let seen = self.look();
+                if let Some(e) = seen
+                    .iter()
+                    .find(|e| e.button && e.enabled && &e.label == label)
+                {
+                    e.handle.invoke_accessible_default_action();
+                }
+            }
         }
         slint::platform::update_timers_and_animations();
     }
@@ -241,6 +269,11 @@ impl Robot {
             }
         };
         if self.app.window.global::<KeypadAdapter>().get_open() {
+            // Now and then a whole reading, in bar or psi (a wrong unit is refused).
+            if rng.chance(30) {
+                let readings = ["180", "210", "230", "250", "285", "2400", "2950", "3000"];
+                return Action::Type(readings[rng.below(readings.len())].into());
+            }
             let r = rng.below(100);
             return match r {
                 0..=59 => Action::Press(format!("{}", rng.below(10))),
@@ -250,9 +283,30 @@ impl Robot {
                 _ => label(rng).map_or(Action::Back, Action::Press),
             };
         }
+        // On the Turns page, now and then the card is saved (from wherever the page is
+        // scrolled), so the card check has cards to read.
+        if seen.iter().any(|e| e.label == "save card") && rng.chance(25) {
+            return Action::Reach("save card".into());
+        }
+        // The locker's pages hold the robot long (each tap there opens more of them):
+        // it goes back from them more often than from the others.
+        let page = self
+            .app
+            .window
+            .global::<turnsheet::app::ui::Nav>()
+            .get_page();
+        if matches!(
+            page,
+            turnsheet::app::ui::Page::Locker | turnsheet::app::ui::Page::LockerEdit
+        ) && rng.chance(15)
+        {
+            return Action::Back;
+        }
         match rng.below(100) {
             0..=5 => Action::Back,
-            6..=11 => Action::Clock(
+            // The clock jumps less often than a diver reads three gauges, so the turns
+            // of a whole team are shown (and checked) as well as withheld.
+            6..=8 => Action::Clock(
                 [
                     60,
                     20 * 60,
@@ -261,22 +315,37 @@ impl Robot {
                     10 * 3600,
                 ][rng.below(5)],
             ),
-            12..=15 => Action::Scroll(if rng.chance(50) { -240.0 } else { 240.0 }),
+            9..=15 => Action::Scroll(if rng.chance(50) { -240.0 } else { 240.0 }),
             16..=19 => Action::Wait(rng.below(600) as u64),
             20..=29 => label(rng).map_or(Action::Back, Action::Tap),
-            30..=39 => {
-                // Reading a gauge is what a diver does most on the dock.
-                let reading: Vec<&String> = buttons
+            30..=31 if seen.iter().any(|e| e.label == "show turns") => {
+                // Then the turns are looked at (and, above, the card saved).
+                Action::Press("show turns".into())
+            }
+            32..=49 => {
+                // Reading a gauge is what a diver does most on the dock: any diver's,
+                // scrolled into view or not (half the time as a screen reader reaches it).
+                let reach = rng.chance(50);
+                let reading: Vec<&String> = seen
                     .iter()
+                    .filter(|e| e.button && e.enabled)
+                    .filter(|e| reach || buttons.iter().any(|b| b.label == e.label))
                     .map(|e| &e.label)
                     .filter(|l| {
-                        l.starts_with("confirm start of") || l.starts_with("start pressure of")
+                        l.starts_with("confirm start of")
+                            || l.starts_with("start pressure of")
+                            || l.starts_with("stage pressure of")
                     })
                     .collect();
                 if reading.is_empty() {
                     label(rng).map_or(Action::Back, Action::Press)
                 } else {
-                    Action::Press(reading[rng.below(reading.len())].clone())
+                    let l = reading[rng.below(reading.len())].clone();
+                    if reach {
+                        Action::Reach(l)
+                    } else {
+                        Action::Press(l)
+                    }
                 }
             }
             _ => label(rng).map_or(Action::Back, Action::Press),
@@ -377,6 +446,12 @@ pub fn run_all(configs: &[Config], seed: u64, total: usize) -> Report {
                 report.frame_ms.push(frame.get());
             }
             report.actions += 1;
+            if report.actions.is_multiple_of(10_000) {
+                println!(
+                    "progress: {} actions, {} checks, {} violations",
+                    report.actions, report.checks, report.violations
+                );
+            }
             let violation = match r {
                 Ok(Ok(n)) => {
                     report.checks += n;
@@ -396,13 +471,14 @@ pub fn run_all(configs: &[Config], seed: u64, total: usize) -> Report {
                 break;
             }
         }
+        report.cards += robot.cards_seen.get();
         if timed {
             print_times(&format!("{config:?}"), &report.frame_ms[timed_from..]);
         }
     }
     println!(
-        "{} actions, {} checks, {} violations",
-        report.actions, report.checks, report.violations
+        "{} actions, {} checks, {} violations; {} cards written and read back",
+        report.actions, report.checks, report.violations, report.cards
     );
     report
 }
