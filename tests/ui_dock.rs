@@ -455,3 +455,63 @@ fn every_plan_change_says_what_it_did_and_undoes() {
         );
     }
 }
+
+/// The start box of a diver's card is as wide as the widest start on that gauge from
+/// the first, so the "−" and "+" beside it stay where the finger is when a start is
+/// typed, cleared or stepped (a small phone, text at 1.3, bar and psi).
+#[test]
+fn the_start_steps_never_move_as_a_start_is_typed() {
+    let dir = tempfile::tempdir().unwrap();
+    let clock = ManualClock::at(LATE);
+    // As narrow as a small phone, tall enough that both cards are on screen.
+    let app = open_at(dir.path(), &clock, 360.0, 2400.0);
+    app.set_font_scale(1.3);
+    // A new team: every start empty. Me reads bar, Buddy psi.
+    {
+        let mut s = app.session.borrow_mut();
+        s.new_team();
+        s.set_gauge(1, turnsheet::app::session::GAUGES[2]);
+    }
+    turnsheet::app::adapters::refresh_all(&app.window, &app.session.borrow());
+    let at = |name: &str| -> Vec<(f32, f32)> {
+        [
+            format!("start minus one step for {name}"),
+            format!("start plus one step for {name}"),
+        ]
+        .iter()
+        .map(|l| {
+            let e = find(&app, l);
+            (e.absolute_position().x, e.size().width)
+        })
+        .collect()
+    };
+    let names = app.session.borrow().team.plan().names();
+    assert_eq!(names.len(), 2);
+    let values = [["232", "9", "50"], ["2950", "500", "3000"]];
+    for (name, values) in names.iter().zip(values) {
+        let before = at(name);
+        for v in values {
+            let mut s = app.session.borrow_mut();
+            let i = s
+                .team
+                .plan()
+                .names()
+                .iter()
+                .position(|x| x == name)
+                .unwrap();
+            s.open_entry(turnsheet::app::session::EntryTarget::Start(i));
+            s.key("clear");
+            for c in v.chars() {
+                s.key(&c.to_string());
+            }
+            s.entry_done();
+            drop(s);
+            turnsheet::app::adapters::refresh_all(&app.window, &app.session.borrow());
+            assert_eq!(at(name), before, "{name} with start {v:?}");
+            assert_eq!(
+                value(&app, &format!("start pressure of {name}")).is_empty(),
+                false
+            );
+        }
+    }
+}

@@ -34,7 +34,8 @@ pub fn keypad(s: &Session) -> Option<KeypadVm> {
         title: e.title().to_string(),
         display: e.buffer().text().to_string(),
         unit: e.unit().to_string(),
-        reason: e.reason().to_string(),
+        // A sentence on its own line: it starts with a capital ("⚠ Enter …").
+        reason: crate::plan::text::first_upper(e.reason()),
         hint: e.hint().unwrap_or_default().to_string(),
         warning: entry_warnings(s, e.target()).join(" "),
         selected: e.buffer().is_selected(),
