@@ -106,29 +106,23 @@ fn an_overfill_is_named_on_the_keypad_the_pages_the_card_and_by_the_cli() {
     // pressure: an overfill by the core's rule (more than 10 % over, common practice).
     press(&app, "start pressure of Ines");
     type_keys(&app, "300");
-    let ines_warnings = || {
+    // Ines's warnings from the core, in full or in brief.
+    let ines_warnings_as = |words: fn(&turnsheet::plan::Warning) -> String| {
         let s = app.session.borrow();
         let plan = plan_team(s.team.input()).unwrap();
         plan.warnings
             .iter()
             .filter(|w| w.diver() == Some(0))
-            .map(|w| w.detail())
+            .map(words)
             .collect::<Vec<_>>()
     };
+    let ines_warnings = || ines_warnings_as(|w| w.detail());
     let expected = ines_warnings();
     assert_eq!(expected.len(), 1, "{expected:?}");
     assert!(expected[0].starts_with("Overfill"), "{expected:?}");
     // While typing: the keypad says it in brief (its message line keeps three lines'
     // room, so no key moves), and still lets the diver enter what the gauge reads.
-    let brief: Vec<String> = {
-        let s = app.session.borrow();
-        let plan = plan_team(s.team.input()).unwrap();
-        plan.warnings
-            .iter()
-            .filter(|w| w.diver() == Some(0))
-            .map(|w| w.brief())
-            .collect()
-    };
+    let brief = ines_warnings_as(|w| w.brief());
     assert_eq!(entry_warning(&app), brief[0]);
     assert!(brief[0].starts_with("Overfill") && brief[0].contains("232"));
     assert_eq!(value(&app, "entry problem"), "", "a warning, not a refusal");
