@@ -51,8 +51,9 @@ pub enum Action {
     /// Keys pressed one after another on the open keypad, as a diver types what the
     /// gauge reads: "clear", the digits, "done".
     Type(String),
-    /// A screen reader's action on a control anywhere on the page, scrolled into view or
-    /// not (the robot saves cards this way, so that the card check has cards to read).
+    /// A screen reader's action on a control the testing backend lists (those scrolled
+    /// into view), by its label rather than a finger: the robot saves cards this way, so
+    /// that the card check has cards to read.
     Reach(String),
 }
 
@@ -253,9 +254,17 @@ impl Robot {
         slint::platform::update_timers_and_animations();
     }
 
+    /// A control in the middle of the window, where the page scrolls (the header's and
+    /// the fixed bottom button's would not), else any.
     fn find_any(&self) -> Option<ElementHandle> {
         let seen = self.look();
-        self.buttons(&seen).first().map(|e| e.handle.clone())
+        let buttons = self.buttons(&seen);
+        let h = self.size.1;
+        buttons
+            .iter()
+            .find(|e| (0.3 * h..0.7 * h).contains(&(e.y + e.h / 2.0)))
+            .or(buttons.first())
+            .map(|e| e.handle.clone())
     }
 
     /// The next action, chosen from what is on screen (`seen`, after the last action).
@@ -323,8 +332,8 @@ impl Robot {
                 Action::Press("show turns".into())
             }
             32..=49 => {
-                // Reading a gauge is what a diver does most on the dock: any diver's,
-                // scrolled into view or not (half the time as a screen reader reaches it).
+                // Reading a gauge is what a diver does most on the dock: any diver's
+                // the backend lists (half the time as a screen reader reaches it).
                 let reach = rng.chance(50);
                 let reading: Vec<&String> = seen
                     .iter()
