@@ -12,6 +12,18 @@ use turnsheet::storage::atomic::kept_aside;
 use turnsheet::storage::settings::Settings;
 use turnsheet::storage::store::{LOCKER_FILE, SETTINGS_FILE, TEAM_FILE};
 
+/// `turnsheet locker list --json` on a data folder holding `bytes` as its locker.
+fn list_locker(bytes: &[u8]) -> (tempfile::TempDir, std::process::Output) {
+    let dir = tempfile::tempdir().unwrap();
+    std::fs::write(dir.path().join(LOCKER_FILE), bytes).unwrap();
+    let out = Command::new(env!("CARGO_BIN_EXE_turnsheet"))
+        .env("TURNSHEET_DATA_DIR", dir.path())
+        .args(["locker", "list", "--json"])
+        .output()
+        .unwrap();
+    (dir, out)
+}
+
 fn corpus(kind: &str) -> Vec<(String, Vec<u8>)> {
     let dir = PathBuf::from(env!("CARGO_MANIFEST_DIR"))
         .join("tests/data")
@@ -114,13 +126,7 @@ fn locker_files_are_kept_aside_byte_identical_and_the_locker_starts_empty() {
         if name == "negative-id.json" {
             // An id that is not a whole number does not make the locker unreadable: the
             // sets are numbered again, said once, and the file stays where it is.
-            let dir = tempfile::tempdir().unwrap();
-            std::fs::write(dir.path().join(LOCKER_FILE), bytes).unwrap();
-            let out = Command::new(env!("CARGO_BIN_EXE_turnsheet"))
-                .env("TURNSHEET_DATA_DIR", dir.path())
-                .args(["locker", "list", "--json"])
-                .output()
-                .unwrap();
+            let (dir, out) = list_locker(bytes);
             let err = String::from_utf8_lossy(&out.stderr);
             assert_eq!(out.status.code(), Some(0), "{name}: {err}");
             assert!(err.contains("numbered again"), "{name}: {err}");
@@ -130,13 +136,7 @@ fn locker_files_are_kept_aside_byte_identical_and_the_locker_starts_empty() {
             continue;
         }
         // Through the command line.
-        let dir = tempfile::tempdir().unwrap();
-        std::fs::write(dir.path().join(LOCKER_FILE), bytes).unwrap();
-        let out = Command::new(env!("CARGO_BIN_EXE_turnsheet"))
-            .env("TURNSHEET_DATA_DIR", dir.path())
-            .args(["locker", "list", "--json"])
-            .output()
-            .unwrap();
+        let (dir, out) = list_locker(bytes);
         let err = String::from_utf8_lossy(&out.stderr);
         // The locker could not be read this time: the list (empty) is printed, and the
         // exit code says so.
